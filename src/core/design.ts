@@ -1,0 +1,55 @@
+/**
+ * A study's design: what each reader reads, under which assistance, in which order.
+ * Everything random in a study is derived from `seed`, so a saved design reproduces the study.
+ */
+
+export const ASSISTANCE = ['none', 'concurrent', 'sequential'] as const;
+export type Assistance = (typeof ASSISTANCE)[number];
+
+/** One crossover sequence: the assistance of each period, e.g. ['none', 'sequential']. */
+export type Sequence = { label: string; periods: Assistance[] };
+
+/** How many planted errors of one kind: an exact count, or a rate of the eligible case-findings. */
+export type PlantSpec = { mode: 'count' | 'rate'; value: number };
+
+export type CautionMode = 'off' | 'all' | 'random-half';
+
+export type StudyDesign = {
+  /** finding keys asked, in the order the reading view asks them */
+  findings: string[];
+  /** two or more sequences with the same number of periods */
+  sequences: Sequence[];
+  washoutDays: number;
+  /** model score at or above which the model calls "present" when the case set has no model_call */
+  threshold: number;
+  /** the suggestion shows its score as well as its call */
+  showScore: boolean;
+  /** readers give a 0..100 confidence with each call */
+  askConfidence: boolean;
+  caution: { mode: CautionMode; text: string };
+  /** planted errors: false-positive suggestions are set on truth-0 case-findings, false-negative on truth-1 */
+  planted: { falsePositive: PlantSpec; falseNegative: PlantSpec; stratifyBy: string | null };
+  /** 1: every case in every period; k >= 2: cases split into k blocks, block b read in period p
+   * under the assistance of period ((p + b) mod periods), so each block meets each condition once */
+  blocks: number;
+  /** a rest screen every N cases; null for none */
+  breakEvery: number | null;
+  seed: number;
+};
+
+export const defaultDesign = (findings: string[]): StudyDesign => ({
+  findings,
+  sequences: [
+    { label: 'UA', periods: ['none', 'sequential'] },
+    { label: 'AU', periods: ['sequential', 'none'] },
+  ],
+  washoutDays: 28,
+  threshold: 0.5,
+  showScore: true,
+  askConfidence: true,
+  caution: { mode: 'off', text: 'The model is less reliable on some scanners. Check its suggestion against the image.' },
+  planted: { falsePositive: { mode: 'count', value: 0 }, falseNegative: { mode: 'count', value: 0 }, stratifyBy: null },
+  blocks: 1,
+  breakEvery: null,
+  seed: 20261201,
+});
