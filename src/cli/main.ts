@@ -1,2 +1,40 @@
-// Placeholder entry replaced by the CLI work; prints usage.
-console.log('usage: heed <analyze|check-cases|demo> ...');
+// The `heed` command: parse the verb, hand off to its module, map bad input to exit 2.
+import { CliError } from './cli-error';
+
+const USAGE = `usage:
+  heed analyze FILE [--json] [--seed N] [--boot N]   statistics of a reads.csv
+  heed check-cases PATH                              validate a case set (folder or zip)
+  heed demo [--out DIR]                              write the demo case set
+Heed is a research and training tool, not a medical device.`;
+
+type Verb = (args: string[]) => Promise<number>;
+
+const verbs: Record<string, () => Promise<Verb>> = {
+  analyze: async () => (await import('./analyze')).runAnalyze,
+  'check-cases': async () => (await import('./check-cases')).runCheckCases,
+  demo: async () => (await import('./demo')).runDemo,
+};
+
+const main = async (argv: string[]): Promise<number> => {
+  const [verb, ...rest] = argv;
+  if (verb === undefined || verb === '--help' || verb === '-h') {
+    console.log(USAGE);
+    return verb === undefined ? 2 : 0;
+  }
+  const load = verbs[verb];
+  if (!load) throw new CliError(`unknown command "${verb}"; try heed --help`);
+  return (await load())(rest);
+};
+
+main(process.argv.slice(2)).then(
+  (code) => { process.exitCode = code; },
+  (error: unknown) => {
+    if (error instanceof CliError) {
+      console.error(`heed: ${error.message}`);
+      process.exitCode = 2;
+    } else {
+      console.error(error);
+      process.exitCode = 1;
+    }
+  },
+);
