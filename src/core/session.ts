@@ -1,0 +1,108 @@
+/**
+ * The reading session of one reader in one period, as a pure state machine.
+ *
+ * The position is never stored: it is derived from the answers already committed, so a session
+ * resumes exactly at the first unanswered step after a crash, and there is no way back to a
+ * committed answer (a step once answered is never the current step again).
+ */
+import type { Assistance } from './design';
+import type { Bit } from './read-log';
+
+/** One case in the reader's period, in reading order (made by the study schedule). */
+export type SessionItem = {
+  caseId: string;
+  practice: boolean;
+  assistance: Assistance;
+  /** 1-based position within the period */
+  order: number;
+  caution: boolean;
+  breakBefore: boolean;
+};
+
+export type Phase = 'initial' | 'final';
+
+/** A step is one question: one finding of one case, and for sequential reads its phase. */
+export type Step = { itemIndex: number; finding: string; phase: Phase };
+
+/** What has been committed for one finding of one case. */
+export type CommittedAnswer = {
+  caseId: string;
+  finding: string;
+  initial: { call: Bit; confidence: number | null; ms: number } | null;
+  final: { call: Bit; confidence: number | null; ms: number } | null;
+};
+
+export type SessionPlan = { items: SessionItem[]; findings: string[] };
+
+const answerKey = (caseId: string, finding: string): string => `${caseId}\u0000${finding}`;
+
+/** Every step of the plan in order: per case, per finding, initial (sequential only) then final. */
+export const planSteps = (plan: SessionPlan): Step[] =>
+  plan.items.flatMap((item, itemIndex) =>
+    plan.findings.flatMap((finding): Step[] =>
+      item.assistance === 'sequential'
+        ? [{ itemIndex, finding, phase: 'initial' }, { itemIndex, finding, phase: 'final' }]
+        : [{ itemIndex, finding, phase: 'final' }],
+    ),
+  );
+
+export type SessionPosition =
+  | { done: false; step: Step; stepIndex: number; totalSteps: number; item: SessionItem; caseNumber: number; caseCount: number }
+  | { done: true; totalSteps: number; caseCount: number };
+
+/**
+ * The current step: the first one whose answer is not committed. Throws when the committed
+ * answers are not a prefix of the plan (an answer beyond a gap), which would mean a corrupt log.
+ */
+export const currentPosition = (plan: SessionPlan, answers: readonly CommittedAnswer[]): SessionPosition => {
+  const byKey = new Map(answers.map((a) => [answerKey(a.caseId, a.finding), a]));
+  const steps = planSteps(plan);
+  const isAnswered = (step: Step): boolean => {
+    const item = plan.items[step.itemIndex];
+    const answer = item ? byKey.get(answerKey(item.caseId, step.finding)) : undefined;
+    return step.phase === 'initial' ? answer?.initial != null : answer?.final != null;
+  };
+  const firstOpen = steps.findIndex((step) => !isAnswered(step));
+  const caseCount = plan.items.length;
+  if (firstOpen === -1) return { done: true, totalSteps: steps.length, caseCount };
+  const later = steps.slice(firstOpen + 1).find(isAnswered);
+  if (later) throw new Error(`session log has an answer after an unanswered step (case ${plan.items[later.itemIndex]?.caseId})`);
+  const step = steps[firstOpen] as Step;
+  const item = plan.items[step.itemIndex] as SessionItem;
+  return { done: false, step, stepIndex: firstOpen, totalSteps: steps.length, item, caseNumber: step.itemIndex + 1, caseCount };
+};
+
+/** Whether the suggestion is on screen at this step: concurrent always, sequential only after the initial call. */
+export const suggestionVisible = (assistance: Assistance, phase: Phase): boolean =>
+  assistance === 'concurrent' || (assistance === 'sequential' && phase === 'final');
+
+export type AnswerInput = { call: Bit | null; confidence: number | null };
+
+/** Plain-language reason why an answer cannot be committed yet, or null when it can. */
+export const answerProblem = (input: AnswerInput, askConfidence: boolean): string | null => {
+  if (input.call === null) return 'Choose present or absent first.';
+  if (askConfidence) {
+    if (input.confidence === null) return 'Set your confidence first.';
+    if (!(input.confidence >= 0 && input.confidence <= 100)) return 'Confidence must be between 0 and 100.';
+  }
+  return null;
+};
+
+/**
+ * The committed answer after one more commit at `position`. Throws when the step is not the
+ * current one, which is how "no going back" is enforced below the UI too.
+ */
+export const applyCommit = (
+  position: SessionPosition,
+  expected: Step,
+  previous: CommittedAnswer | null,
+  answer: { call: Bit; confidence: number | null; ms: number },
+): CommittedAnswer => {
+  if (position.done) throw new Error('the session is complete; nothing more can be committed');
+  const { step, item } = position;
+  if (step.itemIndex !== expected.itemIndex || step.finding !== expected.finding || step.phase !== expected.phase) {
+    throw new Error(`answer is for a step that is not the current one (case ${item.caseId}, ${step.finding}, ${step.phase})`);
+  }
+  const base: CommittedAnswer = previous ?? { caseId: item.caseId, finding: step.finding, initial: null, final: null };
+  return step.phase === 'initial' ? { ...base, initial: answer } : { ...base, final: answer };
+};
