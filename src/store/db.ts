@@ -1,0 +1,57 @@
+/**
+ * Heed's IndexedDB database through Dexie. Schema versions are append-only: a new version adds
+ * its stores and an upgrade, and a test opens a database written by the version before it.
+ */
+import { Dexie, type EntityTable } from 'dexie';
+import type {
+  StoredCaseSet, StoredEvent, StoredImage, StoredRead, StoredReader, StoredSession, StoredStudy,
+} from './records';
+
+export const DB_NAME = 'heed';
+
+/** Version 1: the spine. Reads were keyed by session only. */
+export const SCHEMA_V1 = {
+  caseSets: 'id, createdAt',
+  images: '[setId+path], setId',
+  studies: 'id, caseSetId, createdAt',
+  readers: 'id, studyId, &[studyId+code]',
+  sessions: 'id, studyId, readerId',
+  reads: 'id, sessionId',
+  events: '++seq, at, type',
+} as const;
+
+/** Version 2: reads and events indexed by study, for export and for the per-study event trail. */
+export const SCHEMA_V2 = {
+  ...SCHEMA_V1,
+  reads: 'id, sessionId, studyId, [studyId+readerId]',
+  events: '++seq, at, type, studyId',
+} as const;
+
+export type HeedDb = Dexie & {
+  caseSets: EntityTable<StoredCaseSet, 'id'>;
+  images: Dexie.Table<StoredImage, [string, string]>;
+  studies: EntityTable<StoredStudy, 'id'>;
+  readers: EntityTable<StoredReader, 'id'>;
+  sessions: EntityTable<StoredSession, 'id'>;
+  reads: EntityTable<StoredRead, 'id'>;
+  events: EntityTable<StoredEvent, 'seq'>;
+};
+
+/** Opens (and upgrades) the database. Strict durability: a committed answer is flushed to disk. */
+export const openHeedDb = (name: string = DB_NAME): HeedDb => {
+  const db = new Dexie(name, { chromeTransactionDurability: 'strict' }) as HeedDb;
+  db.version(1).stores(SCHEMA_V1);
+  db.version(2).stores(SCHEMA_V2).upgrade(async (tx) => {
+    // v1 reads knew their session only; v2 also stores the study, taken from the session.
+    const sessions = new Map<string, string>();
+    await tx.table<StoredSession>('sessions').each((s) => { sessions.set(s.id, s.studyId); });
+    await tx.table<StoredRead>('reads').toCollection().modify((read) => {
+      const studyId = sessions.get(read.sessionId);
+      if (studyId) read.studyId = studyId;
+    });
+    await tx.table<StoredEvent>('events').toCollection().modify((event) => {
+      if (event.studyId === undefined) event.studyId = null;
+    });
+  });
+  return db;
+};

@@ -1,0 +1,96 @@
+/** The shapes stored in Heed's database. Plain data only, so they survive structured cloning. */
+import type { CaseSetManifest } from '../core/case-set';
+import type { StudyDesign } from '../core/design';
+import type { Bit } from '../core/read-log';
+import type { SessionItem } from '../core/session';
+
+export type StoredCaseSet = {
+  id: string;
+  name: string;
+  source: 'demo' | 'import';
+  createdAt: string;
+  manifest: CaseSetManifest;
+  imageCount: number;
+  imageBytes: number;
+};
+
+export type StoredImage = { setId: string; path: string; mime: 'image/png' | 'image/jpeg'; bytes: Uint8Array };
+
+/** The suggestion a study shows for one case-finding, fixed when the study is created. */
+export type ShownSuggestion = {
+  caseId: string;
+  finding: string;
+  call: Bit;
+  score: number | null;
+  planted: boolean;
+};
+
+export type StoredStudy = {
+  id: string;
+  name: string;
+  caseSetId: string;
+  design: StudyDesign;
+  suggestions: ShownSuggestion[];
+  createdAt: string;
+  /** set when the first reading session starts; the design cannot change after it */
+  lockedAt: string | null;
+};
+
+export type StoredReader = {
+  id: string;
+  studyId: string;
+  code: string;
+  role: string;
+  years: number | null;
+  /** index into design.sequences */
+  sequenceIndex: number;
+  /** enrolment position, used by the balanced assignment */
+  slot: number;
+  enrolledAt: string;
+};
+
+export type WashoutOverride = { reason: string; by: string; at: string };
+
+export type StoredSession = {
+  /** `${readerId}/${period}` */
+  id: string;
+  studyId: string;
+  readerId: string;
+  period: number;
+  items: SessionItem[];
+  /** the seed the case order was shuffled from, recorded for reproduction */
+  orderSeed: string;
+  startedAt: string;
+  completedAt: string | null;
+  override: WashoutOverride | null;
+};
+
+export type StoredAnswerPart = { call: Bit; confidence: number | null; ms: number };
+
+export type StoredRead = {
+  /** `${sessionId}/${caseId}/${finding}` */
+  id: string;
+  sessionId: string;
+  studyId: string;
+  readerId: string;
+  period: number;
+  caseId: string;
+  finding: string;
+  initial: StoredAnswerPart | null;
+  final: StoredAnswerPart | null;
+  /** ISO time the case was first shown for this read */
+  shownAt: string;
+  /** suggestion and notice as shown, copied so the log says exactly what the reader saw */
+  aiCall: Bit | null;
+  aiScore: number | null;
+  aiPlanted: boolean;
+  cautionShown: boolean;
+};
+
+export type StoredEvent = {
+  seq?: number;
+  at: string;
+  studyId: string | null;
+  type: string;
+  detail: Record<string, unknown>;
+};

@@ -1,0 +1,100 @@
+/**
+ * Reading sessions and the durable commit of answers. The commit checks, inside the same
+ * transaction as the write, that the answer is for the session's current step, so no answer can
+ * be committed twice or out of order, even from two windows.
+ */
+import type { Bit } from '../core/read-log';
+import { applyCommit, currentPosition, type CommittedAnswer, type Phase, type SessionItem, type SessionPosition } from '../core/session';
+import type { HeedDb } from './db';
+import { appendEvent } from './events';
+import type { StoredRead, StoredSession, StoredStudy, WashoutOverride } from './records';
+
+export const sessionId = (readerId: string, period: number): string => `${readerId}/${period}`;
+const readId = (session: string, caseId: string, finding: string): string => `${session}/${caseId}/${finding}`;
+
+export type NewSession = {
+  study: StoredStudy;
+  readerId: string;
+  period: number;
+  items: SessionItem[];
+  orderSeed: string;
+  override: WashoutOverride | null;
+};
+
+/** Starts a session, or returns the one already started. Starting the first one locks the design. */
+export const startSession = (db: HeedDb, input: NewSession): Promise<StoredSession> =>
+  db.transaction('rw', db.sessions, db.studies, db.events, async () => {
+    const id = sessionId(input.readerId, input.period);
+    const existing = await db.sessions.get(id);
+    if (existing) return existing;
+    const now = new Date().toISOString();
+    const session: StoredSession = {
+      id, studyId: input.study.id, readerId: input.readerId, period: input.period, items: input.items,
+      orderSeed: input.orderSeed, startedAt: now, completedAt: null, override: input.override,
+    };
+    await db.sessions.add(session);
+    const study = await db.studies.get(input.study.id);
+    if (study && !study.lockedAt) {
+      await db.studies.put({ ...study, lockedAt: now });
+      await appendEvent(db, study.id, 'design-locked', { by: 'first session start', sessionId: id });
+    }
+    if (input.override) await appendEvent(db, input.study.id, 'washout-overridden', { sessionId: id, ...input.override });
+    await appendEvent(db, input.study.id, 'session-started', { sessionId: id, readerId: input.readerId, period: input.period, orderSeed: input.orderSeed });
+    return session;
+  });
+
+export const getSession = async (db: HeedDb, id: string): Promise<StoredSession | undefined> => db.sessions.get(id);
+
+export const sessionsOfStudy = (db: HeedDb, studyId: string): Promise<StoredSession[]> =>
+  db.sessions.where('studyId').equals(studyId).toArray();
+
+const toAnswer = (read: StoredRead): CommittedAnswer => ({ caseId: read.caseId, finding: read.finding, initial: read.initial, final: read.final });
+
+export const readsOfSession = (db: HeedDb, id: string): Promise<StoredRead[]> => db.reads.where('sessionId').equals(id).toArray();
+
+/** The session's position, from the answers committed so far. */
+export const sessionPosition = async (db: HeedDb, session: StoredSession, findings: string[]): Promise<SessionPosition> =>
+  currentPosition({ items: session.items, findings }, (await readsOfSession(db, session.id)).map(toAnswer));
+
+export type AnswerCommit = {
+  session: StoredSession;
+  findings: string[];
+  step: { itemIndex: number; finding: string; phase: Phase };
+  call: Bit;
+  confidence: number | null;
+  ms: number;
+  shownAt: string;
+  suggestion: { call: Bit; score: number | null; planted: boolean } | null;
+  cautionShown: boolean;
+};
+
+/** Commits one answer durably; resolves once the transaction is complete. Returns the next position. */
+export const commitAnswer = (db: HeedDb, input: AnswerCommit): Promise<SessionPosition> =>
+  db.transaction('rw', db.reads, db.sessions, db.events, async () => {
+    const { session } = input;
+    const reads = await readsOfSession(db, session.id);
+    const plan = { items: session.items, findings: input.findings };
+    const position = currentPosition(plan, reads.map(toAnswer));
+    const item = session.items[input.step.itemIndex];
+    if (!item) throw new Error(`session ${session.id} has no item ${input.step.itemIndex}`);
+    const id = readId(session.id, item.caseId, input.step.finding);
+    const previous = reads.find((r) => r.id === id) ?? null;
+    const answer = applyCommit(position, input.step, previous ? toAnswer(previous) : null, { call: input.call, confidence: input.confidence, ms: input.ms });
+    const read: StoredRead = {
+      id, sessionId: session.id, studyId: session.studyId, readerId: session.readerId, period: session.period,
+      caseId: item.caseId, finding: input.step.finding, initial: answer.initial, final: answer.final,
+      shownAt: previous?.shownAt ?? input.shownAt,
+      aiCall: input.suggestion?.call ?? null, aiScore: input.suggestion?.score ?? null,
+      aiPlanted: input.suggestion?.planted ?? false, cautionShown: input.cautionShown,
+    };
+    await db.reads.put(read);
+    await appendEvent(db, session.studyId, input.step.phase === 'initial' ? 'initial-committed' : 'final-committed', {
+      sessionId: session.id, caseId: item.caseId, finding: input.step.finding, call: input.call, confidence: input.confidence, ms: input.ms,
+    });
+    const next = currentPosition(plan, [...reads.filter((r) => r.id !== id), read].map(toAnswer));
+    if (next.done) {
+      await db.sessions.update(session.id, { completedAt: new Date().toISOString() });
+      await appendEvent(db, session.studyId, 'session-completed', { sessionId: session.id });
+    }
+    return next;
+  });

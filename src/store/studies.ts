@@ -1,0 +1,46 @@
+/** Studies: a design over a case set, with the suggestions it shows. Locked once reading starts. */
+import type { StudyDesign } from '../core/design';
+import type { HeedDb } from './db';
+import { appendEvent } from './events';
+import { InputError } from './input-error';
+import type { ShownSuggestion, StoredStudy } from './records';
+
+export type NewStudy = { name: string; caseSetId: string; design: StudyDesign; suggestions: ShownSuggestion[] };
+
+export const createStudy = async (db: HeedDb, input: NewStudy): Promise<StoredStudy> => {
+  const name = input.name.trim();
+  if (name === '') throw new InputError('Study name is empty.');
+  const study: StoredStudy = {
+    id: crypto.randomUUID(),
+    name,
+    caseSetId: input.caseSetId,
+    design: input.design,
+    suggestions: input.suggestions,
+    createdAt: new Date().toISOString(),
+    lockedAt: null,
+  };
+  await db.transaction('rw', db.studies, db.events, async () => {
+    await db.studies.add(study);
+    await appendEvent(db, study.id, 'study-created', { name, caseSetId: input.caseSetId, seed: input.design.seed });
+  });
+  return study;
+};
+
+/** Replaces the design (and the suggestions derived from it); refused once the study is locked. */
+export const updateStudyDesign = async (db: HeedDb, studyId: string, design: StudyDesign, suggestions: ShownSuggestion[]): Promise<StoredStudy> =>
+  db.transaction('rw', db.studies, db.events, async () => {
+    const study = await getStudy(db, studyId);
+    if (study.lockedAt) throw new InputError(`The design of "${study.name}" is locked: reading started on ${study.lockedAt}.`);
+    const updated = { ...study, design, suggestions };
+    await db.studies.put(updated);
+    await appendEvent(db, studyId, 'design-changed', { seed: design.seed });
+    return updated;
+  });
+
+export const getStudy = async (db: HeedDb, id: string): Promise<StoredStudy> => {
+  const found = await db.studies.get(id);
+  if (!found) throw new Error(`no study with id ${id}`);
+  return found;
+};
+
+export const listStudies = (db: HeedDb): Promise<StoredStudy[]> => db.studies.orderBy('createdAt').toArray();
