@@ -1,0 +1,90 @@
+import { midranks } from './midrank';
+import { Z95 } from './wilson';
+
+/**
+ * Structural components (placement values) of the Mann-Whitney AUC, DeLong, DeLong &
+ * Clarke-Pearson (1988), computed from midranks as in Sun & Xu (2014):
+ *   v10[i] = (Tz[i] − Tx[i]) / n   the share of negatives below positive i (ties count ½),
+ *   v01[j] = 1 − (Tz[m+j] − Ty[j]) / m   the share of positives above negative j,
+ *   auc = mean(v10) = mean(v01),
+ * where Tz are midranks in the pooled sample, Tx within positives, Ty within negatives.
+ * Throws RangeError when a class is empty or a score is not finite.
+ * Example: placements([0.9, 0.4], [0.1, 0.4]) → v10 [1, 0.75], v01 [1, 0.75], auc 0.875.
+ */
+export type Placements = { v10: Float64Array; v01: Float64Array; auc: number };
+
+export const placements = (positives: ArrayLike<number>, negatives: ArrayLike<number>): Placements => {
+  const m = positives.length;
+  const n = negatives.length;
+  if (m === 0 || n === 0) throw new RangeError(`AUC needs both classes: ${m} positives, ${n} negatives`);
+  const pooled = new Float64Array(m + n);
+  for (let i = 0; i < m; i++) pooled[i] = positives[i] as number;
+  for (let j = 0; j < n; j++) pooled[m + j] = negatives[j] as number;
+  const tz = midranks(pooled);
+  const tx = midranks(positives);
+  const ty = midranks(negatives);
+  const v10 = new Float64Array(m);
+  const v01 = new Float64Array(n);
+  let sum = 0;
+  for (let i = 0; i < m; i++) {
+    const v = ((tz[i] as number) - (tx[i] as number)) / n;
+    v10[i] = v;
+    sum += v;
+  }
+  for (let j = 0; j < n; j++) v01[j] = 1 - ((tz[m + j] as number) - (ty[j] as number)) / m;
+  return { v10, v01, auc: sum / m };
+};
+
+/** Sample covariance (denominator k − 1) of two equal-length arrays; null when k < 2. */
+export const sampleCovariance = (a: ArrayLike<number>, b: ArrayLike<number>): number | null => {
+  const k = a.length;
+  if (k < 2) return null;
+  let ma = 0;
+  let mb = 0;
+  for (let i = 0; i < k; i++) {
+    ma += a[i] as number;
+    mb += b[i] as number;
+  }
+  ma /= k;
+  mb /= k;
+  let s = 0;
+  for (let i = 0; i < k; i++) s += ((a[i] as number) - ma) * ((b[i] as number) - mb);
+  return s / (k - 1);
+};
+
+export type DelongAuc = {
+  auc: number;
+  /** DeLong variance S10/m + S01/n; null when a class has fewer than 2 members */
+  variance: number | null;
+  se: number | null;
+  v10: Float64Array;
+  v01: Float64Array;
+};
+
+/**
+ * Mann-Whitney AUC (ties count one half) with the DeLong et al. (1988) variance
+ * var = S10/m + S01/n, S10 and S01 the sample variances of the placement values.
+ * Throws RangeError when a class is empty or a score is not finite.
+ * Example: delongAuc([0.9, 0.8, 0.4], [0.1, 0.4, 0.5]).auc → 0.8333 (7.5 of 9 pairs).
+ */
+export const delongAuc = (positives: ArrayLike<number>, negatives: ArrayLike<number>): DelongAuc => {
+  const { v10, v01, auc } = placements(positives, negatives);
+  const s10 = sampleCovariance(v10, v10);
+  const s01 = sampleCovariance(v01, v01);
+  const variance = s10 === null || s01 === null ? null : s10 / v10.length + s01 / v01.length;
+  return { auc, variance, se: variance === null ? null : Math.sqrt(variance), v10, v01 };
+};
+
+export type AucSummary = { estimate: number | null; se: number | null; lower: number | null; upper: number | null };
+
+/**
+ * AUC as reported (SPEC Contract 2): estimate, DeLong SE, and estimate ± z·se clipped to [0,1].
+ * Unlike delongAuc it never throws for an empty class: it gives nulls.
+ * Example: aucSummary([1], []) → all null.
+ */
+export const aucSummary = (positives: ArrayLike<number>, negatives: ArrayLike<number>, z: number = Z95): AucSummary => {
+  if (positives.length === 0 || negatives.length === 0) return { estimate: null, se: null, lower: null, upper: null };
+  const { auc, se } = delongAuc(positives, negatives);
+  if (se === null) return { estimate: auc, se: null, lower: null, upper: null };
+  return { estimate: auc, se, lower: Math.max(0, auc - z * se), upper: Math.min(1, auc + z * se) };
+};

@@ -1,0 +1,43 @@
+import { aucSummary, delongAuc, placements } from '../../../src/analysis/delong';
+
+// Brute-force DeLong (1988): placement values by pair counting, S10/m + S01/n by definition.
+const brute = (pos: number[], neg: number[]) => {
+  const psi = (x: number, y: number) => (x > y ? 1 : x === y ? 0.5 : 0);
+  const v10 = pos.map((x) => neg.reduce((s, y) => s + psi(x, y), 0) / neg.length);
+  const v01 = neg.map((y) => pos.reduce((s, x) => s + psi(x, y), 0) / pos.length);
+  const mean = (a: number[]) => a.reduce((s, v) => s + v, 0) / a.length;
+  const svar = (a: number[]) => a.reduce((s, v) => s + (v - mean(a)) ** 2, 0) / (a.length - 1);
+  return { auc: mean(v10), v10, v01, variance: svar(v10) / pos.length + svar(v01) / neg.length };
+};
+
+describe('placements / delongAuc', () => {
+  it('gives the doc-comment example', () => {
+    const p = placements([0.9, 0.4], [0.1, 0.4]);
+    expect(Array.from(p.v10)).toEqual([1, 0.75]);
+    expect(Array.from(p.v01)).toEqual([1, 0.75]);
+    expect(p.auc).toBe(0.875);
+    expect(delongAuc([0.9, 0.8, 0.4], [0.1, 0.4, 0.5]).auc).toBeCloseTo(7.5 / 9, 12);
+  });
+  it('matches brute-force pair counting on tied scores', () => {
+    const pos = Array.from({ length: 37 }, (_, i) => ((i * 13) % 11) + 3);
+    const neg = Array.from({ length: 53 }, (_, i) => (i * 7) % 10);
+    const b = brute(pos, neg);
+    const d = delongAuc(pos, neg);
+    expect(d.auc).toBeCloseTo(b.auc, 12);
+    expect(d.variance).toBeCloseTo(b.variance, 12);
+    expect(Array.from(d.v10)).toEqual(b.v10.map((v) => expect.closeTo(v, 12)));
+    expect(Array.from(d.v01)).toEqual(b.v01.map((v) => expect.closeTo(v, 12)));
+  });
+  it('gives null variance with one case in a class, and refuses an empty class', () => {
+    expect(delongAuc([1], [0, 2]).variance).toBeNull();
+    expect(() => delongAuc([], [1])).toThrow(/both classes: 0 positives/);
+  });
+  it('summarises with a clipped interval and nulls for an empty class', () => {
+    const s = aucSummary([9, 8, 7, 6, 5.5], [1, 2, 3, 5.8]);
+    expect(s.estimate).toBeCloseTo(19 / 20, 12);
+    expect((s.estimate as number) + 1.959963984540054 * (s.se as number)).toBeGreaterThan(1);
+    expect(s.upper).toBe(1);
+    expect(s.lower).toBeCloseTo((s.estimate as number) - 1.959963984540054 * (s.se as number), 12);
+    expect(aucSummary([], [1])).toEqual({ estimate: null, se: null, lower: null, upper: null });
+  });
+});
