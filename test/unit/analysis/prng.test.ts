@@ -10,7 +10,7 @@ describe('seededInts', () => {
   it('is roughly uniform (common practice check, no source)', () => {
     const r = seededInts(1);
     const counts = [0, 0, 0, 0];
-    for (let i = 0; i < 40000; i++) counts[r.below(4)]++;
+    for (let i = 0; i < 40000; i++) { const b = r.below(4); counts[b] = (counts[b] ?? 0) + 1; }
     for (const c of counts) expect(Math.abs(c - 10000)).toBeLessThan(400);
   });
   it('refuses a bad seed or size', () => {
