@@ -11,7 +11,7 @@
  * Each main case is read once per period; with blocks, every block still meets every entry of
  * the sequence once, so a case is read aided as many times as the sequence has aided periods.
  * Throws nothing for a valid design; a table from another design gives meaningless counts.
- * Example: 10 wrong suggestions, sequence [none, sequential] -> n = 10, half ≈ 0.253, warning.
+ * Example: 10 wrong suggestions, sequence [none, sequential] -> n = 10, half ≈ 0.248, warning.
  */
 import type { StudyDesign } from './design';
 import type { SuggestionTable } from './suggestions';
