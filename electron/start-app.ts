@@ -1,0 +1,43 @@
+// Wires the Electron app: privileged heed:// scheme, session policy, guards on every web
+// contents, IPC handlers, then the one window. Heed is a research and training tool, not a
+// medical device.
+import { app, ipcMain, protocol, session } from 'electron';
+import { APP_SCHEME, APP_SCHEME_PRIVILEGES, appResponse } from './app-protocol';
+import { registerIpc } from './ipc-main';
+import { applySessionPolicy, createMainWindow, guardContents } from './window';
+
+export type AppPaths = { distRoot: string; preload: string };
+
+/** A remote-debugging port from HEED_DEBUG_PORT (used to measure start-up), or null. */
+export const debugPortFrom = (value: string | undefined): number | null => {
+  if (value === undefined || !/^\d+$/.test(value.trim())) return null;
+  const port = Number(value.trim());
+  return port >= 1 && port <= 65535 ? port : null;
+};
+
+export const startApp = ({ distRoot, preload }: AppPaths, env: Record<string, string | undefined> = process.env): void => {
+  // Must happen before 'ready': gives heed://app a stable, secure origin (IndexedDB lives there).
+  protocol.registerSchemesAsPrivileged([{ scheme: APP_SCHEME, privileges: APP_SCHEME_PRIVILEGES }]);
+  app.enableSandbox();
+  const debugPort = debugPortFrom(env.HEED_DEBUG_PORT);
+  if (debugPort !== null) app.commandLine.appendSwitch('remote-debugging-port', String(debugPort));
+
+  // One Heed per user: two windows writing one IndexedDB would fight over a reading session.
+  if (!app.requestSingleInstanceLock()) {
+    app.quit();
+    return;
+  }
+  app.on('web-contents-created', (_event, contents) => guardContents(contents));
+  app.on('window-all-closed', () => app.quit());
+
+  void app.whenReady().then(() => {
+    applySessionPolicy(session.defaultSession);
+    protocol.handle(APP_SCHEME, (request) => appResponse(distRoot, request.url));
+    registerIpc(ipcMain);
+    const window = createMainWindow(preload);
+    app.on('second-instance', () => {
+      if (window.isMinimized()) window.restore();
+      window.focus();
+    });
+  });
+};

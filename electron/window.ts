@@ -1,0 +1,67 @@
+// The one window factory, and the policies every web contents and the session share: sandboxed
+// renderer, no navigation away from the app, no new windows, strict CSP, permissions denied.
+import { BrowserWindow } from 'electron';
+import type { Session, WebContents, WebPreferences } from 'electron';
+import { CONTENT_SECURITY_POLICY } from '../scripts/lib/web-policy.mjs';
+import { APP_URL, isAppUrl } from './app-protocol';
+
+/** The renderer's settings: sandboxed, isolated, no Node, web security on, our preload only. */
+export const webPreferencesFor = (preload: string) => ({
+  preload,
+  sandbox: true,
+  contextIsolation: true,
+  nodeIntegration: false,
+  nodeIntegrationInWorker: false,
+  nodeIntegrationInSubFrames: false,
+  webSecurity: true,
+  allowRunningInsecureContent: false,
+  webviewTag: false,
+  navigateOnDragDrop: false,
+  spellcheck: false,
+}) satisfies WebPreferences;
+
+type NavigationEvent = { url: string; preventDefault(): void };
+
+/** Lets a navigation or redirect through only when it stays inside heed://app/. */
+export const blockForeignNavigation = (event: NavigationEvent): void => {
+  if (!isAppUrl(event.url)) event.preventDefault();
+};
+
+/** The shared handler for every web contents: blocks navigation, denies new windows and webviews. */
+export const guardContents = (contents: WebContents): void => {
+  contents.on('will-navigate', (event) => blockForeignNavigation(event));
+  contents.on('will-frame-navigate', (event) => blockForeignNavigation(event));
+  contents.on('will-redirect', (event) => blockForeignNavigation(event));
+  contents.on('will-attach-webview', (event) => event.preventDefault());
+  contents.setWindowOpenHandler(() => ({ action: 'deny' }));
+};
+
+/** CSP on every response, and every permission (camera, notifications, ...) refused. */
+export const applySessionPolicy = (session: Session): void => {
+  session.webRequest.onHeadersReceived((details, callback) => {
+    callback({ responseHeaders: { ...details.responseHeaders, 'Content-Security-Policy': [CONTENT_SECURITY_POLICY] } });
+  });
+  session.setPermissionRequestHandler((_contents, _permission, callback) => callback(false));
+  session.setPermissionCheckHandler(() => false);
+  session.setDevicePermissionHandler(() => false);
+};
+
+/**
+ * Opens Heed's window on heed://app/index.html; shown once the first frame is ready. The guards of
+ * guardContents reach it through main's 'web-contents-created' hook, like every other contents.
+ */
+export const createMainWindow = (preload: string): BrowserWindow => {
+  const window = new BrowserWindow({
+    width: 1400,
+    height: 900,
+    minWidth: 960,
+    minHeight: 640,
+    show: false,
+    backgroundColor: '#101214',
+    title: 'Heed',
+    webPreferences: webPreferencesFor(preload),
+  });
+  window.once('ready-to-show', () => window.show());
+  void window.loadURL(APP_URL);
+  return window;
+};

@@ -1,0 +1,81 @@
+// A tiny static server for dist/: 127.0.0.1 only, GET/HEAD only, no directory listing, nothing
+// outside the root, Heed's CSP on every answer, no CORS. Used by `npm start` and the e2e tests.
+import { createServer } from 'node:http';
+import { createReadStream } from 'node:fs';
+import { realpath, stat } from 'node:fs/promises';
+import path from 'node:path';
+import { contentTypeFor, resolveInside, securityHeaders } from './web-policy.mjs';
+
+const HOST = '127.0.0.1';
+
+const send = (res, status, text, extra = {}) => {
+  res.writeHead(status, { ...securityHeaders(), 'Content-Type': 'text/plain; charset=utf-8', ...extra });
+  res.end(text);
+};
+
+/** Only our own address may be asked for: refuses DNS-rebinding pages that name another host. */
+const hostAllowed = (hostHeader, port) =>
+  hostHeader === `${HOST}:${port}` || hostHeader === `localhost:${port}`;
+
+const isInside = (root, file) => file === root || file.startsWith(root + path.sep);
+
+const handler = (root, realRoot, getPort) => async (req, res) => {
+  if (!hostAllowed(req.headers.host, getPort())) return send(res, 421, 'wrong host\n');
+  if (req.method !== 'GET' && req.method !== 'HEAD') return send(res, 405, 'method not allowed\n', { Allow: 'GET, HEAD' });
+  let pathname;
+  try {
+    pathname = new URL(req.url ?? '/', `http://${HOST}`).pathname;
+  } catch {
+    return send(res, 400, 'bad request\n');
+  }
+  const file = resolveInside(root, pathname);
+  if (file === null) return send(res, 404, 'not found\n');
+  try {
+    // realpath: a symlink inside dist/ must not lead outside it either.
+    const real = await realpath(file);
+    if (!isInside(realRoot, real)) return send(res, 404, 'not found\n');
+    const info = await stat(real);
+    if (!info.isFile()) return send(res, 404, 'not found\n');
+    res.writeHead(200, {
+      ...securityHeaders(),
+      'Content-Type': contentTypeFor(real),
+      'Content-Length': String(info.size),
+      'Cache-Control': 'no-cache',
+    });
+    if (req.method === 'HEAD') return res.end();
+    createReadStream(real).on('error', () => res.destroy()).pipe(res);
+  } catch {
+    send(res, 404, 'not found\n');
+  }
+};
+
+/**
+ * Serves `root` on http://127.0.0.1:PORT/. `port` 0 (the default) picks a free port; a busy
+ * fixed port rejects with the listen error (code EADDRINUSE) so the caller can decide.
+ * @param {{ root: string; port?: number }} options
+ * @returns {Promise<{ url: string; port: number; close(): Promise<void> }>}
+ */
+export const startStaticServer = async ({ root, port = 0 }) => {
+  const absRoot = path.resolve(root);
+  const realRoot = await realpath(absRoot);
+  let boundPort = port;
+  const server = createServer(handler(absRoot, realRoot, () => boundPort));
+  await new Promise((resolve, reject) => {
+    server.once('error', reject);
+    server.listen(port, HOST, () => {
+      server.off('error', reject);
+      resolve();
+    });
+  });
+  const address = server.address();
+  boundPort = typeof address === 'object' && address !== null ? address.port : port;
+  return {
+    url: `http://${HOST}:${boundPort}/`,
+    port: boundPort,
+    close: () =>
+      new Promise((resolve) => {
+        server.close(() => resolve());
+        server.closeAllConnections();
+      }),
+  };
+};
