@@ -60,6 +60,7 @@ export const rngFromSeed = (derived: number): Rng => {
       const out = [...items];
       for (let i = out.length - 1; i > 0; i -= 1) {
         const j = int(0, i);
+        // Both indices are in range; the casts only drop the undefined of indexed access.
         const tmp = out[i] as T;
         out[i] = out[j] as T;
         out[j] = tmp;
