@@ -5,14 +5,17 @@ import type { IpcMain, IpcMainInvokeEvent, OpenDialogOptions, SaveDialogOptions 
 import { writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import type { z } from 'zod';
-import type { BridgeResult } from '../src/host/bridge';
+import type { BridgeResult, HeedBridge } from '../src/host/bridge';
 import { isAppUrl } from './app-protocol';
 import { createCaseSetFiles } from './case-set-files';
 import type { CaseSetFiles } from './case-set-files';
 import { CHANNELS, CHANNEL_KEYS, REQUESTS, describeIssues } from './ipc-contract';
 import type { ChannelKey } from './ipc-contract';
 
-type Handler = (event: IpcMainInvokeEvent, raw: unknown) => Promise<BridgeResult<unknown>>;
+type Handler<T> = (event: IpcMainInvokeEvent, raw: unknown) => Promise<BridgeResult<T>>;
+type ValueOf<K extends ChannelKey> = Awaited<ReturnType<HeedBridge[K]>> extends BridgeResult<infer T> ? T : never;
+/** One handler per channel, answering what the bridge method of the same name promises. */
+export type Handlers = { [K in ChannelKey]: Handler<ValueOf<K>> };
 
 const messageOf = (error: unknown): string => (error instanceof Error ? error.message : String(error));
 
@@ -21,7 +24,7 @@ const guarded = <S extends z.ZodType, T>(
   key: ChannelKey,
   schema: S,
   run: (request: z.infer<S>, event: IpcMainInvokeEvent) => Promise<T>,
-): Handler => async (event, raw) => {
+): Handler<T> => async (event, raw) => {
   const from = event.senderFrame?.url ?? '';
   if (!isAppUrl(from)) return { ok: false, error: `${CHANNELS[key]}: refused, the request did not come from Heed's own page` };
   const parsed = schema.safeParse(raw);
@@ -38,7 +41,7 @@ const filtersFor = (name: string): SaveDialogOptions['filters'] => {
   return ext === '' ? [] : [{ name: ext.toUpperCase(), extensions: [ext] }, { name: 'All files', extensions: ['*'] }];
 };
 
-export const createHandlers = (caseSets: CaseSetFiles = createCaseSetFiles()): Record<ChannelKey, Handler> => {
+export const createHandlers = (caseSets: CaseSetFiles = createCaseSetFiles()): Handlers => {
   // Paths written in this session: the only ones openFolder will reveal.
   const saved = new Set<string>();
 
@@ -91,6 +94,6 @@ export const createHandlers = (caseSets: CaseSetFiles = createCaseSetFiles()): R
 };
 
 /** Registers one ipcMain.handle per channel. */
-export const registerIpc = (ipcMain: IpcMain, handlers: Record<ChannelKey, Handler> = createHandlers()): void => {
+export const registerIpc = (ipcMain: IpcMain, handlers: Handlers = createHandlers()): void => {
   for (const key of CHANNEL_KEYS) ipcMain.handle(CHANNELS[key], handlers[key]);
 };
