@@ -1,0 +1,29 @@
+import { nullRun } from '../../reference/support/roe-metz';
+
+// Type I error of each Obuchowski-Rockette test under a null Roe & Metz (1997) simulation
+// (configuration and caveats in test/reference/support/roe-metz.ts). A test at alpha = 0.05
+// should reject about 5% of null studies; with 500 studies the binomial SE is about 0.01, so
+// [0.02, 0.09] is a band of about 3 SE (common practice, no source). Each test is checked in the
+// scenario it is built for: both effects random; readers fixed; cases fixed.
+// The full-size run (2000 studies) is `npm run validate:mrmc`.
+describe('Obuchowski-Rockette null simulation (seeded, 500 studies of 5 readers x 60 cases)', () => {
+  const size = { studies: 500, readers: 5, cases: 60 };
+
+  it('random readers and cases, Hillis ddf: type I error near 0.05', () => {
+    const run = nullRun({ seed: 20240501, ...size });
+    expect(run.rate.random).toBeGreaterThanOrEqual(0.02);
+    expect(run.rate.random).toBeLessThanOrEqual(0.09);
+  });
+
+  it('fixed-reader test with readers held fixed: type I error near 0.05', () => {
+    const run = nullRun({ seed: 20240502, ...size, scenario: 'fixed-readers' });
+    expect(run.rate.fixedReaders).toBeGreaterThanOrEqual(0.02);
+    expect(run.rate.fixedReaders).toBeLessThanOrEqual(0.09);
+  });
+
+  it('fixed-case test with cases held fixed: type I error near 0.05', () => {
+    const run = nullRun({ seed: 20240503, ...size, scenario: 'fixed-cases' });
+    expect(run.rate.fixedCases).toBeGreaterThanOrEqual(0.02);
+    expect(run.rate.fixedCases).toBeLessThanOrEqual(0.09);
+  });
+});
