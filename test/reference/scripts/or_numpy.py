@@ -1,0 +1,103 @@
+"""Obuchowski-Rockette analysis, re-implemented independently in numpy from the published formulas.
+
+NOT a reference library (none is allowed for this method): a second, deliberately different
+computation to check src/analysis/obuchowski-rockette.ts against. Differences on purpose:
+the jackknife recomputes every leave-one-case-out AUC by brute force over all case pairs
+(the TypeScript uses the O(n) placement-value update), and the covariances are averaged from
+the full (t*r) x (t*r) jackknife covariance matrix (the TypeScript uses per-case sums).
+Formulas: Obuchowski & Rockette (1995); jackknife covariances Hillis, Obuchowski, Schartz &
+Berbaum (2005); ddf Hillis (2007). p values and quantiles from scipy.stats.
+Run as a script to write ../fixtures/or-scores-*.json (seeded inputs plus these results).
+"""
+import json
+import os
+
+import numpy as np
+import scipy
+from scipy import stats
+
+
+def auc_pairs(score, truth):
+    pos, neg = score[truth == 1], score[truth == 0]
+    diff = pos[:, None] - neg[None, :]
+    return float(((diff > 0) + 0.5 * (diff == 0)).mean())
+
+
+def or_analysis(scores, truth):
+    scores = np.asarray(scores, float)
+    truth = np.asarray(truth)
+    t, r, c = scores.shape
+    auc = np.array([[auc_pairs(scores[i, j], truth) for j in range(r)] for i in range(t)])
+    keep = ~np.eye(c, dtype=bool)
+    jk = np.array([[[auc_pairs(scores[i, j][keep[k]], truth[keep[k]]) for k in range(c)]
+                    for j in range(r)] for i in range(t)])  # t x r x c
+    flat = jk.reshape(t * r, c)
+    dev = flat - flat.mean(axis=1, keepdims=True)
+    cov = (c - 1) / c * dev @ dev.T
+    mod = np.repeat(np.arange(t), r)
+    rdr = np.tile(np.arange(r), t)
+    same_m = mod[:, None] == mod[None, :]
+    same_r = rdr[:, None] == rdr[None, :]
+    var_e = cov[same_m & same_r].mean()
+    cov1 = cov[~same_m & same_r].mean()
+    cov2 = cov[same_m & ~same_r].mean()
+    cov3 = cov[~same_m & ~same_r].mean()
+    mi, mj, g = auc.mean(1), auc.mean(0), auc.mean()
+    ms_t = r * np.sum((mi - g) ** 2) / (t - 1)
+    ms_tr = np.sum((auc - mi[:, None] - mj[None, :] + g) ** 2) / ((t - 1) * (r - 1))
+    diff = mi[1] - mi[0]
+    res = {}
+    den = ms_tr + r * max(cov2 - cov3, 0)
+    ddf = den ** 2 / (ms_tr ** 2 / ((t - 1) * (r - 1)))
+    se = np.sqrt(2 * den / r)
+    q = stats.t.ppf(0.975, ddf)
+    res["random"] = {"difference": diff, "se": se, "lower": diff - q * se, "upper": diff + q * se,
+                     "f": ms_t / den, "df1": t - 1, "ddf": ddf, "p": stats.f.sf(ms_t / den, t - 1, ddf)}
+    den = var_e - cov1 + (r - 1) * max(cov2 - cov3, 0)
+    se = np.sqrt(2 * den / r)
+    chi2 = (t - 1) * ms_t / den
+    q = stats.norm.ppf(0.975)
+    res["fixedReaders"] = {"difference": diff, "se": se, "lower": diff - q * se, "upper": diff + q * se,
+                           "f": chi2 / (t - 1), "df1": t - 1, "ddf": None, "p": stats.chi2.sf(chi2, t - 1)}
+    ddf = (t - 1) * (r - 1)
+    se = np.sqrt(2 * ms_tr / r)
+    q = stats.t.ppf(0.975, ddf)
+    res["fixedCases"] = {"difference": diff, "se": se, "lower": diff - q * se, "upper": diff + q * se,
+                         "f": ms_t / ms_tr, "df1": t - 1, "ddf": ddf, "p": stats.f.sf(ms_t / ms_tr, t - 1, ddf)}
+    res = {k: {kk: (None if vv is None else float(vv)) for kk, vv in v.items()} for k, v in res.items()}
+    res["auc"] = auc.tolist()
+    res["covariances"] = {"varE": float(var_e), "cov1": float(cov1), "cov2": float(cov2), "cov3": float(cov3)}
+    res["msT"], res["msTR"] = float(ms_t), float(ms_tr)
+    return res
+
+
+def simulate(seed, readers, cases, decimals, effect):
+    """Seeded scores of a made-up fully crossed study: shared case and reader effects, rounded to make ties."""
+    rng = np.random.default_rng(seed)
+    truth = (rng.random(cases) < 0.5).astype(int)
+    truth[:2], truth[2:4] = 1, 0
+    case = rng.normal(0, 0.7, cases)
+    reader = rng.normal(0, 0.3, (readers, 1))
+    base = truth * 1.2 + case
+    s = np.stack([base + reader + rng.normal(0, 0.8, (readers, cases)),
+                  base + effect * truth + reader + rng.normal(0, 0.8, (readers, cases))])
+    return np.round(s, decimals), truth
+
+
+def main():
+    here = os.path.dirname(os.path.abspath(__file__))
+    configs = [("or-scores-a.json", 11, 6, 60, 2, 0.4), ("or-scores-b.json", 12, 3, 25, 0, 0.0),
+               ("or-scores-c.json", 13, 8, 40, 1, 0.2)]
+    for name, seed, r, c, dec, eff in configs:
+        scores, truth = simulate(seed, r, c, dec, eff)
+        out = {"generated_by": "test/reference/scripts/or_numpy.py",
+               "method": "independent numpy re-implementation (brute-force jackknife), not a reference library",
+               "versions": {"numpy": np.__version__, "scipy": scipy.__version__},
+               "scores": scores.tolist(), "truth": truth.tolist(), "expected": or_analysis(scores, truth)}
+        with open(os.path.join(here, "..", "fixtures", name), "w") as f:
+            json.dump(out, f)
+        print("wrote", name)
+
+
+if __name__ == "__main__":
+    main()
