@@ -3,6 +3,8 @@ import type { CaseSetManifest } from '../core/case-set';
 import type { StudyDesign } from '../core/design';
 import type { Bit } from '../core/read-log';
 import type { SessionItem } from '../core/session';
+import type { SuggestionRow } from '../core/suggestions';
+import type { WashoutOverride } from '../core/washout';
 
 export type StoredCaseSet = {
   id: string;
@@ -16,21 +18,14 @@ export type StoredCaseSet = {
 
 export type StoredImage = { setId: string; path: string; mime: 'image/png' | 'image/jpeg'; bytes: Uint8Array };
 
-/** The suggestion a study shows for one case-finding, fixed when the study is created. */
-export type ShownSuggestion = {
-  caseId: string;
-  finding: string;
-  call: Bit;
-  score: number | null;
-  planted: boolean;
-};
 
 export type StoredStudy = {
   id: string;
   name: string;
   caseSetId: string;
   design: StudyDesign;
-  suggestions: ShownSuggestion[];
+  /** the suggestion shown for every case-finding, fixed when the design is saved */
+  suggestions: SuggestionRow[];
   createdAt: string;
   /** set when the first reading session starts; the design cannot change after it */
   lockedAt: string | null;
@@ -49,7 +44,7 @@ export type StoredReader = {
   enrolledAt: string;
 };
 
-export type WashoutOverride = { reason: string; by: string; at: string };
+export type { WashoutOverride };
 
 export type StoredSession = {
   /** `${readerId}/${period}` */

@@ -3,9 +3,10 @@ import type { StudyDesign } from '../core/design';
 import type { HeedDb } from './db';
 import { appendEvent } from './events';
 import { InputError } from './input-error';
-import type { ShownSuggestion, StoredStudy } from './records';
+import type { StoredStudy } from './records';
+import type { SuggestionRow } from '../core/suggestions';
 
-export type NewStudy = { name: string; caseSetId: string; design: StudyDesign; suggestions: ShownSuggestion[] };
+export type NewStudy = { name: string; caseSetId: string; design: StudyDesign; suggestions: SuggestionRow[] };
 
 export const createStudy = async (db: HeedDb, input: NewStudy): Promise<StoredStudy> => {
   const name = input.name.trim();
@@ -27,7 +28,7 @@ export const createStudy = async (db: HeedDb, input: NewStudy): Promise<StoredSt
 };
 
 /** Replaces the design (and the suggestions derived from it); refused once the study is locked. */
-export const updateStudyDesign = async (db: HeedDb, studyId: string, design: StudyDesign, suggestions: ShownSuggestion[]): Promise<StoredStudy> =>
+export const updateStudyDesign = async (db: HeedDb, studyId: string, design: StudyDesign, suggestions: SuggestionRow[]): Promise<StoredStudy> =>
   db.transaction('rw', db.studies, db.events, async () => {
     const study = await getStudy(db, studyId);
     if (study.lockedAt) throw new InputError(`The design of "${study.name}" is locked: reading started on ${study.lockedAt}.`);

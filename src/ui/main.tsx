@@ -1,5 +1,16 @@
 import { createRoot } from 'react-dom/client';
+import { openHeedDb } from '../store/db';
+import { App } from './App';
+import { DbProvider } from './db-context';
+import { signal } from './signals';
+import './styles.css';
 
 const root = document.getElementById('root');
 if (!root) throw new Error('index.html has no #root');
-createRoot(root).render(<main><h1>Heed</h1><p>Research and training tool, not a medical device.</p></main>);
+const db = openHeedDb();
+createRoot(root).render(
+  <DbProvider db={db}>
+    <App />
+  </DbProvider>,
+);
+signal('mounted');

@@ -1,0 +1,42 @@
+/** The data dictionary written beside reads.csv: one line per column, and the standing caution. */
+import { READ_LOG_COLUMNS, type ReadLogColumn } from '../core/read-log';
+import { RESEARCH_CAUTION } from '../core/research-caution';
+
+const MEANING: Record<ReadLogColumn, string> = {
+  study_id: 'text: study identifier',
+  reader_id: 'text: pseudonymous reader code',
+  reader_role: 'text: e.g. radiologist, resident, surgeon',
+  reader_years: 'number: years of reading experience; empty when not given',
+  sequence: 'text: crossover sequence label (UA = unaided then aided, AU = aided then unaided); may be empty',
+  period: 'integer: 1-based period',
+  assistance: 'none / concurrent / sequential: how the suggestion was shown for this read',
+  case_id: 'text: case identifier',
+  finding: 'text: finding key',
+  practice: '0/1: practice read, excluded from every statistic',
+  order: "integer: 1-based position of the case in this reader's period",
+  truth: '0/1: ground truth',
+  ai_call: "0/1: shown suggestion's call; empty when assistance is none",
+  ai_score: "number in [0,1]: shown suggestion's score; empty when not shown",
+  ai_planted: '0/1: 1 when the shown suggestion is a planted error',
+  caution_shown: '0/1: caution notice shown for this read',
+  initial_call: '0/1: sequential only, the call before the suggestion was revealed',
+  initial_confidence: '0..100: sequential only, confidence in the initial call',
+  initial_ms: 'number: sequential only, ms from the case shown to the initial call committed (paused time excluded)',
+  final_call: "0/1: the reader's final call",
+  final_confidence: '0..100: certainty in the final call (0 guessing, 100 certain); empty when the study asked none',
+  total_ms: 'number: ms from the case shown to the final call committed (monotonic clock, paused time excluded)',
+  shown_at: 'ISO 8601 UTC: when the case was shown',
+};
+
+export const dataDictionary = (attributeNames: readonly string[]): string => [
+  '# reads.csv: data dictionary',
+  '',
+  RESEARCH_CAUTION,
+  '',
+  'UTF-8, comma-separated, header row, \\n line ends, RFC 4180 quoting. Booleans are 0/1; a value that does not apply is empty.',
+  'Derived score (0..100, likelihood the finding is present): final_call = 1 ? 50 + final_confidence/2 : 50 - final_confidence/2.',
+  '',
+  ...READ_LOG_COLUMNS.map((c) => `${c}: ${MEANING[c]}`),
+  ...attributeNames.map((a) => `case_${a}: text, case attribute "${a}" from the case set`),
+  '',
+].join('\n');

@@ -1,0 +1,25 @@
+import { HomeScreen } from './screens/HomeScreen';
+import { NewStudyScreen } from './screens/NewStudyScreen';
+import { StudyScreen } from './screens/StudyScreen';
+import { ReadingScreen } from './reading/ReadingScreen';
+import { ResultsScreen } from './screens/ResultsScreen';
+import { actions, useAppState } from './state/app-state';
+
+export const App = () => {
+  const { screen, notice } = useAppState();
+  return (
+    <>
+      {notice && screen.name !== 'read' && (
+        <div className={`notice notice-${notice.kind}`} role={notice.kind === 'error' ? 'alert' : 'status'}>
+          <span>{notice.text}</span>
+          <button type="button" className="link" onClick={actions.clearNotice} aria-label="Dismiss notice">×</button>
+        </div>
+      )}
+      {screen.name === 'home' && <HomeScreen />}
+      {screen.name === 'new-study' && <NewStudyScreen />}
+      {screen.name === 'study' && <StudyScreen studyId={screen.studyId} />}
+      {screen.name === 'results' && <ResultsScreen studyId={screen.studyId} />}
+      {screen.name === 'read' && <ReadingScreen studyId={screen.studyId} sessionId={screen.sessionId} />}
+    </>
+  );
+};

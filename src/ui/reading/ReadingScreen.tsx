@@ -1,0 +1,198 @@
+/**
+ * The reading view: one case at a time, dark and calm, keyboard first. Each answer is committed
+ * to the database before the next question appears; the clock (performance.now, pausable) starts
+ * when the case's pixels are drawn.
+ */
+import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
+import { elapsedMs, pauseClock, resumeClock, startClock, type ActiveClock } from '../../core/active-clock';
+import type { Bit } from '../../core/read-log';
+import { answerProblem, suggestionVisible } from '../../core/session';
+import { suggestionKey } from '../../core/suggestions';
+import { useDb } from '../db-context';
+import { signal } from '../signals';
+import { actions } from '../state/app-state';
+import { AnswerPanel } from './AnswerPanel';
+import { createImageCache } from './image-cache';
+import { DEFAULT_VIEW, ImageViewport, type View } from './ImageViewport';
+import type { GrayImage } from './gray-image';
+import { ReadingDone, ReadingOverlay } from './ReadingOverlay';
+import { SuggestionPanel } from './SuggestionPanel';
+import { readingKeyAction } from './reading-keys';
+import { useReadingSession } from './use-reading-session';
+
+type Props = { studyId: string; sessionId: string };
+
+export const ReadingScreen = ({ studyId, sessionId }: Props) => {
+  const db = useDb();
+  const { loaded, position, reads, error, commit } = useReadingSession(db, studyId, sessionId);
+  const setId = loaded?.setId;
+  const cache = useMemo(() => (setId ? createImageCache(db, setId) : null), [db, setId]);
+  const [loadedImage, setLoadedImage] = useState<{ path: string; image: GrayImage } | null>(null);
+  const [imageIndex, setImageIndex] = useState(0);
+  const [view, setView] = useState<View>(DEFAULT_VIEW);
+  const [call, setCall] = useState<Bit | null>(null);
+  const [confidence, setConfidence] = useState<number | null>(null);
+  const [busy, setBusy] = useState(false);
+  const [paused, setPaused] = useState(false);
+  const [breakFor, setBreakFor] = useState<string | null>(null);
+  const [clockStarted, setClockStarted] = useState(false);
+  const clock = useRef<ActiveClock | null>(null);
+  const clockCase = useRef<string | null>(null);
+  const shownAt = useRef('');
+  const breaksTaken = useRef(new Set<string>());
+
+  const item = position && !position.done ? position.item : null;
+  const caseRecord = item ? loaded?.cases.get(item.caseId) : undefined;
+  const currentRead = item && position && !position.done
+    ? reads.find((r) => r.caseId === item.caseId && r.finding === position.step.finding) : undefined;
+
+  // A new case: reset the view, offer a break if one is due, load its image and the next case's.
+  useEffect(() => {
+    if (!item || !caseRecord || !cache || !loaded || !position || position.done) return;
+    if (clockCase.current === item.caseId) return;
+    setView(DEFAULT_VIEW);
+    setImageIndex(0);
+    if (item.breakBefore && !breaksTaken.current.has(item.caseId)) setBreakFor(item.caseId);
+    const next = loaded.session.items[position.step.itemIndex + 1];
+    const nextPaths = next ? loaded.cases.get(next.caseId)?.images ?? [] : [];
+    cache.forget(new Set([...caseRecord.images, ...nextPaths]));
+    for (const path of nextPaths) void cache.get(path);
+  }, [item, caseRecord, cache, loaded, position]);
+
+  const imagePath = caseRecord?.images[imageIndex] ?? caseRecord?.images[0];
+  useEffect(() => {
+    if (!cache || !imagePath) return;
+    let live = true;
+    cache.get(imagePath).then((decoded) => { if (live) setLoadedImage({ path: imagePath, image: decoded }); }, (e: unknown) => actions.notify({ kind: 'error', text: String(e) }));
+    return () => { live = false; };
+  }, [cache, imagePath]);
+
+  // Only this case's own pixels are handed to the viewport, never the previous case's.
+  const image = loadedImage && caseRecord?.images.includes(loadedImage.path) ? loadedImage.image : null;
+
+  // The clock of a case starts when its pixels are drawn (and not during a break).
+  const onDrawn = useCallback(() => {
+    if (!item || breakFor || clockCase.current === item.caseId) return;
+    clockCase.current = item.caseId;
+    const now = performance.now();
+    const resumedInitial = currentRead?.initial?.ms ?? 0;
+    clock.current = { ...startClock(now), accumulated: resumedInitial };
+    setClockStarted(true);
+    shownAt.current = currentRead?.shownAt ?? new Date().toISOString();
+    requestAnimationFrame(() => signal('case-painted', { caseId: item.caseId }));
+  }, [item, breakFor, currentRead]);
+
+  useEffect(() => {
+    if (position?.done) signal('ready', { screen: 'reading-done' });
+  }, [position]);
+
+  const askConfidence = loaded?.study.design.askConfidence ?? true;
+  const problem = answerProblem({ call, confidence }, askConfidence);
+
+  const doCommit = useCallback(async () => {
+    if (busy || paused || breakFor || problem !== null || call === null || !clock.current) return;
+    const ms = elapsedMs(clock.current, performance.now());
+    setBusy(true);
+    try {
+      await commit({ call, confidence: askConfidence ? confidence : null, ms, shownAt: shownAt.current });
+      setCall(null);
+      setConfidence(null);
+      signal('saved');
+    } catch (e) {
+      actions.notify({ kind: 'error', text: `Not saved: ${e instanceof Error ? e.message : String(e)}` });
+    } finally {
+      setBusy(false);
+    }
+  }, [busy, paused, breakFor, problem, call, confidence, askConfidence, commit]);
+
+  const togglePause = useCallback(() => {
+    if (!clock.current) return;
+    const now = performance.now();
+    clock.current = paused ? resumeClock(clock.current, now) : pauseClock(clock.current, now);
+    setPaused(!paused);
+  }, [paused]);
+
+  const endBreak = useCallback(() => {
+    if (breakFor) breaksTaken.current.add(breakFor);
+    setBreakFor(null);
+    clockCase.current = null; // the clock starts at the next draw
+    setView((v) => ({ ...v }));
+  }, [breakFor]);
+
+  useEffect(() => {
+    const onKey = (event: KeyboardEvent) => {
+      const action = readingKeyAction(event);
+      if (!action) return;
+      event.preventDefault();
+      if (action.kind === 'pause') { if (breakFor) endBreak(); else togglePause(); return; }
+      if (paused || busy) return;
+      if (breakFor) { if (action.kind === 'commit') endBreak(); return; }
+      switch (action.kind) {
+        case 'call': setCall(action.call); break;
+        case 'confidence': setConfidence(action.value); break;
+        case 'confidence-step': setConfidence((c) => Math.min(100, Math.max(0, (c ?? 50) + action.step))); break;
+        case 'commit': void doCommit(); break;
+        case 'zoom': setView((v) => ({ ...v, zoom: Math.min(8, Math.max(0.5, v.zoom * action.factor)) })); break;
+        case 'reset-view': setView(DEFAULT_VIEW); break;
+        case 'image': setImageIndex((i) => Math.min(Math.max(0, i + action.step), (caseRecord?.images.length ?? 1) - 1)); break;
+      }
+    };
+    window.addEventListener('keydown', onKey);
+    return () => window.removeEventListener('keydown', onKey);
+  }, [paused, busy, breakFor, doCommit, togglePause, endBreak, caseRecord]);
+
+  if (error) return <main className="reading"><p role="alert">Cannot open this session: {error}</p></main>;
+  if (!loaded || !position) return <main className="reading" aria-busy="true"><p>Opening the session…</p></main>;
+  if (position.done) return <ReadingDone readerCode={loaded.readerCode} period={loaded.session.period} onBack={() => actions.openStudy(studyId)} />;
+
+  const { step } = position;
+  const current = position.item;
+  const shown = loaded.suggestions.get(suggestionKey(current.caseId, step.finding));
+  const visible = suggestionVisible(current.assistance, step.phase) && shown !== undefined;
+  const sequential = current.assistance === 'sequential';
+  const phaseLabel = sequential ? (step.phase === 'initial' ? 'first call' : 'final call') : 'call';
+  const findingCount = loaded.study.design.findings.length;
+
+  return (
+    <main className="reading" data-case={current.caseId} data-phase={step.phase} data-assistance={current.assistance}>
+      <header className="reading-bar">
+        <span className="reading-progress" aria-label="Progress">Case {position.caseNumber} of {position.caseCount}</span>
+        {current.practice && <span className="badge badge-practice">Practice case</span>}
+        {findingCount > 1 && <span>Question {loaded.study.design.findings.indexOf(step.finding) + 1} of {findingCount}</span>}
+        <span className="reading-reader">Reader {loaded.readerCode} · period {loaded.session.period}</span>
+        <button type="button" onClick={togglePause} disabled={!clockStarted}>{paused ? 'Resume' : 'Pause'} <kbd>Esc</kbd></button>
+      </header>
+      <div className="reading-body">
+        <div className="reading-image">
+          <ImageViewport image={image} view={view} onView={setView} hidden={paused || breakFor !== null || image === null} onDrawn={onDrawn} />
+          <div className="view-controls" aria-label="Image controls">
+            {caseRecord && caseRecord.images.length > 1 && (
+              <span>Image {imageIndex + 1} of {caseRecord.images.length} <kbd>[</kbd> <kbd>]</kbd></span>
+            )}
+            <label>Level <input type="range" min={0} max={255} value={view.level} onChange={(e) => setView({ ...view, level: Number(e.target.value) })} /></label>
+            <label>Width <input type="range" min={8} max={512} value={view.width} onChange={(e) => setView({ ...view, width: Number(e.target.value) })} /></label>
+            <button type="button" onClick={() => setView(DEFAULT_VIEW)}>Reset view <kbd>R</kbd></button>
+            <small>zoom: wheel or + −; pan: drag</small>
+          </div>
+        </div>
+        <aside className="reading-side">
+          {sequential && step.phase === 'final' && currentRead?.initial && (
+            <p className="locked-initial" aria-label="Your first call, locked">
+              Your first call (locked): {currentRead.initial.call === 1 ? 'present' : 'absent'}
+              {currentRead.initial.confidence !== null ? `, confidence ${currentRead.initial.confidence}` : ''}
+            </p>
+          )}
+          {visible && shown && (
+            <SuggestionPanel call={shown.call} score={loaded.study.design.showScore ? shown.score : null} caution={current.caution ? loaded.study.design.caution.text : null} />
+          )}
+          <AnswerPanel
+            question={`Finding “${step.finding}”: present or absent?`}
+            call={call} confidence={confidence} askConfidence={askConfidence} problem={problem} busy={busy}
+            phaseLabel={phaseLabel} onCall={setCall} onConfidence={setConfidence} onCommit={() => void doCommit()}
+          />
+        </aside>
+      </div>
+      <ReadingOverlay paused={paused} onBreak={breakFor !== null} onContinue={paused ? togglePause : endBreak} />
+    </main>
+  );
+};

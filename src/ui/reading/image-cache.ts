@@ -1,0 +1,24 @@
+/** Decoded images of a case set, loaded ahead so the next case paints in the next frame. */
+import type { HeedDb } from '../../store/db';
+import { getImage } from '../../store/case-sets';
+import { decodeGray, type GrayImage } from './gray-image';
+
+export type ImageCache = { get: (path: string) => Promise<GrayImage>; forget: (keep: ReadonlySet<string>) => void };
+
+export const createImageCache = (db: HeedDb, setId: string): ImageCache => {
+  const entries = new Map<string, Promise<GrayImage>>();
+  return {
+    get: (path) => {
+      let entry = entries.get(path);
+      if (!entry) {
+        entry = getImage(db, setId, path).then((stored) => decodeGray(stored.bytes, stored.mime));
+        entries.set(path, entry);
+        entry.catch(() => entries.delete(path));
+      }
+      return entry;
+    },
+    forget: (keep) => {
+      for (const path of entries.keys()) if (!keep.has(path)) entries.delete(path);
+    },
+  };
+};

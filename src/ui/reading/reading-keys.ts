@@ -1,0 +1,30 @@
+/** The reading view's keys, as named actions. Kept pure so the mapping is tested on its own. */
+import type { Bit } from '../../core/read-log';
+
+export type KeyAction =
+  | { kind: 'call'; call: Bit }
+  | { kind: 'confidence'; value: number }
+  | { kind: 'confidence-step'; step: number }
+  | { kind: 'commit' }
+  | { kind: 'pause' }
+  | { kind: 'zoom'; factor: number }
+  | { kind: 'reset-view' }
+  | { kind: 'image'; step: number };
+
+export const readingKeyAction = (event: Pick<KeyboardEvent, 'key' | 'ctrlKey' | 'metaKey' | 'altKey'>): KeyAction | null => {
+  if (event.ctrlKey || event.metaKey || event.altKey) return null;
+  const key = event.key;
+  if (key === 'p' || key === 'P') return { kind: 'call', call: 1 };
+  if (key === 'a' || key === 'A') return { kind: 'call', call: 0 };
+  if (/^[0-9]$/.test(key)) return { kind: 'confidence', value: key === '0' ? 100 : Number(key) * 10 };
+  if (key === 'ArrowUp') return { kind: 'confidence-step', step: 5 };
+  if (key === 'ArrowDown') return { kind: 'confidence-step', step: -5 };
+  if (key === 'Enter') return { kind: 'commit' };
+  if (key === 'Escape') return { kind: 'pause' };
+  if (key === '+' || key === '=') return { kind: 'zoom', factor: 1.25 };
+  if (key === '-' || key === '_') return { kind: 'zoom', factor: 0.8 };
+  if (key === 'r' || key === 'R') return { kind: 'reset-view' };
+  if (key === '[') return { kind: 'image', step: -1 };
+  if (key === ']') return { kind: 'image', step: 1 };
+  return null;
+};

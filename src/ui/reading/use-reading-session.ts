@@ -1,0 +1,70 @@
+/**
+ * Loads a reading session and commits its answers. The position always comes back from the
+ * store after a commit, so what the screen shows next is what the database holds.
+ */
+import { useCallback, useEffect, useState } from 'react';
+import type { CaseRecord } from '../../core/case-set';
+import type { Bit } from '../../core/read-log';
+import type { SessionPosition } from '../../core/session';
+import { indexSuggestions, suggestionKey } from '../../core/suggestions';
+import type { SuggestionRow } from '../../core/suggestions';
+import { getCaseSet } from '../../store/case-sets';
+import type { HeedDb } from '../../store/db';
+import type { StoredRead, StoredSession, StoredStudy } from '../../store/records';
+import { commitAnswer, getSession, readsOfSession, sessionPosition } from '../../store/sessions';
+import { getStudy } from '../../store/studies';
+
+export type LoadedSession = {
+  study: StoredStudy;
+  session: StoredSession;
+  setId: string;
+  cases: Map<string, CaseRecord>;
+  suggestions: Map<string, SuggestionRow>;
+  readerCode: string;
+};
+
+export const useReadingSession = (db: HeedDb, studyId: string, sessionId: string) => {
+  const [loaded, setLoaded] = useState<LoadedSession | null>(null);
+  const [position, setPosition] = useState<SessionPosition | null>(null);
+  const [reads, setReads] = useState<StoredRead[]>([]);
+  const [error, setError] = useState<string | null>(null);
+
+  useEffect(() => {
+    let live = true;
+    (async () => {
+      const study = await getStudy(db, studyId);
+      const session = await getSession(db, sessionId);
+      if (!session) throw new Error(`no session ${sessionId}`);
+      const caseSet = await getCaseSet(db, study.caseSetId);
+      const reader = await db.readers.get(session.readerId);
+      const next = await sessionPosition(db, session, study.design.findings);
+      const committed = await readsOfSession(db, session.id);
+      if (!live) return;
+      setLoaded({
+        study, session, setId: caseSet.id, readerCode: reader?.code ?? '?',
+        cases: new Map(caseSet.manifest.cases.map((c) => [c.caseId, c])),
+        suggestions: indexSuggestions(study.suggestions),
+      });
+      setReads(committed);
+      setPosition(next);
+    })().catch((e: unknown) => { if (live) setError(e instanceof Error ? e.message : String(e)); });
+    return () => { live = false; };
+  }, [db, studyId, sessionId]);
+
+  const commit = useCallback(async (answer: { call: Bit; confidence: number | null; ms: number; shownAt: string }) => {
+    if (!loaded || !position || position.done) return;
+    const { step, item } = position;
+    const shown = loaded.suggestions.get(suggestionKey(item.caseId, step.finding));
+    const aided = item.assistance !== 'none';
+    const next = await commitAnswer(db, {
+      session: loaded.session, findings: loaded.study.design.findings, step,
+      call: answer.call, confidence: answer.confidence, ms: answer.ms, shownAt: answer.shownAt,
+      suggestion: aided && shown ? { call: shown.call, score: loaded.study.design.showScore ? shown.score : null, planted: shown.planted } : null,
+      cautionShown: aided && item.caution,
+    });
+    setReads(await readsOfSession(db, loaded.session.id));
+    setPosition(next);
+  }, [db, loaded, position]);
+
+  return { loaded, position, reads, error, commit };
+};

@@ -1,0 +1,62 @@
+/** The fields of a study design: conditions, crossover, suggestion display, planted errors, notice. */
+import type { StoredCaseSet } from '../../store/records';
+import type { DesignFormValues } from './design-form-state';
+
+type Props = { values: DesignFormValues; caseSet: StoredCaseSet; onChange: (v: DesignFormValues) => void };
+
+export const DesignFields = ({ values: v, caseSet, onChange }: Props) => {
+  const set = <K extends keyof DesignFormValues>(key: K, value: DesignFormValues[K]) => onChange({ ...v, [key]: value });
+  return (
+    <>
+      <fieldset>
+        <legend>Findings asked</legend>
+        {caseSet.manifest.findings.map((f) => (
+          <label key={f} className="inline">
+            <input type="checkbox" checked={v.findings.includes(f)}
+              onChange={(e) => set('findings', e.target.checked ? caseSet.manifest.findings.filter((x) => x === f || v.findings.includes(x)) : v.findings.filter((x) => x !== f))} />
+            {f}
+          </label>
+        ))}
+      </fieldset>
+      <fieldset>
+        <legend>Conditions and crossover</legend>
+        <label>Aided condition
+          <select value={v.aidedMode} onChange={(e) => set('aidedMode', e.target.value === 'concurrent' ? 'concurrent' : 'sequential')}>
+            <option value="sequential">sequential: first call, then the suggestion, then the final call</option>
+            <option value="concurrent">concurrent: suggestion shown from the start</option>
+          </select>
+        </label>
+        <p className="muted">Two sequences: unaided then aided (UA), and aided then unaided (AU); readers are assigned to them balanced.</p>
+        <label>Washout days <input inputMode="numeric" value={v.washoutDays} onChange={(e) => set('washoutDays', e.target.value)} /></label>
+        <label>Blocks <input inputMode="numeric" value={v.blocks} onChange={(e) => set('blocks', e.target.value)} />
+          <small>1: every case in every period; 2: cases split in two blocks, each read once per condition</small></label>
+        <label>Break every N cases <input inputMode="numeric" value={v.breakEvery} placeholder="no breaks" onChange={(e) => set('breakEvery', e.target.value)} /></label>
+        <label>Seed <input inputMode="numeric" value={v.seed} onChange={(e) => set('seed', e.target.value)} />
+          <small>every random choice of the study (order, assignment, planted errors, notices) follows from it</small></label>
+      </fieldset>
+      <fieldset>
+        <legend>Suggestion</legend>
+        <label>Threshold for a “present” call <input inputMode="decimal" value={v.threshold} onChange={(e) => set('threshold', e.target.value)} /></label>
+        <label className="inline"><input type="checkbox" checked={v.showScore} onChange={(e) => set('showScore', e.target.checked)} /> Show the score beside the call</label>
+        <label className="inline"><input type="checkbox" checked={v.askConfidence} onChange={(e) => set('askConfidence', e.target.checked)} /> Ask readers for their confidence</label>
+      </fieldset>
+      <fieldset>
+        <legend>Planted errors</legend>
+        <label>Planted as <select value={v.plantMode} onChange={(e) => set('plantMode', e.target.value === 'rate' ? 'rate' : 'count')}>
+          <option value="count">a count of case-findings</option><option value="rate">a rate of eligible case-findings</option></select></label>
+        <label>False-positive suggestions <input inputMode="decimal" value={v.plantedFalsePositive} onChange={(e) => set('plantedFalsePositive', e.target.value)} /></label>
+        <label>False-negative suggestions <input inputMode="decimal" value={v.plantedFalseNegative} onChange={(e) => set('plantedFalseNegative', e.target.value)} /></label>
+        <label>Spread across <select value={v.stratifyBy} onChange={(e) => set('stratifyBy', e.target.value)}>
+          <option value="">the whole set</option>
+          {caseSet.manifest.attributeNames.map((a) => <option key={a} value={a}>each {a}</option>)}
+        </select></label>
+      </fieldset>
+      <fieldset>
+        <legend>Caution notice</legend>
+        <label>Shown <select value={v.cautionMode} onChange={(e) => set('cautionMode', e.target.value === 'all' ? 'all' : e.target.value === 'random-half' ? 'random-half' : 'off')}>
+          <option value="off">never</option><option value="all">with every aided read</option><option value="random-half">with a random half of aided reads</option></select></label>
+        <label>Notice text <textarea rows={2} value={v.cautionText} onChange={(e) => set('cautionText', e.target.value)} /></label>
+      </fieldset>
+    </>
+  );
+};

@@ -1,0 +1,73 @@
+/** The start screen: the caution, the case sets, the studies, and any reading left unfinished. */
+import { useCallback, useEffect } from 'react';
+import { listCaseSets } from '../../store/case-sets';
+import { listStudies } from '../../store/studies';
+import { unfinishedSessions } from '../../store/progress';
+import { CautionLine } from '../components/CautionLine';
+import { useDb } from '../db-context';
+import { ensureDemoCaseSet } from '../services/demo-set';
+import { signal } from '../signals';
+import { actions } from '../state/app-state';
+import { useAsync } from '../use-async';
+import { CaseSetList } from './CaseSetList';
+
+export const HomeScreen = () => {
+  const db = useDb();
+  const home = useAsync(useCallback(async () => {
+    await ensureDemoCaseSet(db);
+    const [caseSets, studies, unfinished] = await Promise.all([listCaseSets(db), listStudies(db), unfinishedSessions(db)]);
+    return { caseSets, studies, unfinished };
+  }, [db]));
+
+  useEffect(() => {
+    if (home.value) signal('ready', { screen: 'home' });
+  }, [home.value]);
+
+  return (
+    <main className="page">
+      <header className="page-head">
+        <h1>Heed</h1>
+        <p className="tagline">Local reading sessions that show how readers use a model’s suggestions.</p>
+        <CautionLine />
+      </header>
+      {home.error && <p role="alert">Could not open the database: {home.error.message}</p>}
+      {!home.value && !home.error && <p aria-busy="true">Preparing the demo case set…</p>}
+      {home.value && (
+        <>
+          {home.value.unfinished.length > 0 && (
+            <section className="panel panel-accent" aria-labelledby="resume-head">
+              <h2 id="resume-head">Unfinished reading</h2>
+              <ul className="plain">
+                {home.value.unfinished.map((u) => (
+                  <li key={u.session.id}>
+                    <button type="button" onClick={() => actions.startReading(u.session.studyId, u.session.id)}>
+                      Resume {u.readerCode}, period {u.session.period} of “{u.studyName}”
+                    </button>
+                    <span className="muted"> {u.answeredCases} of {u.session.items.length} cases answered</span>
+                  </li>
+                ))}
+              </ul>
+            </section>
+          )}
+          <section className="panel" aria-labelledby="studies-head">
+            <div className="panel-head">
+              <h2 id="studies-head">Studies</h2>
+              <button type="button" className="primary" onClick={actions.newStudy}>New study</button>
+            </div>
+            {home.value.studies.length === 0 ? <p className="muted">No study yet. Start one on the demo case set.</p> : (
+              <ul className="plain">
+                {home.value.studies.map((s) => (
+                  <li key={s.id}>
+                    <button type="button" className="link" onClick={() => actions.openStudy(s.id)}>{s.name}</button>
+                    <span className="muted"> {s.lockedAt ? 'reading under way (design locked)' : 'draft'}</span>
+                  </li>
+                ))}
+              </ul>
+            )}
+          </section>
+          <CaseSetList caseSets={home.value.caseSets} onChanged={home.reload} />
+        </>
+      )}
+    </main>
+  );
+};

@@ -1,0 +1,85 @@
+/** Readers with their sequence and progress per period; opening a period, or resuming it. */
+import { useState } from 'react';
+import type { StoredStudy } from '../../store/records';
+import { openPeriod } from '../../store/study-service';
+import { InputError } from '../../store/input-error';
+import { useDb } from '../db-context';
+import { actions } from '../state/app-state';
+import type { PeriodProgress, ReaderProgress } from './study-progress';
+
+type Props = { study: StoredStudy; progress: ReaderProgress[]; onChanged: () => void };
+
+type EarlyRequest = { readerId: string; period: number; message: string };
+
+export const ReaderTable = ({ study, progress, onChanged }: Props) => {
+  const db = useDb();
+  const [early, setEarly] = useState<EarlyRequest | null>(null);
+  const [reason, setReason] = useState('');
+  const [by, setBy] = useState('');
+  const [problem, setProblem] = useState<string | null>(null);
+  const periodCount = study.design.sequences[0]?.periods.length ?? 0;
+
+  const open = async (row: ReaderProgress, period: number, withOverride: boolean) => {
+    setProblem(null);
+    try {
+      const override = withOverride ? { reason, by, at: new Date().toISOString() } : null;
+      const result = await openPeriod(db, study, row.reader, period, override);
+      if (result.open) { setEarly(null); actions.startReading(study.id, result.session.id); return; }
+      if (withOverride) setProblem(result.message);
+      else setEarly({ readerId: row.reader.id, period, message: result.message });
+      onChanged();
+    } catch (e) {
+      setProblem(e instanceof InputError ? e.message : String(e));
+    }
+  };
+
+  const cell = (row: ReaderProgress, p: PeriodProgress) => {
+    const assistance = study.design.sequences[row.reader.sequenceIndex]?.periods[p.period - 1] ?? 'none';
+    const label = `${row.reader.code} period ${p.period}`;
+    if (p.session?.completedAt) return <span>{p.answered}/{p.total} done</span>;
+    const previousDone = p.period === 1 || row.periods[p.period - 2]?.session?.completedAt;
+    return (
+      <span className="cell-actions">
+        <span className="muted">{assistance === 'none' ? 'unaided' : assistance} · {p.session ? `${p.answered}/${p.total}` : 'not started'}</span>
+        <button type="button" disabled={!previousDone} onClick={() => void open(row, p.period, false)} aria-label={`${p.session ? 'Resume' : 'Start'} ${label}`}>
+          {p.session ? 'Resume' : 'Start'}
+        </button>
+      </span>
+    );
+  };
+
+  return (
+    <section className="panel" aria-labelledby="readers-head">
+      <h2 id="readers-head">Readers</h2>
+      {progress.length === 0 ? <p className="muted">No reader enrolled yet.</p> : (
+        <table className="grid">
+          <thead>
+            <tr><th scope="col">Code</th><th scope="col">Role</th><th scope="col">Years</th><th scope="col">Sequence</th>
+              {Array.from({ length: periodCount }, (_, i) => <th scope="col" key={i}>Period {i + 1}</th>)}</tr>
+          </thead>
+          <tbody>
+            {progress.map((row) => (
+              <tr key={row.reader.id}>
+                <td>{row.reader.code}</td><td>{row.reader.role}</td><td>{row.reader.years ?? '—'}</td><td>{row.sequenceLabel}</td>
+                {row.periods.map((p) => <td key={p.period}>{cell(row, p)}</td>)}
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      )}
+      {early && (
+        <div className="panel-inner" role="group" aria-label="Washout not over">
+          <p>{early.message}</p>
+          <label>Reason for opening early <input value={reason} onChange={(e) => setReason(e.target.value)} /></label>
+          <label>Allowed by <input value={by} onChange={(e) => setBy(e.target.value)} placeholder="coordinator’s name or code" /></label>
+          <button type="button" onClick={() => {
+            const row = progress.find((r) => r.reader.id === early.readerId);
+            if (row) void open(row, early.period, true);
+          }}>Open early (logged)</button>
+          <button type="button" onClick={() => setEarly(null)}>Wait</button>
+        </div>
+      )}
+      {problem && <p role="alert" className="form-problem">{problem}</p>}
+    </section>
+  );
+};

@@ -1,0 +1,69 @@
+/** The new-study form's values, and how they become a StudyDesign. */
+import { defaultDesign, type Assistance, type CautionMode, type StudyDesign } from '../../core/design';
+
+export type DesignFormValues = {
+  name: string;
+  caseSetId: string;
+  findings: string[];
+  aidedMode: Exclude<Assistance, 'none'>;
+  washoutDays: string;
+  threshold: string;
+  showScore: boolean;
+  askConfidence: boolean;
+  plantedFalsePositive: string;
+  plantedFalseNegative: string;
+  plantMode: 'count' | 'rate';
+  stratifyBy: string;
+  cautionMode: CautionMode;
+  cautionText: string;
+  blocks: string;
+  breakEvery: string;
+  seed: string;
+};
+
+export const initialFormValues = (caseSetId: string, findings: string[]): DesignFormValues => {
+  const d = defaultDesign(findings);
+  return {
+    name: '', caseSetId, findings, aidedMode: 'sequential', washoutDays: String(d.washoutDays), threshold: String(d.threshold),
+    showScore: d.showScore, askConfidence: d.askConfidence, plantedFalsePositive: '0', plantedFalseNegative: '0', plantMode: 'count',
+    stratifyBy: '', cautionMode: d.caution.mode, cautionText: d.caution.text, blocks: '1', breakEvery: '', seed: String(d.seed),
+  };
+};
+
+const numberField = (label: string, text: string, problems: string[]): number => {
+  const value = Number(text.trim());
+  if (text.trim() === '' || !Number.isFinite(value)) problems.push(`${label}: "${text}" is not a number.`);
+  return value;
+};
+
+/** The design the form describes, or the plain-language problems with the form. */
+export const designFromForm = (v: DesignFormValues): { design: StudyDesign } | { problems: string[] } => {
+  const problems: string[] = [];
+  if (v.name.trim() === '') problems.push('Study name: give the study a name.');
+  if (v.findings.length === 0) problems.push('Findings: choose at least one finding to ask.');
+  const washoutDays = numberField('Washout days', v.washoutDays, problems);
+  const threshold = numberField('Threshold', v.threshold, problems);
+  const fp = numberField('Planted false-positive suggestions', v.plantedFalsePositive, problems);
+  const fn = numberField('Planted false-negative suggestions', v.plantedFalseNegative, problems);
+  const blocks = numberField('Blocks', v.blocks, problems);
+  const seed = numberField('Seed', v.seed, problems);
+  const breakEvery = v.breakEvery.trim() === '' ? null : numberField('Break every', v.breakEvery, problems);
+  if (problems.length > 0) return { problems };
+  return {
+    design: {
+      ...defaultDesign(v.findings),
+      sequences: [
+        { label: 'UA', periods: ['none', v.aidedMode] },
+        { label: 'AU', periods: [v.aidedMode, 'none'] },
+      ],
+      washoutDays, threshold, showScore: v.showScore, askConfidence: v.askConfidence,
+      caution: { mode: v.cautionMode, text: v.cautionText },
+      planted: {
+        falsePositive: { mode: v.plantMode, value: fp },
+        falseNegative: { mode: v.plantMode, value: fn },
+        stratifyBy: v.stratifyBy === '' ? null : v.stratifyBy,
+      },
+      blocks, breakEvery, seed,
+    },
+  };
+};

@@ -1,0 +1,33 @@
+/** Everything the study screen shows about its readers, loaded in one go. */
+import { answeredCases } from '../../store/progress';
+import type { HeedDb } from '../../store/db';
+import { listReaders } from '../../store/readers';
+import type { StoredReader, StoredSession, StoredStudy } from '../../store/records';
+import { sessionsOfStudy } from '../../store/sessions';
+import { getStudy } from '../../store/studies';
+import { getCaseSet } from '../../store/case-sets';
+
+export type PeriodProgress = { period: number; session: StoredSession | null; answered: number; total: number };
+export type ReaderProgress = { reader: StoredReader; sequenceLabel: string; periods: PeriodProgress[] };
+
+export const loadStudyProgress = async (db: HeedDb, studyId: string) => {
+  const study: StoredStudy = await getStudy(db, studyId);
+  const caseSet = await getCaseSet(db, study.caseSetId);
+  const readers = await listReaders(db, studyId);
+  const sessions = await sessionsOfStudy(db, studyId);
+  const periodCount = study.design.sequences[0]?.periods.length ?? 0;
+  const caseCount = caseSet.manifest.cases.length;
+  const progress: ReaderProgress[] = [];
+  for (const reader of readers) {
+    const periods: PeriodProgress[] = [];
+    for (let period = 1; period <= periodCount; period++) {
+      const session = sessions.find((s) => s.readerId === reader.id && s.period === period) ?? null;
+      periods.push({
+        period, session, total: session?.items.length ?? caseCount,
+        answered: session ? await answeredCases(db, session, study.design.findings.length) : 0,
+      });
+    }
+    progress.push({ reader, sequenceLabel: study.design.sequences[reader.sequenceIndex]?.label ?? '?', periods });
+  }
+  return { study, caseSet, progress };
+};

@@ -1,0 +1,41 @@
+/**
+ * The one module that owns the app's state: which screen is open, and a notice line.
+ * Screens change it only through the named actions below.
+ */
+import { useSyncExternalStore } from 'react';
+
+export type Screen =
+  | { name: 'home' }
+  | { name: 'new-study' }
+  | { name: 'study'; studyId: string }
+  | { name: 'results'; studyId: string }
+  | { name: 'read'; sessionId: string; studyId: string };
+
+export type Notice = { kind: 'info' | 'error'; text: string };
+
+export type AppState = { screen: Screen; notice: Notice | null };
+
+let state: AppState = { screen: { name: 'home' }, notice: null };
+const listeners = new Set<() => void>();
+
+const set = (next: AppState): void => {
+  state = next;
+  for (const listener of listeners) listener();
+};
+
+export const actions = {
+  goHome: (): void => set({ screen: { name: 'home' }, notice: null }),
+  newStudy: (): void => set({ screen: { name: 'new-study' }, notice: null }),
+  openStudy: (studyId: string, notice: Notice | null = null): void => set({ screen: { name: 'study', studyId }, notice }),
+  openResults: (studyId: string): void => set({ screen: { name: 'results', studyId }, notice: null }),
+  startReading: (studyId: string, sessionId: string): void => set({ screen: { name: 'read', studyId, sessionId }, notice: null }),
+  notify: (notice: Notice): void => set({ ...state, notice }),
+  clearNotice: (): void => set({ ...state, notice: null }),
+};
+
+const subscribe = (listener: () => void): (() => void) => {
+  listeners.add(listener);
+  return () => listeners.delete(listener);
+};
+
+export const useAppState = (): AppState => useSyncExternalStore(subscribe, () => state);
