@@ -94,7 +94,12 @@ export const ReadingScreen = ({ studyId, sessionId }: Props) => {
     const ms = elapsedMs(clock.current, performance.now());
     setBusy(true);
     try {
-      await commit({ call, confidence: askConfidence ? confidence : null, ms, shownAt: shownAt.current });
+      const next = await commit({ call, confidence: askConfidence ? confidence : null, ms, shownAt: shownAt.current });
+      if (!next || next.done || next.item.caseId !== clockCase.current) {
+        // a new case: no answer is taken until its own image is drawn and its clock starts
+        clock.current = null;
+        setClockStarted(false);
+      }
       setCall(null);
       setConfidence(null);
       signal('saved');

@@ -51,8 +51,8 @@ export const useReadingSession = (db: HeedDb, studyId: string, sessionId: string
     return () => { live = false; };
   }, [db, studyId, sessionId]);
 
-  const commit = useCallback(async (answer: { call: Bit; confidence: number | null; ms: number; shownAt: string }) => {
-    if (!loaded || !position || position.done) return;
+  const commit = useCallback(async (answer: { call: Bit; confidence: number | null; ms: number; shownAt: string }): Promise<SessionPosition | null> => {
+    if (!loaded || !position || position.done) return null;
     const { step, item } = position;
     const shown = loaded.suggestions.get(suggestionKey(item.caseId, step.finding));
     const aided = item.assistance !== 'none';
@@ -64,6 +64,7 @@ export const useReadingSession = (db: HeedDb, studyId: string, sessionId: string
     });
     setReads(await readsOfSession(db, loaded.session.id));
     setPosition(next);
+    return next;
   }, [db, loaded, position]);
 
   return { loaded, position, reads, error, commit };

@@ -1,0 +1,108 @@
+/**
+ * Page objects: what a coordinator or reader does, found by role and accessible name. Waits are
+ * on the app's own signals (src/ui/signals.ts), never on fixed sleeps.
+ */
+import type { Page } from 'playwright-core';
+import { signalCount, waitForSignal } from './chromium';
+
+export type DesignChoices = {
+  name: string;
+  aidedMode?: 'sequential' | 'concurrent';
+  washoutDays?: number;
+  plantedFalsePositive?: number;
+  plantedFalseNegative?: number;
+  caution?: 'never' | 'with every aided read' | 'with a random half of aided reads';
+  findings?: string[];
+  caseSet?: string;
+};
+
+export const homePage = (page: Page) => ({
+  waitUntilReady: async () => { await waitForSignal(page, 'ready'); await page.getByRole('heading', { name: 'Heed', level: 1 }).waitFor(); },
+  newStudy: async (d: DesignChoices) => {
+    await page.getByRole('button', { name: 'New study' }).click();
+    await page.getByLabel('Study name').fill(d.name);
+    if (d.caseSet) await page.getByLabel('Case set').selectOption({ label: d.caseSet });
+    if (d.findings) {
+      for (const box of await page.getByRole('group', { name: 'Findings asked' }).getByRole('checkbox').all()) {
+        const label = (await box.evaluate((el) => el.parentElement?.textContent ?? '')).trim();
+        await box.setChecked(d.findings.includes(label));
+      }
+    }
+    if (d.aidedMode) await page.getByLabel('Aided condition').selectOption(d.aidedMode);
+    if (d.washoutDays !== undefined) await page.getByLabel('Washout days').fill(String(d.washoutDays));
+    if (d.plantedFalsePositive !== undefined) await page.getByLabel('False-positive suggestions').fill(String(d.plantedFalsePositive));
+    if (d.plantedFalseNegative !== undefined) await page.getByLabel('False-negative suggestions').fill(String(d.plantedFalseNegative));
+    if (d.caution) await page.getByLabel('Shown').selectOption({ label: d.caution });
+    await page.getByRole('button', { name: 'Create study' }).click();
+    await page.getByRole('heading', { name: d.name, level: 1 }).waitFor();
+  },
+  resume: async (text: RegExp) => { await page.getByRole('button', { name: text }).click(); },
+  openStudy: async (name: string) => { await page.getByRole('button', { name }).click(); await page.getByRole('heading', { name, level: 1 }).waitFor(); },
+});
+
+export const studyPage = (page: Page) => ({
+  enrol: async (code: string, role = 'radiologist', years?: number) => {
+    await page.getByLabel('Reader code').fill(code);
+    await page.getByLabel('Role').selectOption(role);
+    await page.getByLabel('Years of experience').fill(years === undefined ? '' : String(years));
+    await page.getByRole('button', { name: 'Enrol' }).click();
+  },
+  enrolled: async (code: string) => { await page.getByRole('cell', { name: code, exact: true }).waitFor(); },
+  enrolProblem: () => page.getByRole('alert').first().textContent(),
+  sequenceOf: async (code: string) => {
+    const row = page.getByRole('row').filter({ has: page.getByRole('cell', { name: code, exact: true }) });
+    return (await row.getByRole('cell').nth(3).textContent())?.trim() ?? '';
+  },
+  startPeriod: async (code: string, period: number) => {
+    const before = await signalCount(page, 'case-painted');
+    await page.getByRole('button', { name: new RegExp(`^(Start|Resume) ${code} period ${period}$`) }).click();
+    return before;
+  },
+  openEarly: async (reason: string, by: string) => {
+    await page.getByLabel('Reason for opening early').fill(reason);
+    await page.getByLabel('Allowed by').fill(by);
+    await page.getByRole('button', { name: 'Open early (logged)' }).click();
+  },
+  /** Clicks an export button and returns the downloaded file's text. */
+  exportText: async (button: RegExp): Promise<string> => {
+    const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: button }).click()]);
+    const path = await download.path();
+    const { readFileSync } = await import('node:fs');
+    return readFileSync(path, 'utf8');
+  },
+});
+
+export type ReadingState = { caseId: string; phase: string; assistance: string; progress: string };
+
+export const readingPage = (page: Page) => {
+  const state = async (): Promise<ReadingState> => {
+    const main = page.locator('main.reading');
+    return {
+      caseId: (await main.getAttribute('data-case')) ?? '',
+      phase: (await main.getAttribute('data-phase')) ?? '',
+      assistance: (await main.getAttribute('data-assistance')) ?? '',
+      progress: (await page.getByLabel('Progress').textContent()) ?? '',
+    };
+  };
+  return {
+    state,
+    /** Waits until the current case's image has been painted `after` + 1 times in total. */
+    waitForCase: (after: number) => waitForSignal(page, 'case-painted', after),
+    suggestionText: async () => (await page.getByRole('region', { name: 'Model suggestion' }).count()) > 0
+      ? (await page.getByRole('region', { name: 'Model suggestion' }).textContent()) ?? '' : null,
+    /** Answers the current question with the keyboard only: P or A, a digit for confidence, Enter. */
+    answerByKeys: async (call: 0 | 1, confidenceDigit: number) => {
+      const saved = await signalCount(page, 'saved');
+      const painted = await signalCount(page, 'case-painted');
+      const before = (await state()).caseId;
+      await page.keyboard.press(call === 1 ? 'p' : 'a');
+      await page.keyboard.press(String(confidenceDigit));
+      await page.keyboard.press('Enter');
+      await waitForSignal(page, 'saved', saved);
+      // a new case is answerable once its image is painted (the clock starts then)
+      const main = page.locator('main.reading[data-case]');
+      if ((await main.count()) > 0 && (await main.getAttribute('data-case')) !== before) await waitForSignal(page, 'case-painted', painted);
+    },
+    isDone: async () => (await page.getByRole('heading', { name: /Period \d+ complete/ }).count()) > 0,
+  };
+};
