@@ -1,0 +1,57 @@
+// The header of cases.csv: which column is which (SPEC Contract 4).
+import type { Problems } from './problems';
+
+export const REQUIRED = ['case_id', 'finding', 'truth', 'image'] as const;
+export const OPTIONAL = ['model_score', 'model_call', 'practice'] as const;
+const KNOWN: readonly string[] = [...REQUIRED, ...OPTIONAL];
+export const ATTRIBUTE_PREFIX = 'case_';
+
+export type Columns = {
+  /** index of each known column present */
+  index: Record<string, number>;
+  /** attribute name (without prefix) and its column index, in column order */
+  attributes: { name: string; index: number }[];
+  /** columns Heed does not use, left out of the manifest */
+  ignored: string[];
+  width: number;
+};
+
+/** Reads the header; returns null (with problems added) when the file cannot be used at all. */
+export const readColumns = (file: string, cells: string[], problems: Problems): Columns | null => {
+  const index: Record<string, number> = {};
+  const attributes: Columns['attributes'] = [];
+  const ignored: string[] = [];
+  let usable = true;
+  cells.forEach((cell, i) => {
+    const name = cell.trim();
+    if (name === '') {
+      problems.add(file, 1, null, `column ${i + 1} of the header has no name`);
+      usable = false;
+      return;
+    }
+    const first = cells.findIndex((c) => c.trim() === name);
+    if (first !== i) {
+      problems.add(file, 1, name, `column ${name} appears twice (columns ${first + 1} and ${i + 1})`);
+      usable = false;
+      return;
+    }
+    if (KNOWN.includes(name)) index[name] = i;
+    else if (name.startsWith(ATTRIBUTE_PREFIX) && name !== 'case_id') {
+      const attribute = name.slice(ATTRIBUTE_PREFIX.length);
+      if (attribute === '') {
+        problems.add(file, 1, name, `column ${name} needs a name after "${ATTRIBUTE_PREFIX}", e.g. case_site`);
+        usable = false;
+      } else {
+        attributes.push({ name: attribute, index: i });
+      }
+    } else ignored.push(name);
+  });
+  for (const name of REQUIRED) {
+    if (index[name] !== undefined) continue;
+    const near = cells.find((c) => c.trim().toLowerCase() === name);
+    const hint = near ? ` (found "${near.trim()}": column names are lower case)` : '';
+    problems.add(file, 1, name, `required column ${name} is missing${hint}; cases.csv needs ${REQUIRED.join(', ')}`);
+    usable = false;
+  }
+  return usable ? { index, attributes, ignored, width: cells.length } : null;
+};
