@@ -1,4 +1,4 @@
-import { midranks } from './midrank';
+import { lowerBound, midranksOf, toFloat64 } from './midrank';
 import { Z95 } from './wilson';
 
 /**
@@ -17,12 +17,15 @@ export const placements = (positives: ArrayLike<number>, negatives: ArrayLike<nu
   const m = positives.length;
   const n = negatives.length;
   if (m === 0 || n === 0) throw new RangeError(`AUC needs both classes: ${m} positives, ${n} negatives`);
+  const x = toFloat64(positives, 'AUC positives');
+  const y = toFloat64(negatives, 'AUC negatives');
+  if (m + n < RADIX_FROM) return placementsByCounts(x, y);
   const pooled = new Float64Array(m + n);
-  for (let i = 0; i < m; i++) pooled[i] = positives[i] as number;
-  for (let j = 0; j < n; j++) pooled[m + j] = negatives[j] as number;
-  const tz = midranks(pooled);
-  const tx = midranks(positives);
-  const ty = midranks(negatives);
+  pooled.set(x);
+  pooled.set(y, m);
+  const tz = midranksOf(pooled);
+  const tx = midranksOf(x);
+  const ty = midranksOf(y);
   const v10 = new Float64Array(m);
   const v01 = new Float64Array(n);
   let sum = 0;
@@ -34,6 +37,46 @@ export const placements = (positives: ArrayLike<number>, negatives: ArrayLike<nu
   for (let j = 0; j < n; j++) v01[j] = 1 - ((tz[m + j] as number) - (ty[j] as number)) / m;
   return { v10, v01, auc: sum / m };
 };
+
+// Small samples: Tz[i] − Tx[i] is the number of negatives below positive i plus half those tied
+// with it (and likewise for negatives), so one sweep over the distinct values of both sorted
+// classes gives every placement; each value then finds its distinct value by binary search.
+const placementsByCounts = (x: Float64Array, y: Float64Array): Placements => {
+  const m = x.length;
+  const n = y.length;
+  const xs = x.slice().sort();
+  const ys = y.slice().sort();
+  const values = new Float64Array(m + n);
+  const negBelowHalf = new Float64Array(m + n);
+  const posAboveHalf = new Float64Array(m + n);
+  let d = 0;
+  let i = 0;
+  let j = 0;
+  while (i < m || j < n) {
+    const v = Math.min(i < m ? (xs[i] as number) : Infinity, j < n ? (ys[j] as number) : Infinity);
+    const i0 = i;
+    const j0 = j;
+    while (i < m && xs[i] === v) i++;
+    while (j < n && ys[j] === v) j++;
+    values[d] = v;
+    negBelowHalf[d] = (j0 + (j - j0) / 2) / n;
+    posAboveHalf[d] = (m - i + (i - i0) / 2) / m;
+    d++;
+  }
+  const distinct = values.subarray(0, d);
+  const v10 = new Float64Array(m);
+  const v01 = new Float64Array(n);
+  let sum = 0;
+  for (let k = 0; k < m; k++) {
+    const p = negBelowHalf[lowerBound(distinct, x[k] as number)] as number;
+    v10[k] = p;
+    sum += p;
+  }
+  for (let k = 0; k < n; k++) v01[k] = posAboveHalf[lowerBound(distinct, y[k] as number)] as number;
+  return { v10, v01, auc: sum / m };
+};
+
+const RADIX_FROM = 8192;
 
 /** Sample covariance (denominator k − 1) of two equal-length arrays; null when k < 2. */
 export const sampleCovariance = (a: ArrayLike<number>, b: ArrayLike<number>): number | null => {

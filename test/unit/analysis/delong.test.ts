@@ -41,3 +41,24 @@ describe('placements / delongAuc', () => {
     expect(aucSummary([], [1])).toEqual({ estimate: null, se: null, lower: null, upper: null });
   });
 });
+
+describe('placements on large samples (radix midrank path)', () => {
+  it('matches placements counted on the distinct-value histogram', () => {
+    // 11,000 scores pass the small-sample threshold, so midranks come from the radix argsort
+    const pos = Array.from({ length: 6000 }, (_, i) => ((i * 7919) % 1000) / 10 + 5);
+    const neg = Array.from({ length: 5000 }, (_, i) => -(((i * 104729) % 997) / 10) + 90);
+    const negAt = new Map<number, number>();
+    const posAt = new Map<number, number>();
+    for (const v of neg) negAt.set(v, (negAt.get(v) ?? 0) + 1);
+    for (const v of pos) posAt.set(v, (posAt.get(v) ?? 0) + 1);
+    const share = (at: Map<number, number>, total: number, v: number, above: boolean) => {
+      let s = 0;
+      for (const [w, c] of at) s += (above ? w > v : w < v) ? c : w === v ? c / 2 : 0;
+      return s / total;
+    };
+    const p = placements(pos, neg);
+    for (const i of [0, 1, 17, 2500, 5999]) expect(p.v10[i]).toBeCloseTo(share(negAt, neg.length, pos[i] as number, false), 12);
+    for (const j of [0, 3, 999, 4999]) expect(p.v01[j]).toBeCloseTo(share(posAt, pos.length, neg[j] as number, true), 12);
+    expect(p.auc).toBeCloseTo(p.v01.reduce((a, b) => a + b, 0) / neg.length, 12);
+  });
+});
