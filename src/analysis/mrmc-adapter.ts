@@ -1,0 +1,26 @@
+// The one place the engine meets the Obuchowski-Rockette analysis, so its shape stays in one file.
+import type { ReadRow } from '../core/read-log';
+import { fullyCrossed } from './fully-crossed';
+import { obuchowskiRockette, type ORResult } from './obuchowski-rockette';
+
+export type MrmcResult = ORResult;
+
+export type Mrmc = { result: MrmcResult | null; note: string | null };
+
+/**
+ * Obuchowski-Rockette analysis (with Hillis' degrees of freedom) of the reader-averaged AUC
+ * difference, aided minus unaided, for one finding's non-practice reads when the design is
+ * fully crossed; otherwise result is null and note says why. A RangeError from the analysis
+ * (e.g. a degenerate data set) also gives null with its message as the note.
+ * Example: mrmc(reads).result?.random.p.
+ */
+export const mrmc = (reads: readonly ReadRow[]): Mrmc => {
+  const crossing = fullyCrossed(reads);
+  if (crossing.input === null) return { result: null, note: `not fully crossed: ${crossing.reason}` };
+  try {
+    return { result: obuchowskiRockette({ scores: crossing.input.scores, truth: crossing.input.truth }), note: null };
+  } catch (error) {
+    if (error instanceof RangeError) return { result: null, note: error.message };
+    throw error;
+  }
+};

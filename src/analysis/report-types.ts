@@ -1,0 +1,47 @@
+// The shape of `heed analyze --json` (SPEC Contract 3), as analyzeReads returns it.
+import type { ReadersAgreement } from './fleiss-readers';
+import type { MrmcResult } from './mrmc-adapter';
+import type { ReaderAveraged } from './reader-bootstrap';
+import type { Sections } from './sections';
+import type { SubgroupEntry } from './subgroups';
+
+/** One reader and finding: Contract 3's unaided / aided / sequential / crossover, plus more. */
+export type ReaderEntry = Sections & {
+  reader_id: string;
+  reader_role: string;
+  finding: string;
+  subgroups: SubgroupEntry[];
+};
+
+export type GroupFinding = {
+  finding: string;
+  readers: number;
+  cases: number;
+  /** all readers' reads taken together */
+  pooled: Sections;
+  /** means over readers, with two-way bootstrap intervals */
+  reader_averaged: ReaderAveraged;
+  /** Fleiss' kappa of final calls across readers, per condition */
+  fleiss_kappa: { unaided: ReadersAgreement; aided: ReadersAgreement };
+  /** pooled subgroups: each with the suggestion's own accuracy beside readers' over-reliance */
+  subgroups: SubgroupEntry[];
+  /** Obuchowski-Rockette / Hillis analysis of aided minus unaided AUC; null unless fully crossed */
+  mrmc: MrmcResult | null;
+  /** why mrmc is null, else null */
+  mrmc_note: string | null;
+};
+
+export type AnalysisReport = {
+  readers: ReaderEntry[];
+  group: {
+    /** non-practice reads analysed */
+    reads: number;
+    /** practice reads left out of every statistic */
+    practice_excluded: number;
+    seed: number;
+    boot: number;
+    /** case attribute names found (case_<name> columns, without the prefix) */
+    attributes: string[];
+    findings: GroupFinding[];
+  };
+};

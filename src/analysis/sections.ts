@@ -1,0 +1,44 @@
+import type { ReadRow } from '../core/read-log';
+import { aidedSection, conditionSection, type AidedSection, type ConditionSection } from './condition-section';
+import { crossoverFromPairs, crossoverPairs, type CrossoverSection } from './crossover';
+import { isAided } from './read-scores';
+import { timeRatio } from './reading-time';
+import { sequentialSection, type SequentialSection } from './sequential';
+
+export type Sections = {
+  unaided: ConditionSection | null;
+  aided: AidedSection | null;
+  sequential: SequentialSection | null;
+  crossover: CrossoverSection | null;
+  /** aided over unaided median reading time */
+  time_ratio: number | null;
+};
+
+/**
+ * All per-condition sections of a set of reads of one finding (SPEC Contract 3): unaided reads
+ * have assistance none, aided reads a suggestion shown. Crossover pairs are formed within each
+ * reader; with several readers they are pooled and the paired AUC test is left out (null).
+ * A section that does not apply is null. Throws RangeError when a confidence is outside 0..100.
+ * Example: sections(readsOfR1Target).aided?.overreliance.
+ */
+export const sections = (reads: readonly ReadRow[]): Sections => {
+  const unaidedReads: ReadRow[] = [];
+  const aidedReads: ReadRow[] = [];
+  const byReader = new Map<string, ReadRow[]>();
+  for (const r of reads) {
+    (isAided(r) ? aidedReads : unaidedReads).push(r);
+    const list = byReader.get(r.reader_id);
+    if (list === undefined) byReader.set(r.reader_id, [r]);
+    else list.push(r);
+  }
+  const pairs = [...byReader.values()].flatMap((rs) => crossoverPairs(rs));
+  const unaided = conditionSection(unaidedReads);
+  const aided = aidedSection(aidedReads);
+  return {
+    unaided,
+    aided,
+    sequential: sequentialSection(aidedReads),
+    crossover: crossoverFromPairs(pairs, byReader.size <= 1),
+    time_ratio: timeRatio(aided?.median_ms ?? null, unaided?.median_ms ?? null),
+  };
+};

@@ -1,0 +1,79 @@
+import type { ReadRow } from '../core/read-log';
+import { initialScore, finalScore } from './read-scores';
+import { weightOfAdvice, type WeightOfAdvice } from './weight-of-advice';
+import { wilson, type Proportion } from './wilson';
+
+export type SequentialSection = {
+  n: number;
+  /** #(d0 ≠ d) */
+  changed: Proportion;
+  /** #(d0 ≠ a and d = a) */
+  toward_ai: Proportion;
+  /** #(d0 ≠ y and d = y) */
+  beneficial: Proportion;
+  /** #(d0 = y and d ≠ y) */
+  detrimental: Proportion;
+  /** relative AI reliance (Schemmer et al. 2023): k = #(d0 ≠ y, a = y, d = y), n = #(d0 ≠ y, a = y) */
+  rair: Proportion;
+  /** relative self-reliance: k = #(d0 = y, a ≠ y, d = y), n = #(d0 = y, a ≠ y) */
+  rsr: Proportion;
+  woa: WeightOfAdvice;
+};
+
+/**
+ * Sequential-reading metrics (SPEC Contract 2) over reads with an initial call d0, a suggestion
+ * call a and a final call d; counts as proportions of the n sequential reads (Wilson intervals).
+ * RAIR and RSR follow Schemmer, Kuehl, Benz, Bartos & Satzger (2023), "Appropriate reliance on
+ * AI advice", IUI '23; weight of advice follows Harvey & Fischer (1997), see weight-of-advice.ts.
+ * Returns null when no read qualifies. Throws RangeError when a confidence is outside 0..100.
+ * Example: sequentialSection(reads)?.changed.k → number of reads whose call changed.
+ */
+export const sequentialSection = (reads: readonly ReadRow[]): SequentialSection | null => {
+  const seq = reads.filter((r) => r.assistance === 'sequential' && r.initial_call !== null && r.ai_call !== null);
+  if (seq.length === 0) return null;
+  let changed = 0;
+  let toward = 0;
+  let beneficial = 0;
+  let detrimental = 0;
+  let rairK = 0;
+  let rairN = 0;
+  let rsrK = 0;
+  let rsrN = 0;
+  const s: number[] = [];
+  const s0: number[] = [];
+  const p: number[] = [];
+  for (const r of seq) {
+    const d0 = r.initial_call;
+    const d = r.final_call;
+    const a = r.ai_call;
+    const y = r.truth;
+    if (d0 !== d) changed++;
+    if (d0 !== a && d === a) toward++;
+    if (d0 !== y && d === y) beneficial++;
+    if (d0 === y && d !== y) detrimental++;
+    if (d0 !== y && a === y) {
+      rairN++;
+      if (d === y) rairK++;
+    }
+    if (d0 === y && a !== y) {
+      rsrN++;
+      if (d === y) rsrK++;
+    }
+    if (r.ai_score !== null) {
+      s.push(finalScore(r));
+      s0.push(initialScore(r) as number);
+      p.push(r.ai_score);
+    }
+  }
+  const n = seq.length;
+  return {
+    n,
+    changed: wilson(changed, n),
+    toward_ai: wilson(toward, n),
+    beneficial: wilson(beneficial, n),
+    detrimental: wilson(detrimental, n),
+    rair: wilson(rairK, rairN),
+    rsr: wilson(rsrK, rsrN),
+    woa: weightOfAdvice(s, s0, p),
+  };
+};
