@@ -6,6 +6,7 @@
 import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import { elapsedMs, pauseClock, resumeClock, startClock, type ActiveClock } from '../../core/active-clock';
 import type { Bit } from '../../core/read-log';
+import { RESEARCH_CAUTION } from '../../core/research-caution';
 import { answerProblem, suggestionVisible } from '../../core/session';
 import { suggestionKey } from '../../core/suggestions';
 import { useDb } from '../db-context';
@@ -165,6 +166,7 @@ export const ReadingScreen = ({ studyId, sessionId }: Props) => {
         {current.practice && <span className="badge badge-practice">Practice case</span>}
         {findingCount > 1 && <span>Question {loaded.study.design.findings.indexOf(step.finding) + 1} of {findingCount}</span>}
         <span className="reading-reader">Reader {loaded.readerCode} · period {loaded.session.period}</span>
+        <span className="reading-caution" title={RESEARCH_CAUTION}>Research and training tool, not a medical device</span>
         <button type="button" onClick={togglePause} disabled={!clockStarted}>{paused ? 'Resume' : 'Pause'} <kbd>Esc</kbd></button>
       </header>
       <div className="reading-body">
@@ -197,7 +199,7 @@ export const ReadingScreen = ({ studyId, sessionId }: Props) => {
           />
         </aside>
       </div>
-      <ReadingOverlay paused={paused} onBreak={breakFor !== null} onContinue={paused ? togglePause : endBreak} />
+      <ReadingOverlay paused={paused} onBreak={breakFor !== null} onContinue={paused ? togglePause : endBreak} onLeave={actions.goHome} />
     </main>
   );
 };

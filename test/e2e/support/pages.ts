@@ -37,7 +37,7 @@ export const homePage = (page: Page) => ({
     await page.getByRole('heading', { name: d.name, level: 1 }).waitFor();
   },
   resume: async (text: RegExp) => { await page.getByRole('button', { name: text }).click(); },
-  openStudy: async (name: string) => { await page.getByRole('button', { name }).click(); await page.getByRole('heading', { name, level: 1 }).waitFor(); },
+  openStudy: async (name: string) => { await page.getByRole('button', { name, exact: true }).click(); await page.getByRole('heading', { name, level: 1 }).waitFor(); },
 });
 
 export const studyPage = (page: Page) => ({
