@@ -1,6 +1,28 @@
+// `heed check-cases PATH`: validate a case set (folder or zip) without importing it.
+import { readCaseSet } from '../io/case-set/read-case-set';
 import { CliError } from './cli-error';
+import { problemLine, summaryLines } from './format-case-set';
+import { nodeSetSource } from './node-set-source';
 
-// Not built yet: the work on this verb replaces this file.
-export const runCheckCases = async (_args: string[]): Promise<number> => {
-  throw new CliError('check-cases is not built yet');
+const NOTICE = 'Heed is a research and training tool, not a medical device.';
+
+export const runCheckCases = async (args: string[]): Promise<number> => {
+  const [path, ...extra] = args;
+  if (path === undefined || path.startsWith('--') || extra.length > 0) {
+    throw new CliError('usage: heed check-cases PATH   (PATH: a folder holding cases.csv, or a .zip of one)');
+  }
+  const source = await nodeSetSource(path).catch((error: unknown) => {
+    throw new CliError(error instanceof Error ? error.message : String(error));
+  });
+  const result = await readCaseSet(source);
+  if (!result.ok) {
+    const [first] = result.problems;
+    console.error(first ? problemLine(source.label, first) : `${path}: the case set was refused`);
+    const more = result.total - 1;
+    if (more > 0) console.error(`(${more} more problem${more === 1 ? '' : 's'}; nothing was imported)`);
+    return 2;
+  }
+  for (const line of summaryLines(result.summary)) console.log(line);
+  console.log(`The set is valid. ${NOTICE}`);
+  return 0;
 };

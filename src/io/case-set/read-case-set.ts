@@ -51,7 +51,7 @@ export const readCaseSet = async (source: SetSource, limits: Partial<CaseSetLimi
     if (error instanceof SetSourceError) {
       for (const p of error.problems) problems.add(p.file, p.row, p.column, p.message);
     } else {
-      problems.add(source.label, null, null, `cannot list the set's files: ${errorText(error)}`);
+      problems.add('', null, null, `cannot list the set's files: ${errorText(error)}`);
     }
     return refuse(problems);
   }

@@ -11,7 +11,10 @@ export type SetSource = {
   size?(path: string): Promise<number>;
 };
 
-/** One reason a set is refused. row is the CSV line (header = line 1); null when not about a row. */
+/**
+ * One reason a set is refused. file is relative to the set's root ('' for the folder or zip
+ * itself); row is the CSV line (header = line 1), null when not about a row.
+ */
 export type CaseSetProblem = { file: string; row: number | null; column: string | null; message: string };
 
 /**

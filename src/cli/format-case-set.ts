@@ -1,0 +1,29 @@
+// Plain-text lines for the case-set verbs: a summary, or the first problem as FILE:ROW: column COL.
+import type { CaseSetProblem, CaseSetSummary, Share } from '../io/case-set/types';
+
+const percent = (share: Share): string =>
+  share.estimate === null ? 'no suggestions' : `${share.k} of ${share.n} (${(100 * share.estimate).toFixed(1)}%)`;
+
+export const summaryLines = (summary: CaseSetSummary): string[] => {
+  const lines = [
+    `case set "${summary.name}": ${summary.cases} cases and ${summary.practiceCases} practice cases, ${summary.images} images`,
+  ];
+  for (const f of summary.findings) {
+    const prevalence = f.prevalence === null ? '' : ` (${(100 * f.prevalence).toFixed(1)}%)`;
+    lines.push(`  finding ${f.finding}: present in ${f.positives} of ${f.cases}${prevalence}; model suggestion right in ${percent(f.suggestionAccuracy)}`);
+  }
+  for (const g of summary.subgroups) {
+    lines.push(`  case_${g.attribute}:`);
+    for (const v of g.values) lines.push(`    ${v.value || '(empty)'}: ${v.cases} cases; suggestion right in ${percent(v.suggestionAccuracy)}`);
+  }
+  if (summary.ignoredColumns.length > 0) lines.push(`  columns not used: ${summary.ignoredColumns.join(', ')}`);
+  return lines;
+};
+
+/** `FILE:ROW: column COL: message`, FILE joined to the set's label; parts that do not apply are left out. */
+export const problemLine = (label: string, problem: CaseSetProblem): string => {
+  const file = problem.file === '' ? label : `${label.replace(/[\\/]+$/, '')}/${problem.file}`;
+  const row = problem.row === null ? '' : `:${problem.row}`;
+  const column = problem.column === null ? '' : ` column ${problem.column}:`;
+  return `${file}${row}:${column} ${problem.message}`;
+};
