@@ -1,0 +1,18 @@
+import { parseDesign } from '../../../src/core/design-schema';
+import { designFromForm, initialFormValues } from '../../../src/ui/screens/design-form-state';
+
+describe('the new-study form', () => {
+  it('turns its default values (with a name) into a valid two-sequence crossover design', () => {
+    const result = designFromForm({ ...initialFormValues('set', ['nodule']), name: 'S', aidedMode: 'concurrent', plantedFalseNegative: '3' });
+    if (!('design' in result)) throw new Error(result.problems.join('; '));
+    expect(result.design.sequences).toEqual([{ label: 'UA', periods: ['none', 'concurrent'] }, { label: 'AU', periods: ['concurrent', 'none'] }]);
+    expect(result.design.planted.falseNegative).toEqual({ mode: 'count', value: 3 });
+    expect(parseDesign(result.design).ok).toBe(true);
+  });
+  it('names each field that is not a number, and an empty name', () => {
+    const result = designFromForm({ ...initialFormValues('set', ['nodule']), washoutDays: 'four', seed: '' });
+    expect('problems' in result && result.problems).toEqual([
+      'Study name: give the study a name.', 'Washout days: "four" is not a number.', 'Seed: "" is not a number.',
+    ]);
+  });
+});
