@@ -47,10 +47,11 @@ const inflateBounded = (data: Uint8Array, size: number): Uint8Array | null => {
     written += chunk.length;
   });
   // Small slices bound the output of one push, so a bomb is caught after little work.
-  for (let at = 0; at < data.length && !over; at += SLICE) {
+  for (let at = 0; at < data.length; at += SLICE) {
     inflater.push(data.subarray(at, at + SLICE), at + SLICE >= data.length);
+    if (over) return null;
   }
-  return over || written !== size ? null : out;
+  return written === size ? out : null;
 };
 
 export const zipSource = (bytes: Uint8Array, label: string, limits: Partial<CaseSetLimits> = {}): SetSource => {
