@@ -1,0 +1,52 @@
+/**
+ * Cold start in real Chromium (run: npx tsx bench/cold-start.ts).
+ *
+ * First launch: a fresh profile, so the demo case set is generated and stored before the home
+ * screen is ready. Then RUNS relaunches on that same profile (demo already stored; Chromium
+ * stopped in between): from spawning Chromium, which then opens the app URL, to the home
+ * screen's `ready` signal. Wall clock for the whole; page time (relative to
+ * performance.timeOrigin, the navigation start) for the in-page part. A relaunch that creates
+ * a Worker would mean the demo set was generated again, which is reported as a failure.
+ */
+import { median } from 'simple-statistics';
+import { removeProfileDir } from '../test/e2e/support/chromium';
+import { benchProfileDir, buildAndServe, machineNote } from './support/app-under-test';
+import { atMost, plain, printResult, type Figure } from './support/figures';
+import { timedLaunch, type Launch } from './support/launch-probe';
+
+const RUNS = Number(process.env.HEED_BENCH_COLD_RUNS ?? 5);
+
+const app = await buildAndServe();
+const profile = benchProfileDir();
+const notes: string[] = [machineNote('start')];
+try {
+  const first = await timedLaunch(profile, app.url);
+  await first.chrome.stop();
+  if (first.workers !== 1) throw new Error(`first launch on a fresh profile created ${first.workers} Workers, expected 1 (the demo generator)`);
+
+  const runs: Launch[] = [];
+  for (let i = 0; i < RUNS; i++) {
+    const launch = await timedLaunch(profile, app.url);
+    await launch.chrome.stop();
+    if (launch.workers !== 0) throw new Error(`relaunch ${i + 1} generated the demo set again (${launch.workers} Workers): the stored set was not found`);
+    runs.push(launch);
+  }
+  const med = (pick: (l: Launch) => number) => median(runs.map(pick));
+  const figures: Figure[] = [
+    plain('first launch, fresh profile, to ready (wall)', first.wallMs, 'ms'),
+    plain('first launch: navigation to ready (page)', first.readyMs, 'ms'),
+    atMost(`relaunch to ready, median of ${RUNS} (wall)`, med((l) => l.wallMs), 'ms', 1500),
+    plain(`relaunch: Chromium start to navigation, median`, med((l) => l.browserStartMs), 'ms'),
+    plain(`relaunch: navigation to ready (page), median`, med((l) => l.readyMs), 'ms'),
+    plain(`relaunch: navigation to app mounted (page), median`, med((l) => l.mountedMs ?? Number.NaN), 'ms'),
+    plain(`relaunch to ready, slowest of ${RUNS} (wall)`, Math.max(...runs.map((l) => l.wallMs)), 'ms'),
+  ];
+  notes.push(
+    `relaunch wall times: ${runs.map((l) => Math.round(l.wallMs)).join(', ')} ms`,
+    machineNote('end'),
+  );
+  printResult({ bench: 'cold-start', figures, notes });
+} finally {
+  removeProfileDir(profile);
+  await app.close();
+}
