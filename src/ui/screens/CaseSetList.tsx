@@ -1,5 +1,6 @@
 /** The case sets stored on this workstation, with a short summary of each. */
 import type { StoredCaseSet } from '../../store/records';
+import { ImportCaseSet } from './ImportCaseSet';
 
 type Props = { caseSets: StoredCaseSet[]; onChanged: () => void };
 
@@ -9,7 +10,7 @@ const prevalence = (set: StoredCaseSet, finding: string): string => {
   return `${Math.round((100 * rows.filter((f) => f.truth === 1).length) / rows.length)}%`;
 };
 
-export const CaseSetList = ({ caseSets }: Props) => (
+export const CaseSetList = ({ caseSets, onChanged }: Props) => (
   <section className="panel" aria-labelledby="sets-head">
     <div className="panel-head">
       <h2 id="sets-head">Case sets</h2>
@@ -28,5 +29,6 @@ export const CaseSetList = ({ caseSets }: Props) => (
         ))}
       </tbody>
     </table>
+    <ImportCaseSet onImported={onChanged} />
   </section>
 );
