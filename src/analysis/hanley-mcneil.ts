@@ -5,7 +5,7 @@
  * m abnormal and n normal cases. Heed reports the DeLong SE; this one is kept to check against
  * the published table and for planning.
  * Throws RangeError when A is outside [0,1] or m, n are not whole numbers ≥ 1.
- * Example: hanleyMcNeilSe(0.893, 51, 58) → 0.0315 (published as 0.032).
+ * Example: hanleyMcNeilSe(0.893, 51, 58) → 0.0325 (published as 0.032).
  */
 export const hanleyMcNeilSe = (auc: number, m: number, n: number): number => {
   if (!(auc >= 0 && auc <= 1)) throw new RangeError(`AUC must be in [0,1], got ${auc}`);

@@ -3,7 +3,7 @@
  * (Wilson 1927; Newcombe 1998, method 3):
  *   centre = (k + z²/2) / (n + z²),  half = z·sqrt(k(n−k)/n + z²/4) / (n + z²).
  * n = 0 gives nulls, never NaN. Throws RangeError when k or n is not a whole number with 0 ≤ k ≤ n.
- * Example: wilson(81, 263) → estimate 0.30798, lower 0.25538, upper 0.36596 (Newcombe 1998, Table I).
+ * Example: wilson(81, 263) → estimate 0.30798, lower 0.25529, upper 0.36621 (Newcombe 1998, Table I: 0.2553, 0.3662).
  */
 export const Z95 = 1.959963984540054;
 
