@@ -53,7 +53,7 @@ export const DesignFields = ({ values: v, caseSet, onChange }: Props) => {
       </fieldset>
       <fieldset>
         <legend>Caution notice</legend>
-        <label>Shown <select value={v.cautionMode} onChange={(e) => set('cautionMode', e.target.value === 'all' ? 'all' : e.target.value === 'random-half' ? 'random-half' : 'off')}>
+        <label>Show the notice <select value={v.cautionMode} onChange={(e) => set('cautionMode', e.target.value === 'all' ? 'all' : e.target.value === 'random-half' ? 'random-half' : 'off')}>
           <option value="off">never</option><option value="all">with every aided read</option><option value="random-half">with a random half of aided reads</option></select></label>
         <label>Notice text <textarea rows={2} value={v.cautionText} onChange={(e) => set('cautionText', e.target.value)} /></label>
       </fieldset>

@@ -36,11 +36,12 @@ export const ReaderTable = ({ study, progress, onChanged }: Props) => {
   const cell = (row: ReaderProgress, p: PeriodProgress) => {
     const assistance = study.design.sequences[row.reader.sequenceIndex]?.periods[p.period - 1] ?? 'none';
     const label = `${row.reader.code} period ${p.period}`;
-    if (p.session?.completedAt) return <span>{p.answered}/{p.total} done</span>;
+    const early = p.session?.override ? <span className="warning"> opened early by {p.session.override.by}: {p.session.override.reason}</span> : null;
+    if (p.session?.completedAt) return <span>{p.answered}/{p.total} done{early}</span>;
     const previousDone = p.period === 1 || row.periods[p.period - 2]?.session?.completedAt;
     return (
       <span className="cell-actions">
-        <span className="muted">{assistance === 'none' ? 'unaided' : assistance} · {p.session ? `${p.answered}/${p.total}` : 'not started'}</span>
+        <span className="muted">{assistance === 'none' ? 'unaided' : assistance} · {p.session ? `${p.answered}/${p.total}` : 'not started'}</span>{early}
         <button type="button" disabled={!previousDone} onClick={() => void open(row, p.period, false)} aria-label={`${p.session ? 'Resume' : 'Start'} ${label}`}>
           {p.session ? 'Resume' : 'Start'}
         </button>

@@ -32,7 +32,7 @@ export const homePage = (page: Page) => ({
     if (d.washoutDays !== undefined) await page.getByLabel('Washout days').fill(String(d.washoutDays));
     if (d.plantedFalsePositive !== undefined) await page.getByLabel('False-positive suggestions').fill(String(d.plantedFalsePositive));
     if (d.plantedFalseNegative !== undefined) await page.getByLabel('False-negative suggestions').fill(String(d.plantedFalseNegative));
-    if (d.caution) await page.getByLabel('Shown').selectOption({ label: d.caution });
+    if (d.caution) await page.getByLabel('Show the notice').selectOption({ label: d.caution });
     await page.getByRole('button', { name: 'Create study' }).click();
     await page.getByRole('heading', { name: d.name, level: 1 }).waitFor();
   },

@@ -1,0 +1,110 @@
+/**
+ * The full design (issue 4), as a coordinator does it: import a folder case set with two
+ * findings, plant errors and a random-half caution notice, run a two-period crossover with two
+ * readers (washout overridden with a reason), export, and check the log and study.json.
+ */
+import { join } from 'node:path';
+import Papa from 'papaparse';
+import { inject } from 'vitest';
+import { newProfileDir, removeProfileDir, startChromium, type RunningChromium } from './support/chromium';
+import { writeCaseFolder } from './support/case-folder';
+import { homePage, readingPage, studyPage } from './support/pages';
+
+const SHOTS = join(import.meta.dirname, '..', '..', 'test-results', 'screens');
+const CASES = 24;
+const PRACTICE = 2;
+
+const readWholePeriod = async (chrome: RunningChromium) => {
+  const reading = readingPage(chrome.page);
+  let steps = 0;
+  while (!(await reading.isDone())) {
+    await reading.answerByKeys((steps % 2) as 0 | 1, 1 + (steps % 9));
+    steps++;
+  }
+  await chrome.page.getByRole('button', { name: 'Back to the study' }).click();
+  return steps;
+};
+
+describe('design: own case set, planted errors, caution notice, crossover with washout', () => {
+  const url = inject('appUrl');
+  let profile = '';
+  let chrome: RunningChromium | null = null;
+  beforeAll(() => { profile = newProfileDir(); });
+  afterAll(async () => { await chrome?.stop(); removeProfileDir(profile); });
+
+  it('imports, designs, reads two periods with an override, and logs exactly what each reader saw', async () => {
+    const folder = writeCaseFolder(CASES, PRACTICE);
+    chrome = await startChromium(profile, url);
+    const { page } = chrome;
+    await homePage(page).waitUntilReady();
+
+    const [chooser] = await Promise.all([page.waitForEvent('filechooser'), page.getByRole('button', { name: 'Import a folder…' }).click()]);
+    await chooser.setFiles(folder.dir);
+    await page.getByRole('status').filter({ hasText: 'Imported' }).waitFor();
+    expect(await page.getByRole('status').filter({ hasText: 'Imported' }).textContent()).toContain(`${CASES} cases, ${PRACTICE} practice`);
+    await page.screenshot({ path: join(SHOTS, 'import.png'), fullPage: true });
+
+    await homePage(page).newStudy({
+      name: 'Harbour crossover', caseSet: folder.name, findings: ['mass', 'calcification'], aidedMode: 'concurrent', washoutDays: 14,
+      plantedFalsePositive: 3, plantedFalseNegative: 2, caution: 'with a random half of aided reads',
+    });
+    const study = studyPage(page);
+    for (const code of ['H1', 'H2']) { await study.enrol(code); await study.enrolled(code); }
+    expect([await study.sequenceOf('H1'), await study.sequenceOf('H2')].sort()).toEqual(['AU', 'UA']);
+
+    const steps: number[] = [];
+    for (const code of ['H1', 'H2']) {
+      const painted = await study.startPeriod(code, 1);
+      await readingPage(page).waitForCase(painted);
+      steps.push(await readWholePeriod(chrome));
+    }
+    // period 2 is behind the 14-day washout: refused, then opened early with a logged reason
+    for (const code of ['H1', 'H2']) {
+      await page.getByRole('button', { name: `Start ${code} period 2` }).click();
+      await page.getByRole('group', { name: 'Washout not over' }).waitFor();
+      expect(await page.getByRole('group', { name: 'Washout not over' }).textContent()).toMatch(/14-day washout/);
+      const before = await page.evaluate(() => Number(document.body.getAttribute('data-heed-case-painted') ?? 0));
+      await study.openEarly('training block ends this week', 'QO-1');
+      await readingPage(page).waitForCase(before);
+      steps.push(await readWholePeriod(chrome));
+    }
+    expect(steps).toEqual(Array(4).fill((CASES + PRACTICE) * 2));
+    await page.getByRole('heading', { name: 'Readers' }).waitFor();
+    await page.screenshot({ path: join(SHOTS, 'study-done.png'), fullPage: true });
+    expect(await page.getByText('opened early by QO-1: training block ends this week').count()).toBe(2);
+    await page.screenshot({ path: join(SHOTS, 'study-done.png'), fullPage: true });
+
+    const log = await study.exportText(/Save read log/);
+    const rows = Papa.parse<Record<string, string>>(log, { header: true, skipEmptyLines: true }).data;
+    expect(rows).toHaveLength(2 * 2 * (CASES + PRACTICE) * 2);
+    for (const r of rows) {
+      expect(r.sequence).toMatch(/^(UA|AU)$/);
+      expect(r.period).toMatch(/^[12]$/);
+      expect(r.assistance).toMatch(/^(none|concurrent)$/);
+      expect(Number(r.order)).toBeGreaterThan(0);
+      expect(r.case_site).toMatch(/^(Quayside|Lighthouse)$/);
+      if (r.assistance === 'none') expect([r.ai_call, r.ai_planted, r.caution_shown]).toEqual(['', '0', '0']);
+    }
+    const aidedMain = rows.filter((r) => r.assistance === 'concurrent' && r.practice === '0');
+    for (const reader of ['H1', 'H2']) {
+      for (const finding of ['mass', 'calcification']) {
+        const mine = aidedMain.filter((r) => r.reader_id === reader && r.finding === finding);
+        expect(mine).toHaveLength(CASES);
+        const planted = mine.filter((r) => r.ai_planted === '1');
+        expect(planted).toHaveLength(5); // 3 false-positive + 2 false-negative, per finding
+        expect(planted.filter((r) => r.ai_call === '1' && r.truth === '0')).toHaveLength(3);
+        expect(planted.filter((r) => r.ai_call === '0' && r.truth === '1')).toHaveLength(2);
+        expect(mine.filter((r) => r.caution_shown === '1')).toHaveLength(CASES / 2); // a random half of the aided main cases
+      }
+      // each case's notice is the same for both findings: it belongs to the case on screen
+      const byCase = new Map<string, Set<string>>();
+      for (const r of aidedMain.filter((x) => x.reader_id === reader)) byCase.set(r.case_id ?? '', (byCase.get(r.case_id ?? '') ?? new Set()).add(r.caution_shown ?? ''));
+      expect([...byCase.values()].every((s) => s.size === 1)).toBe(true);
+    }
+    expect(rows.filter((r) => r.practice === '1' && r.ai_planted === '1')).toHaveLength(0);
+
+    const studyFile = JSON.parse(await study.exportText(/Save design record/)) as { design: { seed: number; planted: unknown }; planted: unknown[] };
+    expect(studyFile.planted).toHaveLength(10);
+    expect(typeof studyFile.design.seed).toBe('number');
+  });
+});
