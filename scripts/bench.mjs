@@ -43,7 +43,8 @@ const entries = [
 ];
 
 const MARKER = 'BENCH_RESULT ';
-const LOOSE = /^\s*([A-Za-z][^:=]{1,80}?)\s*[:=]\s*(-?\d+(?:\.\d+)?(?:e[+-]?\d+)?)\s*([A-Za-z%/µ]+)?\s*(?:\(|$)/;
+// `label: [word] number unit` or `label<two or more spaces>number unit`
+const LOOSE = /^\s*([A-Za-z][^:=]{0,80}?)(?:\s*[:=]\s*(?:([A-Za-z]+)\s+)?|\s{2,})(-?\d+(?:\.\d+)?(?:e[+-]?\d+)?)(?:\s*([A-Za-z%/µ]+))?/;
 
 /** Figures and notes out of a benchmark's printed text. */
 const collect = (stdout) => {
@@ -60,7 +61,7 @@ const collect = (stdout) => {
     return { figures, notes, source: 'BENCH_RESULT' };
   }
   const figures = lines.map((l) => LOOSE.exec(l)).filter((m) => m !== null)
-    .map((m) => ({ name: m[1].trim(), value: Number(m[2]), unit: m[3] ?? '' }));
+    .map((m) => ({ name: [m[1].trim(), m[2]].filter(Boolean).join(' '), value: Number(m[3]), unit: m[4] ?? '' }));
   return { figures, notes: [], source: figures.length > 0 ? 'printed lines' : 'none' };
 };
 
@@ -121,7 +122,7 @@ summary.finishedAt = new Date().toISOString();
 mkdirSync(OUT, { recursive: true });
 writeFileSync(join(OUT, 'summary.json'), JSON.stringify(summary, null, 2) + '\n');
 
-const show = (v) => (Number.isFinite(v) ? String(Math.round(v * 10) / 10) : String(v));
+const show = (v) => (!Number.isFinite(v) ? String(v) : v !== 0 && Math.abs(v) < 0.1 ? v.toPrecision(3) : String(Math.round(v * 10) / 10));
 console.log('\nbenchmark            figure                                                     value  target');
 for (const b of summary.benchmarks) {
   if (b.status !== 'ok') {
