@@ -1,0 +1,16 @@
+import type { AnalysisReport } from '../../analysis/engine';
+import type { ReadRow } from '../../core/read-log';
+
+type Reply = { ok: true; report: AnalysisReport } | { ok: false; error: string };
+
+export const runAnalysis = (rows: ReadRow[], seed: number, boot: number): Promise<AnalysisReport> =>
+  new Promise((resolve, reject) => {
+    const worker = new Worker(new URL('./analysis-worker.ts', import.meta.url), { type: 'module' });
+    worker.onmessage = (event: MessageEvent<Reply>) => {
+      worker.terminate();
+      if (event.data.ok) resolve(event.data.report);
+      else reject(new Error(event.data.error));
+    };
+    worker.onerror = (event) => { worker.terminate(); reject(new Error(event.message)); };
+    worker.postMessage({ rows, seed, boot });
+  });
