@@ -2,7 +2,7 @@
 import type { CaseImage, CaseSetManifest } from '../../../src/core/case-set';
 import { defaultDesign } from '../../../src/core/design';
 import type { SessionItem } from '../../../src/core/session';
-import type { ShownSuggestion } from '../../../src/store/records';
+import type { SuggestionRow } from '../../../src/core/suggestions';
 
 const PNG_MAGIC = new Uint8Array([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]);
 
@@ -24,8 +24,11 @@ export const tinyImages = (manifest: CaseSetManifest): CaseImage[] =>
 
 export const tinyDesign = () => defaultDesign(['target']);
 
-export const tinySuggestions = (manifest: CaseSetManifest): ShownSuggestion[] =>
-  manifest.cases.map((c, i) => ({ caseId: c.caseId, finding: 'target', call: (i % 2 === 0 ? 1 : 0), score: 0.5, planted: i === 2 }));
+export const tinySuggestions = (manifest: CaseSetManifest): SuggestionRow[] =>
+  manifest.cases.map((c, i) => {
+    const call = i % 2 === 0 ? 1 : 0;
+    return { caseId: c.caseId, finding: 'target', practice: c.practice, truth: (i % 2) as 0 | 1, call, score: 0.5, planted: i === 2, naturalCall: call, naturalScore: 0.5 };
+  });
 
 export const tinyItems = (manifest: CaseSetManifest, assistance: SessionItem['assistance']): SessionItem[] =>
   manifest.cases.map((c, i) => ({ caseId: c.caseId, practice: c.practice, assistance, order: i + 1, caution: i === 3, breakBefore: false }));
