@@ -18,10 +18,11 @@ export type Sections = {
  * All per-condition sections of a set of reads of one finding (SPEC Contract 3): unaided reads
  * have assistance none, aided reads a suggestion shown. Crossover pairs are formed within each
  * reader; with several readers they are pooled and the paired AUC test is left out (null).
+ * options.pairedAuc false also leaves it out (subgroups, where it costs much and says little).
  * A section that does not apply is null. Throws RangeError when a confidence is outside 0..100.
  * Example: sections(readsOfR1Target).aided?.overreliance.
  */
-export const sections = (reads: readonly ReadRow[]): Sections => {
+export const sections = (reads: readonly ReadRow[], options: { pairedAuc?: boolean } = {}): Sections => {
   const unaidedReads: ReadRow[] = [];
   const aidedReads: ReadRow[] = [];
   const byReader = new Map<string, ReadRow[]>();
@@ -38,7 +39,7 @@ export const sections = (reads: readonly ReadRow[]): Sections => {
     unaided,
     aided,
     sequential: sequentialSection(aidedReads),
-    crossover: crossoverFromPairs(pairs, byReader.size <= 1),
+    crossover: crossoverFromPairs(pairs, byReader.size <= 1 && (options.pairedAuc ?? true)),
     time_ratio: timeRatio(aided?.median_ms ?? null, unaided?.median_ms ?? null),
   };
 };

@@ -15,7 +15,7 @@ export type SubgroupEntry = Sections & {
 
 /**
  * Every metric per value of each case attribute (case_<name> columns), over reads of one
- * finding. Attribute values are listed in sorted order; an empty value is its own subgroup.
+ * finding (the paired AUC test of crossover is left out here: null). Attribute values are listed in sorted order; an empty value is its own subgroup.
  * Throws RangeError when a confidence is outside 0..100.
  * Example: subgroups(reads, ['scanner']).map((g) => [g.value, g.ai_accuracy.estimate, g.overreliance.estimate]).
  */
@@ -31,7 +31,7 @@ export const subgroups = (reads: readonly ReadRow[], attributes: readonly string
     }
     for (const value of [...byValue.keys()].sort()) {
       const rs = byValue.get(value) ?? [];
-      const s = sections(rs);
+      const s = sections(rs, { pairedAuc: false });
       out.push({
         attribute,
         value,
