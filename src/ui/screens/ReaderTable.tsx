@@ -36,12 +36,12 @@ export const ReaderTable = ({ study, progress, onChanged }: Props) => {
   const cell = (row: ReaderProgress, p: PeriodProgress) => {
     const assistance = study.design.sequences[row.reader.sequenceIndex]?.periods[p.period - 1] ?? 'none';
     const label = `${row.reader.code} period ${p.period}`;
-    const early = p.session?.override ? <span className="warning"> opened early by {p.session.override.by}: {p.session.override.reason}</span> : null;
-    if (p.session?.completedAt) return <span>{p.answered}/{p.total} done{early}</span>;
+    const openedEarly = p.session?.override ? <span className="warning"> opened early by {p.session.override.by}: {p.session.override.reason}</span> : null;
+    if (p.session?.completedAt) return <span>{p.answered}/{p.total} done{openedEarly}</span>;
     const previousDone = p.period === 1 || row.periods[p.period - 2]?.session?.completedAt;
     return (
       <span className="cell-actions">
-        <span className="muted">{assistance === 'none' ? 'unaided' : assistance} · {p.session ? `${p.answered}/${p.total}` : 'not started'}</span>{early}
+        <span className="muted">{assistance === 'none' ? 'unaided' : assistance} · {p.session ? `${p.answered}/${p.total}` : 'not started'}</span>{openedEarly}
         <button type="button" disabled={!previousDone} onClick={() => void open(row, p.period, false)} aria-label={`${p.session ? 'Resume' : 'Start'} ${label}`}>
           {p.session ? 'Resume' : 'Start'}
         </button>
