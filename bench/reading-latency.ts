@@ -69,7 +69,7 @@ try {
     if (process.env.HEED_BENCH_DUMP) console.log(timings.map((t) => `${t.commitMs.toFixed(1)} ${t.paintedMs.toFixed(1)} ${t.frameAfterMs.toFixed(1)}`).join('\n'));
     const frames = spread(timings.map((t) => t.frameAfterMs - t.paintedMs));
     const figures: Figure[] = [
-      atMost('first launch to home ready (wall)', launch.wallMs, 'ms', 1500),
+      plain('first launch, fresh profile, to home ready (wall)', launch.wallMs, 'ms'),
       plain('first launch: navigation to ready (page)', launch.readyMs, 'ms'),
       ...spreadFigures('Enter to next case painted', spread(timings.map((t) => t.paintedMs)), 'ms', 50),
       ...spreadFigures('Enter to frame after paint', spread(timings.map((t) => t.frameAfterMs)), 'ms'),
@@ -79,7 +79,7 @@ try {
     ];
     notes.push(
       `reader ${reader}, sequence AU, period 1 (aided, concurrent); ${practice} of the ${READS} reads were practice cases`,
-      'first-launch target is the cold-start one (1.5 s) and is not expected to hold here: it includes generating the demo set',
+      'first launch includes generating and storing the demo set; the 1.5 s cold-start target is for a stored profile (bench/cold-start.ts)',
       'screenshot of the reading view: bench-results/reading-view.png',
       machineNote('end'),
     );

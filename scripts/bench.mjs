@@ -43,8 +43,20 @@ const entries = [
 ];
 
 const MARKER = 'BENCH_RESULT ';
-// `label: [word] number unit` or `label<two or more spaces>number unit`
-const LOOSE = /^\s*([A-Za-z][^:=]{0,80}?)(?:\s*[:=]\s*(?:([A-Za-z]+)\s+)?|\s{2,})(-?\d+(?:\.\d+)?(?:e[+-]?\d+)?)(?:\s*([A-Za-z%/µ]+))?/;
+// Tried in turn: `label: [word] number unit`, `label<two or more spaces>number unit`, `label number unit`.
+const NUMBER = '(-?\\d+(?:\\.\\d+)?(?:e[+-]?\\d+)?)(?:\\s*([A-Za-z%/µ]+))?';
+const LOOSE = [
+  new RegExp(`^\\s*([A-Za-z][^:=<>]{0,80}?)\\s*[:=]\\s*(?:([A-Za-z]+)\\s+)?${NUMBER}`),
+  new RegExp(`^\\s*([A-Za-z][^:=<>]{0,80}?)()\\s{2,}${NUMBER}`),
+  new RegExp(`^\\s*([A-Za-z][^:=<>\\d]{0,80}?)() ${NUMBER}`),
+];
+const looseFigure = (line) => {
+  for (const pattern of LOOSE) {
+    const m = pattern.exec(line);
+    if (m) return { name: [m[1].trim(), m[2]].filter(Boolean).join(' '), value: Number(m[3]), unit: m[4] ?? '' };
+  }
+  return null;
+};
 
 /** Figures and notes out of a benchmark's printed text. */
 const collect = (stdout) => {
@@ -60,8 +72,7 @@ const collect = (stdout) => {
     }
     return { figures, notes, source: 'BENCH_RESULT' };
   }
-  const figures = lines.map((l) => LOOSE.exec(l)).filter((m) => m !== null)
-    .map((m) => ({ name: [m[1].trim(), m[2]].filter(Boolean).join(' '), value: Number(m[3]), unit: m[4] ?? '' }));
+  const figures = lines.map(looseFigure).filter((f) => f !== null);
   return { figures, notes: [], source: figures.length > 0 ? 'printed lines' : 'none' };
 };
 
