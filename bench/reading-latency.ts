@@ -14,7 +14,7 @@ import { join } from 'node:path';
 import { removeProfileDir } from '../test/e2e/support/chromium';
 import { homePage, readingPage, studyPage } from '../test/e2e/support/pages';
 import { benchProfileDir, buildAndServe, machineNote, RESULTS_DIR } from './support/app-under-test';
-import { atMost, plain, printResult, spread, spreadFigures, type Figure } from './support/figures';
+import { plain, printResult, spread, spreadFigures, type Figure } from './support/figures';
 import { timedLaunch } from './support/launch-probe';
 import { collectLatencyRecord, installLatencyProbe, pairTimings } from './support/latency-probe';
 
