@@ -43,11 +43,11 @@ export const midranksOf = (values: Float64Array): Float64Array => {
 
 /** A Float64Array copy; throws RangeError naming `what` on a non-finite value. */
 export const toFloat64 = (values: ArrayLike<number>, what: string): Float64Array => {
-  const copy = new Float64Array(values.length);
-  for (let i = 0; i < values.length; i++) {
-    const v = values[i] as number;
-    if (!Number.isFinite(v)) throw new RangeError(`${what}: value ${i} is not a finite number (${v})`);
-    copy[i] = v;
+  // copy natively first, then check on the typed copy: one monomorphic loop for any input kind
+  const copy = Float64Array.from(values);
+  for (let i = 0; i < copy.length; i++) {
+    const v = copy[i] as number;
+    if (v - v !== 0) throw new RangeError(`${what}: value ${i} is not a finite number (${v})`);
   }
   return copy;
 };

@@ -20,11 +20,10 @@ export const quantileSorted = (sorted: ArrayLike<number>, q: number): number | n
 
 /** Ascending typed copy; throws RangeError on a non-finite value. */
 export const sortValues = (values: ArrayLike<number>): Float64Array => {
-  const out = new Float64Array(values.length);
-  for (let i = 0; i < values.length; i++) {
-    const v = values[i] as number;
-    if (!Number.isFinite(v)) throw new RangeError(`value ${i} is not a finite number: ${v}`);
-    out[i] = v;
+  const out = Float64Array.from(values);
+  for (let i = 0; i < out.length; i++) {
+    const v = out[i] as number;
+    if (v - v !== 0) throw new RangeError(`value ${i} is not a finite number: ${v}`);
   }
   return out.sort();
 };
