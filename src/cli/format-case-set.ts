@@ -1,12 +1,14 @@
 // Plain-text lines for the case-set verbs: a summary, or the first problem as FILE:ROW: column COL.
 import type { CaseSetProblem, CaseSetSummary, Share } from '../io/case-set/types';
 
+const count = (n: number, noun: string): string => `${n} ${noun}${n === 1 ? '' : 's'}`;
+
 const percent = (share: Share): string =>
   share.estimate === null ? 'no suggestions' : `${share.k} of ${share.n} (${(100 * share.estimate).toFixed(1)}%)`;
 
 export const summaryLines = (summary: CaseSetSummary): string[] => {
   const lines = [
-    `case set "${summary.name}": ${summary.cases} cases and ${summary.practiceCases} practice cases, ${summary.images} images`,
+    `case set "${summary.name}": ${count(summary.cases, 'case')} and ${count(summary.practiceCases, 'practice case')}, ${count(summary.images, 'image')}`,
   ];
   for (const f of summary.findings) {
     const prevalence = f.prevalence === null ? '' : ` (${(100 * f.prevalence).toFixed(1)}%)`;

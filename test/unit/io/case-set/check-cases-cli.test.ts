@@ -32,7 +32,7 @@ describe('heed check-cases', () => {
   it('exits 0 with a summary for a good folder', () => {
     const run = heed('check-cases', writeSet('good', goodCsv()));
     expect(run.code).toBe(0);
-    expect(run.out).toMatch(/2 cases and 1 practice cases, 3 images/);
+    expect(run.out).toMatch(/2 cases and 1 practice case, 3 images/);
     expect(run.out).toMatch(/finding target: present in 1 of 2 \(50.0%\)/);
     expect(run.out).toMatch(/not a medical device/);
   });
