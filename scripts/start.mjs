@@ -2,7 +2,7 @@
 // `npm start`: build what is stale, then run Heed in the Electron shell when its binary is
 // installed, else in a Chromium app window on a local static server, else serve only.
 // Options (environment): HEED_MODE=electron|chromium|serve, HEED_PORT, HEED_DEBUG_PORT,
-// HEED_CHROMIUM (path to a Chromium). Heed is a research and training tool, not a medical device.
+// HEED_CHROMIUM (path to a Chromium), HEED_VERBOSE=1 (show Chromium's own log). Heed is a research and training tool, not a medical device.
 import { spawn, spawnSync } from 'node:child_process';
 import { mkdirSync } from 'node:fs';
 import { homedir } from 'node:os';
@@ -14,6 +14,7 @@ import {
 import { ELECTRON, RENDERER, targetIsStale } from './lib/freshness.mjs';
 import { startStaticServer } from './lib/static-server.mjs';
 
+const HANDOFF_MS = 3000;
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 const env = process.env;
 const say = (line) => console.log(`heed: ${line}`);
@@ -42,15 +43,34 @@ say(`mode ${choice.mode} (${choice.reason})`);
 if (targetIsStale(root, RENDERER)) run('the renderer (vite build)', [path.join(root, 'node_modules', 'vite', 'bin', 'vite.js'), 'build']);
 else say('renderer is up to date (dist/)');
 
+// Stops the child on Ctrl+C / SIGTERM; a stop we asked for counts as a clean exit.
 const forward = (child, onGone) => {
-  const stop = () => child.kill('SIGTERM');
+  let stopping = false;
+  const stop = () => {
+    stopping = true;
+    child.kill('SIGTERM');
+  };
   process.on('SIGINT', stop);
   process.on('SIGTERM', stop);
-  child.on('exit', (code, signal) => onGone(code ?? (signal ? 1 : 0)));
+  child.on('exit', (code, signal) => onGone(stopping ? 0 : code ?? (signal ? 1 : 0), stopping));
   child.on('error', (error) => {
     console.error(`heed: could not start ${child.spawnfile}: ${error.message}`);
-    onGone(1);
+    onGone(1, false);
   });
+};
+
+/** Keeps the last lines a child wrote, to show them only if it fails (Chromium logs harmless noise). */
+const tail = (stream, keep = 25) => {
+  const lines = [];
+  let partial = '';
+  stream.setEncoding('utf8');
+  stream.on('data', (text) => {
+    const parts = (partial + text).split('\n');
+    partial = parts.pop() ?? '';
+    lines.push(...parts);
+    if (lines.length > keep) lines.splice(0, lines.length - keep);
+  });
+  return () => [...lines, partial].filter((l) => l.trim() !== '');
 };
 
 if (choice.mode === 'electron') {
@@ -92,8 +112,23 @@ if (choice.mode === 'electron') {
     const isRoot = typeof process.getuid === 'function' && process.getuid() === 0;
     const args = chromiumArgs({ url: server.url, profileDir, isRoot, debugPort: debugPort.port });
     say(`opening a Chromium app window (profile ${profileDir})`);
-    const child = spawn(chromium, args, { stdio: ['ignore', 'inherit', 'inherit'], env });
-    forward(child, (code) => {
+    const verbose = Boolean(env.HEED_VERBOSE);
+    const child = spawn(chromium, args, { stdio: ['ignore', verbose ? 'inherit' : 'ignore', verbose ? 'inherit' : 'pipe'], env });
+    const lastLines = child.stderr ? tail(child.stderr) : () => [];
+    const launchedAt = Date.now();
+    forward(child, (code, stopped) => {
+      // A Chromium already running on this profile takes the window over and the new one exits at
+      // once; that window still needs the server.
+      if (code === 0 && !stopped && Date.now() - launchedAt < HANDOFF_MS) {
+        say('Chromium passed the window to a Chromium already running with Heed\'s profile; the server stays up, press Ctrl+C to stop');
+        process.on('SIGINT', () => shutdown(0));
+        process.on('SIGTERM', () => shutdown(0));
+        return;
+      }
+      if (code !== 0 && !stopped) {
+        console.error(`heed: Chromium exited with code ${code}; its last output:`);
+        for (const line of lastLines()) console.error(`  ${line}`);
+      }
       say('Chromium closed; stopping the server');
       void shutdown(code);
     });
