@@ -68,8 +68,10 @@ export type AnswerCommit = {
   cautionShown: boolean;
 };
 
-/** Commits one answer durably; resolves once the transaction is complete. Returns the next position. */
-export const commitAnswer = (db: HeedDb, input: AnswerCommit): Promise<SessionPosition> =>
+export type Committed = { position: SessionPosition; read: StoredRead };
+
+/** Commits one answer durably; resolves once the transaction is complete, with the stored read and the next position. */
+export const commitAnswerAndRead = (db: HeedDb, input: AnswerCommit): Promise<Committed> =>
   db.transaction('rw', db.reads, db.sessions, db.events, async () => {
     const { session } = input;
     const reads = await readsOfSession(db, session.id);
@@ -96,5 +98,9 @@ export const commitAnswer = (db: HeedDb, input: AnswerCommit): Promise<SessionPo
       await db.sessions.update(session.id, { completedAt: new Date().toISOString() });
       await appendEvent(db, session.studyId, 'session-completed', { sessionId: session.id });
     }
-    return next;
+    return { position: next, read };
   });
+
+/** Commits one answer durably; resolves once the transaction is complete. Returns the next position. */
+export const commitAnswer = async (db: HeedDb, input: AnswerCommit): Promise<SessionPosition> =>
+  (await commitAnswerAndRead(db, input)).position;

@@ -29,8 +29,8 @@ export const ReadingScreen = ({ studyId, sessionId }: Props) => {
   const setId = loaded?.setId;
   const cache = useMemo(() => (setId ? createImageCache(db, setId) : null), [db, setId]);
   const [loadedImage, setLoadedImage] = useState<{ path: string; image: GrayImage } | null>(null);
-  const [imageIndex, setImageIndex] = useState(0);
-  const [view, setView] = useState<View>(DEFAULT_VIEW);
+  // view and image choice belong to one case: a new case starts from the defaults in its first render
+  const [viewOf, setViewOf] = useState<{ caseId: string; view: View; imageIndex: number } | null>(null);
   const [call, setCall] = useState<Bit | null>(null);
   const [confidence, setConfidence] = useState<number | null>(null);
   const [busy, setBusy] = useState(false);
@@ -43,16 +43,31 @@ export const ReadingScreen = ({ studyId, sessionId }: Props) => {
   const breaksTaken = useRef(new Set<string>());
 
   const item = position && !position.done ? position.item : null;
+  const mine = viewOf && item && viewOf.caseId === item.caseId ? viewOf : null;
+  const view = mine?.view ?? DEFAULT_VIEW;
+  const imageIndex = mine?.imageIndex ?? 0;
+  const setView = useCallback((next: View | ((v: View) => View)) => {
+    if (!item) return;
+    setViewOf((old) => {
+      const base = old && old.caseId === item.caseId ? old : { caseId: item.caseId, view: DEFAULT_VIEW, imageIndex: 0 };
+      return { ...base, view: typeof next === 'function' ? next(base.view) : next };
+    });
+  }, [item]);
+  const setImageIndex = useCallback((step: (i: number) => number) => {
+    if (!item) return;
+    setViewOf((old) => {
+      const base = old && old.caseId === item.caseId ? old : { caseId: item.caseId, view: DEFAULT_VIEW, imageIndex: 0 };
+      return { ...base, imageIndex: step(base.imageIndex) };
+    });
+  }, [item]);
   const caseRecord = item ? loaded?.cases.get(item.caseId) : undefined;
   const currentRead = item && position && !position.done
     ? reads.find((r) => r.caseId === item.caseId && r.finding === position.step.finding) : undefined;
 
-  // A new case: reset the view, offer a break if one is due, load its image and the next case's.
+  // A new case: offer a break if one is due, and load the next case's images ahead.
   useEffect(() => {
     if (!item || !caseRecord || !cache || !loaded || !position || position.done) return;
     if (clockCase.current === item.caseId) return;
-    setView(DEFAULT_VIEW);
-    setImageIndex(0);
     if (item.breakBefore && !breaksTaken.current.has(item.caseId)) setBreakFor(item.caseId);
     const next = loaded.session.items[position.step.itemIndex + 1];
     const nextPaths = next ? loaded.cases.get(next.caseId)?.images ?? [] : [];
@@ -69,7 +84,8 @@ export const ReadingScreen = ({ studyId, sessionId }: Props) => {
   }, [cache, imagePath]);
 
   // Only this case's own pixels are handed to the viewport, never the previous case's.
-  const image = loadedImage && caseRecord?.images.includes(loadedImage.path) ? loadedImage.image : null;
+  const prefetched = imagePath ? cache?.peek(imagePath) : undefined;
+  const image = prefetched ?? (loadedImage && caseRecord?.images.includes(loadedImage.path) ? loadedImage.image : null);
 
   // The clock of a case starts when its pixels are drawn (and not during a break).
   const onDrawn = useCallback(() => {
@@ -123,7 +139,7 @@ export const ReadingScreen = ({ studyId, sessionId }: Props) => {
     setBreakFor(null);
     clockCase.current = null; // the clock starts at the next draw
     setView((v) => ({ ...v }));
-  }, [breakFor]);
+  }, [breakFor, setView]);
 
   useEffect(() => {
     const onKey = (event: KeyboardEvent) => {
@@ -145,7 +161,7 @@ export const ReadingScreen = ({ studyId, sessionId }: Props) => {
     };
     window.addEventListener('keydown', onKey);
     return () => window.removeEventListener('keydown', onKey);
-  }, [paused, busy, breakFor, doCommit, togglePause, endBreak, caseRecord]);
+  }, [paused, busy, breakFor, doCommit, togglePause, endBreak, caseRecord, setView, setImageIndex]);
 
   if (error) return <main className="reading"><p role="alert">Cannot open this session: {error}</p></main>;
   if (!loaded || !position) return <main className="reading" aria-busy="true"><p>Opening the session…</p></main>;

@@ -11,7 +11,7 @@ import type { SuggestionRow } from '../../core/suggestions';
 import { getCaseSet } from '../../store/case-sets';
 import type { HeedDb } from '../../store/db';
 import type { StoredRead, StoredSession, StoredStudy } from '../../store/records';
-import { commitAnswer, getSession, readsOfSession, sessionPosition } from '../../store/sessions';
+import { commitAnswerAndRead, getSession, readsOfSession, sessionPosition } from '../../store/sessions';
 import { getStudy } from '../../store/studies';
 
 export type LoadedSession = {
@@ -56,13 +56,14 @@ export const useReadingSession = (db: HeedDb, studyId: string, sessionId: string
     const { step, item } = position;
     const shown = loaded.suggestions.get(suggestionKey(item.caseId, step.finding));
     const aided = item.assistance !== 'none';
-    const next = await commitAnswer(db, {
+    const { position: next, read } = await commitAnswerAndRead(db, {
       session: loaded.session, findings: loaded.study.design.findings, step,
       call: answer.call, confidence: answer.confidence, ms: answer.ms, shownAt: answer.shownAt,
       suggestion: aided && shown ? { call: shown.call, score: loaded.study.design.showScore ? shown.score : null, planted: shown.planted } : null,
       cautionShown: aided && item.caution,
     });
-    setReads(await readsOfSession(db, loaded.session.id));
+    // the stored read comes back from the transaction: no second query before the next case
+    setReads((current) => [...current.filter((r) => r.id !== read.id), read]);
     setPosition(next);
     return next;
   }, [db, loaded, position]);
