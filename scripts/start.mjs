@@ -15,6 +15,16 @@ import { ELECTRON, RENDERER, targetIsStale } from './lib/freshness.mjs';
 import { startStaticServer } from './lib/static-server.mjs';
 
 const HANDOFF_MS = 3000;
+
+/** Whether `url` answers with Heed's own page (another launcher of ours is serving there). */
+const servesHeed = async (url) => {
+  try {
+    const response = await fetch(url, { signal: AbortSignal.timeout(2000) });
+    return response.ok && /<title>Heed<\/title>/.test(await response.text());
+  } catch {
+    return false;
+  }
+};
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 const env = process.env;
 const say = (line) => console.log(`heed: ${line}`);
@@ -85,10 +95,14 @@ if (choice.mode === 'electron') {
       return await startStaticServer({ root: dist, port: DEFAULT_PORT });
     } catch (error) {
       if (error?.code !== 'EADDRINUSE') throw error;
-      const server = await startStaticServer({ root: dist, port: 0 });
-      // IndexedDB is kept per origin, so another port means another (empty) database.
-      say(`port ${DEFAULT_PORT} is busy, so using ${server.port}; data saved at this address is kept apart from the usual ${DEFAULT_PORT}`);
-      return server;
+      // IndexedDB is kept per origin: another port would open another, empty database. So reuse a
+      // Heed already serving on the usual port, and otherwise stop rather than hide the data.
+      const url = `http://127.0.0.1:${DEFAULT_PORT}/`;
+      if (await servesHeed(url)) {
+        say(`Heed is already being served at ${url}; using it`);
+        return { url, port: DEFAULT_PORT, reused: true, close: async () => undefined };
+      }
+      fail(`port ${DEFAULT_PORT} is taken by another program. Heed keeps its data per address, so stop that program, or choose HEED_PORT=<port> knowing that address starts with an empty database.`);
     }
   };
   let server;
@@ -97,7 +111,8 @@ if (choice.mode === 'electron') {
   } catch (error) {
     fail(`could not serve dist/ on 127.0.0.1${port.port ? `:${port.port}` : ''}: ${error.message}`);
   }
-  say(`serving dist/ at ${server.url} (127.0.0.1 only)`);
+  if (server.reused && choice.mode === 'serve') process.exit(0);
+  if (!server.reused) say(`serving dist/ at ${server.url} (127.0.0.1 only)`);
   const shutdown = async (code) => {
     await server.close();
     process.exit(code);
