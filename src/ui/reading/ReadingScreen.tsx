@@ -23,6 +23,12 @@ import { useReadingSession } from './use-reading-session';
 
 type Props = { studyId: string; sessionId: string };
 
+/** The reading view fills the screen on request (F); leaving it is always one key away. */
+const toggleFullscreen = (): void => {
+  if (document.fullscreenElement) void document.exitFullscreen();
+  else void document.documentElement.requestFullscreen().catch(() => undefined);
+};
+
 export const ReadingScreen = ({ studyId, sessionId }: Props) => {
   const db = useDb();
   const { loaded, position, reads, error, commit } = useReadingSession(db, studyId, sessionId);
@@ -146,6 +152,7 @@ export const ReadingScreen = ({ studyId, sessionId }: Props) => {
       const action = readingKeyAction(event);
       if (!action) return;
       event.preventDefault();
+      if (action.kind === 'fullscreen') { toggleFullscreen(); return; }
       if (action.kind === 'pause') { if (breakFor) endBreak(); else togglePause(); return; }
       if (paused || busy) return;
       if (breakFor) { if (action.kind === 'commit') endBreak(); return; }
@@ -183,6 +190,7 @@ export const ReadingScreen = ({ studyId, sessionId }: Props) => {
         {findingCount > 1 && <span>Question {loaded.study.design.findings.indexOf(step.finding) + 1} of {findingCount}</span>}
         <span className="reading-reader">Reader {loaded.readerCode} · period {loaded.session.period}</span>
         <span className="reading-caution" title={RESEARCH_CAUTION}>Research and training tool, not a medical device</span>
+        <button type="button" onClick={toggleFullscreen}>Full screen <kbd>F</kbd></button>
         <button type="button" onClick={togglePause} disabled={!clockStarted}>{paused ? 'Resume' : 'Pause'} <kbd>Esc</kbd></button>
       </header>
       <div className="reading-body">

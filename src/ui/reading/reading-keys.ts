@@ -9,7 +9,8 @@ export type KeyAction =
   | { kind: 'pause' }
   | { kind: 'zoom'; factor: number }
   | { kind: 'reset-view' }
-  | { kind: 'image'; step: number };
+  | { kind: 'image'; step: number }
+  | { kind: 'fullscreen' };
 
 export const readingKeyAction = (event: Pick<KeyboardEvent, 'key' | 'ctrlKey' | 'metaKey' | 'altKey'>): KeyAction | null => {
   if (event.ctrlKey || event.metaKey || event.altKey) return null;
@@ -24,6 +25,7 @@ export const readingKeyAction = (event: Pick<KeyboardEvent, 'key' | 'ctrlKey' | 
   if (key === '+' || key === '=') return { kind: 'zoom', factor: 1.25 };
   if (key === '-' || key === '_') return { kind: 'zoom', factor: 0.8 };
   if (key === 'r' || key === 'R') return { kind: 'reset-view' };
+  if (key === 'f' || key === 'F') return { kind: 'fullscreen' };
   if (key === '[') return { kind: 'image', step: -1 };
   if (key === ']') return { kind: 'image', step: 1 };
   return null;

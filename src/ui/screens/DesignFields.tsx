@@ -27,6 +27,10 @@ export const DesignFields = ({ values: v, caseSet, onChange }: Props) => {
           </select>
         </label>
         <p className="muted">Two sequences: unaided then aided (UA), and aided then unaided (AU); readers are assigned to them balanced.</p>
+        <label>Custom sequences (optional, replaces the two above)
+          <textarea rows={3} value={v.customSequences} placeholder={'one per line, e.g.\nUSC: none, sequential, concurrent\nCUS: concurrent, none, sequential'} onChange={(e) => set('customSequences', e.target.value)} />
+          <small>two or more sequences with the same number of periods; each period is none, concurrent or sequential</small>
+        </label>
         <label>Washout days <input inputMode="numeric" value={v.washoutDays} onChange={(e) => set('washoutDays', e.target.value)} /></label>
         <label>Blocks <input inputMode="numeric" value={v.blocks} onChange={(e) => set('blocks', e.target.value)} />
           <small>1: every case in every period; 2: cases split in two blocks, each read once per condition</small></label>

@@ -2,6 +2,7 @@
 import { designCheck } from '../../core/design-check';
 import { designSummary } from '../../core/design-summary';
 import type { StoredCaseSet, StoredStudy } from '../../store/records';
+import { PlantedList } from './PlantedList';
 
 export const DesignSummary = ({ study, caseSet }: { study: StoredStudy; caseSet: StoredCaseSet }) => {
   const lines = designSummary(study.design, { manifest: caseSet.manifest, table: study.suggestions });
@@ -26,6 +27,7 @@ export const DesignSummary = ({ study, caseSet }: { study: StoredStudy; caseSet:
       </table>
       {check.rows.filter((r) => r.warning).map((r) => <p key={`${r.sequence}/${r.finding}`} className="warning" role="note">{r.warning}</p>)}
       <p className="muted formula">{check.formula}</p>
+      <PlantedList study={study} />
     </section>
   );
 };

@@ -1,11 +1,13 @@
 /** The new-study form's values, and how they become a StudyDesign. */
-import { defaultDesign, type Assistance, type CautionMode, type StudyDesign } from '../../core/design';
+import { defaultDesign, type Assistance, type CautionMode, type Sequence, type StudyDesign } from '../../core/design';
 
 export type DesignFormValues = {
   name: string;
   caseSetId: string;
   findings: string[];
   aidedMode: Exclude<Assistance, 'none'>;
+  /** optional: one sequence per line, "LABEL: none, sequential, concurrent"; empty for the two standard ones */
+  customSequences: string;
   washoutDays: string;
   threshold: string;
   showScore: boolean;
@@ -24,11 +26,24 @@ export type DesignFormValues = {
 export const initialFormValues = (caseSetId: string, findings: string[]): DesignFormValues => {
   const d = defaultDesign(findings);
   return {
-    name: '', caseSetId, findings, aidedMode: 'sequential', washoutDays: String(d.washoutDays), threshold: String(d.threshold),
+    name: '', caseSetId, findings, aidedMode: 'sequential', customSequences: '', washoutDays: String(d.washoutDays), threshold: String(d.threshold),
     showScore: d.showScore, askConfidence: d.askConfidence, plantedFalsePositive: '0', plantedFalseNegative: '0', plantMode: 'count',
     stratifyBy: '', cautionMode: d.caution.mode, cautionText: d.caution.text, blocks: '1', breakEvery: '', seed: String(d.seed),
   };
 };
+
+const ASSISTANCE_WORDS: Record<string, Assistance> = { none: 'none', unaided: 'none', concurrent: 'concurrent', sequential: 'sequential' };
+
+/** Parses custom sequences, one per line: "UAA: none, sequential, concurrent". */
+export const parseSequences = (text: string, problems: string[]): Sequence[] =>
+  text.split('\n').map((line, i) => ({ line: line.trim(), n: i + 1 })).filter((l) => l.line !== '').flatMap(({ line, n }) => {
+    const match = /^([A-Za-z0-9_-]{1,16})\s*:\s*(.+)$/.exec(line);
+    if (!match) { problems.push(`Sequences, line ${n}: write it as "LABEL: none, sequential" (got "${line}").`); return []; }
+    const periods = (match[2] ?? '').split(',').map((w) => w.trim().toLowerCase());
+    const unknown = periods.find((w) => !(w in ASSISTANCE_WORDS));
+    if (unknown !== undefined) { problems.push(`Sequences, line ${n}: "${unknown}" is not none, concurrent or sequential.`); return []; }
+    return [{ label: match[1] ?? '', periods: periods.map((w) => ASSISTANCE_WORDS[w] ?? 'none') }];
+  });
 
 const numberField = (label: string, text: string, problems: string[]): number => {
   const value = Number(text.trim());
@@ -48,11 +63,12 @@ export const designFromForm = (v: DesignFormValues): { design: StudyDesign } | {
   const blocks = numberField('Blocks', v.blocks, problems);
   const seed = numberField('Seed', v.seed, problems);
   const breakEvery = v.breakEvery.trim() === '' ? null : numberField('Break every', v.breakEvery, problems);
+  const custom = parseSequences(v.customSequences, problems);
   if (problems.length > 0) return { problems };
   return {
     design: {
       ...defaultDesign(v.findings),
-      sequences: [
+      sequences: custom.length > 0 ? custom : [
         { label: 'UA', periods: ['none', v.aidedMode] },
         { label: 'AU', periods: [v.aidedMode, 'none'] },
       ],

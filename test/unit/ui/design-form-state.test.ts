@@ -15,4 +15,17 @@ describe('the new-study form', () => {
       'Study name: give the study a name.', 'Washout days: "four" is not a number.', 'Seed: "" is not a number.',
     ]);
   });
+
+  it('takes custom sequences of three periods, and names the line of a bad one', () => {
+    const ok = designFromForm({ ...initialFormValues('set', ['nodule']), name: 'S', customSequences: 'USC: none, sequential, concurrent\n\nCUS: concurrent, unaided, sequential' });
+    if (!('design' in ok)) throw new Error(ok.problems.join('; '));
+    expect(ok.design.sequences).toEqual([
+      { label: 'USC', periods: ['none', 'sequential', 'concurrent'] }, { label: 'CUS', periods: ['concurrent', 'none', 'sequential'] },
+    ]);
+    expect(parseDesign(ok.design).ok).toBe(true);
+    const bad = designFromForm({ ...initialFormValues('set', ['nodule']), name: 'S', customSequences: 'A: none, aided\nB none' });
+    expect('problems' in bad && bad.problems).toEqual([
+      'Sequences, line 1: "aided" is not none, concurrent or sequential.', 'Sequences, line 2: write it as "LABEL: none, sequential" (got "B none").',
+    ]);
+  });
 });

@@ -13,6 +13,7 @@ describe('reading keys', () => {
     expect(press('ArrowDown')).toEqual({ kind: 'confidence-step', step: -5 });
     expect(press('Enter')).toEqual({ kind: 'commit' });
     expect(press('Escape')).toEqual({ kind: 'pause' });
+    expect(press('f')).toEqual({ kind: 'fullscreen' });
   });
   it('leaves modified keys and unknown keys to the browser', () => {
     expect(press('p', { ctrlKey: true })).toBeNull();
