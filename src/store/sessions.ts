@@ -104,3 +104,7 @@ export const commitAnswerAndRead = (db: HeedDb, input: AnswerCommit): Promise<Co
 /** Commits one answer durably; resolves once the transaction is complete. Returns the next position. */
 export const commitAnswer = async (db: HeedDb, input: AnswerCommit): Promise<SessionPosition> =>
   (await commitAnswerAndRead(db, input)).position;
+
+/** Records a moment of a session that is not an answer (pause, resume, break, reopened after a stop). */
+export const logSessionMoment = (db: HeedDb, session: StoredSession, type: 'paused' | 'resumed' | 'break-taken' | 'session-reopened', detail: Record<string, unknown>): Promise<unknown> =>
+  db.transaction('rw', db.events, () => appendEvent(db, session.studyId, type, { sessionId: session.id, ...detail }));

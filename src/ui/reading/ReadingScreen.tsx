@@ -9,6 +9,7 @@ import type { Bit } from '../../core/read-log';
 import { RESEARCH_CAUTION } from '../../core/research-caution';
 import { answerProblem, suggestionVisible } from '../../core/session';
 import { suggestionKey } from '../../core/suggestions';
+import { logSessionMoment } from '../../store/sessions';
 import { useDb } from '../db-context';
 import { signal } from '../signals';
 import { actions } from '../state/app-state';
@@ -138,14 +139,16 @@ export const ReadingScreen = ({ studyId, sessionId }: Props) => {
     const now = performance.now();
     clock.current = paused ? resumeClock(clock.current, now) : pauseClock(clock.current, now);
     setPaused(!paused);
-  }, [paused]);
+    if (loaded) void logSessionMoment(db, loaded.session, paused ? 'resumed' : 'paused', { caseId: clockCase.current });
+  }, [paused, db, loaded]);
 
   const endBreak = useCallback(() => {
     if (breakFor) breaksTaken.current.add(breakFor);
+    if (breakFor && loaded) void logSessionMoment(db, loaded.session, 'break-taken', { beforeCase: breakFor });
     setBreakFor(null);
     clockCase.current = null; // the clock starts at the next draw
     setView((v) => ({ ...v }));
-  }, [breakFor, setView]);
+  }, [breakFor, setView, db, loaded]);
 
   useEffect(() => {
     const onKey = (event: KeyboardEvent) => {

@@ -11,7 +11,7 @@ import type { SuggestionRow } from '../../core/suggestions';
 import { getCaseSet } from '../../store/case-sets';
 import type { HeedDb } from '../../store/db';
 import type { StoredRead, StoredSession, StoredStudy } from '../../store/records';
-import { commitAnswerAndRead, getSession, readsOfSession, sessionPosition } from '../../store/sessions';
+import { commitAnswerAndRead, getSession, logSessionMoment, readsOfSession, sessionPosition } from '../../store/sessions';
 import { getStudy } from '../../store/studies';
 
 export type LoadedSession = {
@@ -47,6 +47,9 @@ export const useReadingSession = (db: HeedDb, studyId: string, sessionId: string
       });
       setReads(committed);
       setPosition(next);
+      if (committed.length > 0 && !next.done) {
+        void logSessionMoment(db, session, 'session-reopened', { atCase: next.item.caseId, phase: next.step.phase });
+      }
     })().catch((e: unknown) => { if (live) setError(e instanceof Error ? e.message : String(e)); });
     return () => { live = false; };
   }, [db, studyId, sessionId]);
