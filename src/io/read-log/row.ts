@@ -1,0 +1,66 @@
+// One data row of a reads.csv into a typed read. Cells are checked in a fixed order, so a row
+// with several problems always reports the same (first) one.
+import { READ_LOG_COLUMNS, type ReadLogColumn, type ReadRow } from '../../core/read-log';
+import * as f from './fields';
+import { ReadLogError } from './read-log-error';
+
+/** Where each required column sits in the header, and the case_<name> columns. */
+export type RowLayout = { at: Readonly<Record<string, number>>; attrs: { name: string; i: number }[] };
+
+/** The layout of a header whose required columns are known to be present. */
+export const rowLayout = (header: readonly string[]): RowLayout => {
+  const at = Object.fromEntries(READ_LOG_COLUMNS.map((col) => [col, header.indexOf(col)]));
+  const attrs = header.flatMap((name, i) => (name.startsWith('case_') && name !== 'case_id' ? [{ name: name.slice(5), i }] : []));
+  return { at, attrs };
+};
+
+/**
+ * The typed read of one row whose cell count matches the header.
+ * Throws ReadLogError naming the line and the first bad column.
+ */
+export const parseRow = (cells: readonly string[], line: number, layout: RowLayout): ReadRow => {
+  const { at } = layout;
+  const cell = (column: ReadLogColumn): string => cells[at[column] ?? -1] ?? '';
+  const assistance = f.assistance(cell('assistance'), line, 'assistance');
+  const aiCall = f.optionalBit(cell('ai_call'), line, 'ai_call');
+  if (assistance === 'none' && aiCall !== null) throw new ReadLogError(line, 'ai_call', 'must be empty when assistance is none');
+  if (assistance !== 'none' && aiCall === null) throw new ReadLogError(line, 'ai_call', `must be 0 or 1 when assistance is ${assistance}`);
+  const initialCall = f.optionalBit(cell('initial_call'), line, 'initial_call');
+  if (assistance === 'sequential' && initialCall === null) throw new ReadLogError(line, 'initial_call', 'must be 0 or 1 when assistance is sequential');
+  const case_attributes: Record<string, string> = {};
+  for (const a of layout.attrs) case_attributes[a.name] = cells[a.i] ?? '';
+  // the property order below is the order cells are checked in (and the ReadRow field order)
+  return {
+    study_id: f.text(cell('study_id'), line, 'study_id'),
+    reader_id: f.text(cell('reader_id'), line, 'reader_id'),
+    reader_role: cell('reader_role'),
+    reader_years: f.optionalNumber(cell('reader_years'), line, 'reader_years', 0, 100, 'a number of years in 0..100'),
+    sequence: f.optionalText(cell('sequence')),
+    period: f.positiveInteger(cell('period'), line, 'period'),
+    assistance,
+    case_id: f.text(cell('case_id'), line, 'case_id'),
+    finding: f.text(cell('finding'), line, 'finding'),
+    practice: f.bit(cell('practice'), line, 'practice'),
+    order: f.positiveInteger(cell('order'), line, 'order'),
+    truth: f.bit(cell('truth'), line, 'truth'),
+    ai_call: aiCall,
+    ai_score: f.optionalNumber(cell('ai_score'), line, 'ai_score', 0, 1, 'a score in [0,1]'),
+    ai_planted: f.bit(cell('ai_planted'), line, 'ai_planted'),
+    caution_shown: f.bit(cell('caution_shown'), line, 'caution_shown'),
+    initial_call: initialCall,
+    initial_confidence: f.optionalNumber(cell('initial_confidence'), line, 'initial_confidence', 0, 100, 'a confidence in 0..100'),
+    initial_ms: f.optionalNumber(cell('initial_ms'), line, 'initial_ms', 0, Infinity, 'a time in ms >= 0'),
+    final_call: f.bit(cell('final_call'), line, 'final_call'),
+    final_confidence: f.optionalNumber(cell('final_confidence'), line, 'final_confidence', 0, 100, 'a confidence in 0..100'),
+    total_ms: f.number(cell('total_ms'), line, 'total_ms', 0, Infinity, 'a time in ms >= 0'),
+    shown_at: f.isoUtc(cell('shown_at'), line, 'shown_at'),
+    case_attributes,
+  };
+};
+
+/**
+ * A key equal for two reads exactly when reader, case, finding and period are equal: each text
+ * is preceded by its length, so no choice of ids can make two different reads collide.
+ */
+export const readKey = (r: ReadRow): string =>
+  `${r.reader_id.length}:${r.reader_id}${r.case_id.length}:${r.case_id}${r.finding.length}:${r.finding}${r.period}`;
