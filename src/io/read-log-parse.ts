@@ -1,7 +1,7 @@
 import Papa from 'papaparse';
 import { READ_LOG_COLUMNS, type ReadRow } from '../core/read-log';
 import { ReadLogError } from './read-log/read-log-error';
-import { parseRow, readKey, rowLayout } from './read-log/row';
+import { parseRow, repeatedReads, rowLayout, type RowLayout } from './read-log/row';
 
 export { ReadLogError } from './read-log/read-log-error';
 
@@ -17,51 +17,59 @@ export { ReadLogError } from './read-log/read-log-error';
 export const parseReadLog = (input: string): ReadRow[] => {
   const textIn = input.charCodeAt(0) === 0xfeff ? input.slice(1) : input;
   if (textIn.trim() === '') throw new ReadLogError(1, null, 'the file is empty');
-  const records = splitRecords(textIn);
-  const header = records.cells[0];
-  if (header === undefined) throw new ReadLogError(1, null, 'the file is empty');
-  checkHeader(header, records.lines[0] ?? 1);
-  const layout = rowLayout(header);
-  const width = header.length;
-  const seen = new Map<string, number>();
+  // Rows are typed as the CSV parser hands them over, so their cells die young instead of all
+  // 100,000 rows of strings living until the end. A CSV-level problem anywhere in the file still
+  // wins over a problem in a row, as when the whole file was split first, so the first row
+  // problem is only kept until the parse ends.
+  let header: string[] | null = null;
+  let layout: RowLayout | null = null;
+  let rowProblem: ReadLogError | null = null;
+  const earlierRead = repeatedReads();
   const rows: ReadRow[] = [];
-  for (let k = 1; k < records.cells.length; k++) {
-    const cells = records.cells[k] as string[];
-    const line = records.lines[k] as number;
-    if (cells.length === 1 && cells[0] === '') continue;
+  const take = (cells: string[], line: number): void => {
+    if (header === null) {
+      header = cells;
+      checkHeader(cells, line);
+      layout = rowLayout(cells);
+      return;
+    }
+    if (cells.length === 1 && cells[0] === '') return;
+    const width = header.length;
     if (cells.length !== width) {
       const col = header[Math.min(cells.length, width - 1)] ?? null;
       throw new ReadLogError(line, cells.length < width ? col : null, `row has ${cells.length} fields, the header has ${width}`);
     }
-    const row = parseRow(cells, line, layout);
-    const key = readKey(row);
-    const earlier = seen.get(key);
+    const row = parseRow(cells, line, layout as RowLayout);
+    const earlier = earlierRead(row, line);
     if (earlier !== undefined) throw new ReadLogError(line, 'case_id', `repeats the read of line ${earlier} (same reader, case, finding and period)`);
-    seen.set(key, line);
     rows.push(row);
-  }
+  };
+  splitRecords(textIn, (cells, line) => {
+    if (rowProblem !== null) return;
+    try {
+      take(cells, line);
+    } catch (error) {
+      if (!(error instanceof ReadLogError)) throw error;
+      rowProblem = error;
+    }
+  });
+  if (rowProblem !== null) throw rowProblem;
+  if (header === null) throw new ReadLogError(1, null, 'the file is empty');
   return rows;
 };
 
-// The records' cells and their 1-based line numbers, side by side.
-type RawRecords = { cells: string[][]; lines: number[] };
-
 // Papaparse reports each row's end offset; a row starts where the previous ended, and its line
-// is 1 + the newlines before that start (quoted cells may span lines).
-const splitRecords = (text: string): RawRecords => {
+// is 1 + the newlines before that start (quoted cells may span lines). Hands each record to
+// `take` in order; throws a ReadLogError for unreadable CSV.
+const splitRecords = (text: string, take: (cells: string[], line: number) => void): void => {
   const newlines: number[] = [];
   for (let i = text.indexOf('\n'); i !== -1; i = text.indexOf('\n', i + 1)) newlines.push(i);
+  // rows arrive in order, so the count of newlines before a row's start only moves forward
+  let before = 0;
   const lineAt = (offset: number) => {
-    let lo = 0;
-    let hi = newlines.length;
-    while (lo < hi) {
-      const mid = (lo + hi) >>> 1;
-      if ((newlines[mid] as number) < offset) lo = mid + 1;
-      else hi = mid;
-    }
-    return lo + 1;
+    while (before < newlines.length && (newlines[before] as number) < offset) before++;
+    return before + 1;
   };
-  const out: RawRecords = { cells: [], lines: [] };
   let start = 0;
   let problem: ReadLogError | null = null;
   Papa.parse<string[]>(text, {
@@ -76,13 +84,11 @@ const splitRecords = (text: string): RawRecords => {
         parser.abort();
         return;
       }
-      out.cells.push(r.data);
-      out.lines.push(line);
+      take(r.data, line);
       start = r.meta.cursor;
     },
   });
   if (problem !== null) throw problem;
-  return out;
 };
 
 const checkHeader = (cells: string[], line: number): void => {

@@ -59,8 +59,23 @@ export const parseRow = (cells: readonly string[], line: number, layout: RowLayo
 };
 
 /**
- * A key equal for two reads exactly when reader, case, finding and period are equal: each text
- * is preceded by its length, so no choice of ids can make two different reads collide.
+ * Remembers each read's line and answers, for a new read, the line of an earlier read with the
+ * same reader, case, finding and period (undefined when none). Keys are two-level, reader and
+ * finding then period and case: the length prefix and the ':' after the (digits-only) period
+ * keep distinct reads apart whatever their ids hold.
  */
-export const readKey = (r: ReadRow): string =>
-  `${r.reader_id.length}:${r.reader_id}${r.case_id.length}:${r.case_id}${r.finding.length}:${r.finding}${r.period}`;
+export const repeatedReads = (): ((r: ReadRow, line: number) => number | undefined) => {
+  const byReader = new Map<string, Map<string, number>>();
+  return (r, line) => {
+    const outer = `${r.reader_id.length}:${r.reader_id}${r.finding}`;
+    let inner = byReader.get(outer);
+    if (inner === undefined) {
+      inner = new Map();
+      byReader.set(outer, inner);
+    }
+    const key = `${r.period}:${r.case_id}`;
+    const earlier = inner.get(key);
+    if (earlier === undefined) inner.set(key, line);
+    return earlier;
+  };
+};
