@@ -26,6 +26,15 @@ const main = async (argv: string[]): Promise<number> => {
   return (await load())(rest);
 };
 
+// A reader that stops early (`heed analyze FILE --json | head`) closes the pipe: that is not a
+// failure of heed, so leave quietly instead of crashing on the unhandled write error.
+for (const stream of [process.stdout, process.stderr]) {
+  stream.on('error', (error: NodeJS.ErrnoException) => {
+    if (error.code === 'EPIPE') process.exit(process.exitCode ?? 0);
+    throw error;
+  });
+}
+
 main(process.argv.slice(2)).then(
   (code) => { process.exitCode = code; },
   (error: unknown) => {
