@@ -20,7 +20,8 @@ export const startApp = ({ distRoot, preload }: AppPaths, env: Record<string, st
   protocol.registerSchemesAsPrivileged([{ scheme: APP_SCHEME, privileges: APP_SCHEME_PRIVILEGES }]);
   app.enableSandbox();
   const debugPort = debugPortFrom(env.HEED_DEBUG_PORT);
-  if (debugPort !== null) app.commandLine.appendSwitch('remote-debugging-port', String(debugPort));
+  // Remote debugging only for measuring a development build, never in a packaged app.
+  if (debugPort !== null && !app.isPackaged) app.commandLine.appendSwitch('remote-debugging-port', String(debugPort));
 
   // One Heed per user: two windows writing one IndexedDB would fight over a reading session.
   if (!app.requestSingleInstanceLock()) {

@@ -41,8 +41,9 @@ export const applySessionPolicy = (session: Session): void => {
   session.webRequest.onHeadersReceived((details, callback) => {
     callback({ responseHeaders: { ...details.responseHeaders, 'Content-Security-Policy': [CONTENT_SECURITY_POLICY] } });
   });
-  session.setPermissionRequestHandler((_contents, _permission, callback) => callback(false));
-  session.setPermissionCheckHandler(() => false);
+  // Only full screen (the reading view's F key) is granted, and only to Heed's own page.
+  session.setPermissionRequestHandler((contents, permission, callback) => callback(permission === 'fullscreen' && isAppUrl(contents.getURL())));
+  session.setPermissionCheckHandler((_contents, permission, origin) => permission === 'fullscreen' && isAppUrl(origin));
   session.setDevicePermissionHandler(() => false);
 };
 

@@ -34,7 +34,7 @@ export const needsRebuild = ({ inputs, output }) => output === null || (inputs !
 
 /** The renderer's inputs and output, relative to the project root. */
 export const RENDERER = Object.freeze({
-  inputs: ['src', 'index.html', 'vite.config.ts', 'assets', 'package.json'],
+  inputs: ['src', 'demo-cases/generator', 'index.html', 'vite.config.ts', 'assets', 'package.json'],
   output: ['dist'],
 });
 

@@ -112,8 +112,9 @@ export const buildSuggestions = (manifest: CaseSetManifest, design: StudyDesign)
   return table.map((row) => {
     const kind = planted.get(suggestionKey(row.caseId, row.finding));
     if (kind === undefined) return row;
-    const score = plantedScore(scoreRng(kind, row.finding), design.threshold, kind);
-    return { ...row, call: kind === 'falsePositive' ? 1 : 0, score, planted: true };
+    // A set without scores shows no score anywhere: a planted row must not be the only one with a score.
+    const drawn = plantedScore(scoreRng(kind, row.finding), design.threshold, kind);
+    return { ...row, call: kind === 'falsePositive' ? 1 : 0, score: row.naturalScore === null ? null : drawn, planted: true };
   });
 };
 

@@ -26,17 +26,10 @@ import type { Assistance, Sequence, StudyDesign } from './design';
 import { caseBlocks } from './case-blocks';
 import { cautionFlags } from './caution';
 import { deriveSeed, rngFromSeed } from './rng';
+import type { SessionItem } from './session';
 
 /** One case in a reader's period; the same shape the session state machine reads. */
-export type ScheduleItem = {
-  caseId: string;
-  practice: boolean;
-  assistance: Assistance;
-  /** 1-based position within the period, practice included */
-  order: number;
-  caution: boolean;
-  breakBefore: boolean;
-};
+export type ScheduleItem = SessionItem;
 
 export type PeriodSchedule = {
   /** 1-based */

@@ -36,15 +36,16 @@ export type SessionPlan = { items: SessionItem[]; findings: string[] };
 
 const answerKey = (caseId: string, finding: string): string => `${caseId}\u0000${finding}`;
 
-/** Every step of the plan in order: per case, per finding, initial (sequential only) then final. */
+/**
+ * Every step of the plan in order: per case, one final call per finding; in sequential mode first
+ * the initial call of every finding, then the final calls, so no suggestion of the case is seen
+ * before all of its initial calls are locked.
+ */
 export const planSteps = (plan: SessionPlan): Step[] =>
-  plan.items.flatMap((item, itemIndex) =>
-    plan.findings.flatMap((finding): Step[] =>
-      item.assistance === 'sequential'
-        ? [{ itemIndex, finding, phase: 'initial' }, { itemIndex, finding, phase: 'final' }]
-        : [{ itemIndex, finding, phase: 'final' }],
-    ),
-  );
+  plan.items.flatMap((item, itemIndex) => {
+    const phases: Phase[] = item.assistance === 'sequential' ? ['initial', 'final'] : ['final'];
+    return phases.flatMap((phase) => plan.findings.map((finding): Step => ({ itemIndex, finding, phase })));
+  });
 
 export type SessionPosition =
   | { done: false; step: Step; stepIndex: number; totalSteps: number; item: SessionItem; caseNumber: number; caseCount: number }

@@ -9,14 +9,14 @@
  * Example: parseStudyJson(studyJson(design, extra)) gives back the same design and extra.
  */
 import { z } from 'zod';
+import { RESEARCH_CAUTION } from './research-caution';
 import type { StudyDesign } from './design';
 import { issuesToProblems, studyDesignSchema } from './design-schema';
 import type { SuggestionRow } from './suggestions';
 
 export const STUDY_FORMAT = 'heed-study';
 export const STUDY_VERSION = 1;
-export const STUDY_NOTICE =
-  'Heed is a research and training tool, not a medical device; it makes no diagnosis. Follow local governance (ethics board, data protection).';
+export const STUDY_NOTICE = RESEARCH_CAUTION;
 
 export type StudyExtra = {
   studyId: string;

@@ -7,7 +7,7 @@ import { parseDesign } from '../core/design-schema';
 import { buildSuggestions } from '../core/planting';
 import { buildSchedule } from '../core/schedule';
 import { sequenceIndexForSlot } from '../core/sequence-assignment';
-import { suggestionProblems } from '../core/suggestions';
+import { validateDesign } from '../core/design-validate';
 import { periodGate, type WashoutOverride } from '../core/washout';
 import { getCaseSet } from './case-sets';
 import type { HeedDb } from './db';
@@ -21,7 +21,7 @@ const checkedDesign = async (db: HeedDb, caseSetId: string, design: StudyDesign)
   const parsed = parseDesign(design);
   if (!parsed.ok) throw new InputError(`The design is not valid: ${parsed.problems.join('; ')}`);
   const caseSet = await getCaseSet(db, caseSetId);
-  const problems = suggestionProblems(caseSet.manifest, parsed.design);
+  const problems = validateDesign(parsed.design, caseSet.manifest);
   if (problems.length > 0) throw new InputError(`The design does not fit case set "${caseSet.name}": ${problems.join('; ')}`);
   return { design: parsed.design, suggestions: buildSuggestions(caseSet.manifest, parsed.design) };
 };

@@ -3,6 +3,7 @@ import { NewStudyScreen } from './screens/NewStudyScreen';
 import { StudyScreen } from './screens/StudyScreen';
 import { ReadingScreen } from './reading/ReadingScreen';
 import { ResultsScreen } from './screens/ResultsScreen';
+import { HandoverScreen } from './screens/HandoverScreen';
 import { actions, useAppState } from './state/app-state';
 
 export const App = () => {
@@ -19,7 +20,8 @@ export const App = () => {
       {screen.name === 'new-study' && <NewStudyScreen />}
       {screen.name === 'study' && <StudyScreen studyId={screen.studyId} />}
       {screen.name === 'results' && <ResultsScreen studyId={screen.studyId} />}
-      {screen.name === 'read' && <ReadingScreen studyId={screen.studyId} sessionId={screen.sessionId} />}
+      {screen.name === 'read' && <ReadingScreen studyId={screen.studyId} sessionId={screen.sessionId} notice={notice} />}
+      {screen.name === 'handover' && <HandoverScreen studyId={screen.studyId} />}
     </>
   );
 };

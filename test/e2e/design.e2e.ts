@@ -29,7 +29,8 @@ const readWholePeriod = async (chrome: RunningChromium) => {
     await reading.answerByKeys((steps % 2) as 0 | 1, 1 + (steps % 9));
     steps++;
   }
-  await chrome.page.getByRole('button', { name: 'Back to the study' }).click();
+  await chrome.page.getByRole('button', { name: 'Done: hand back the workstation' }).click();
+  await chrome.page.getByRole('button', { name: 'Coordinator: back to the study' }).click();
   return steps;
 };
 

@@ -68,11 +68,40 @@ describe('refusals and interruptions', () => {
     await readingPage(page).answerByKeys(1, 9);
     await page.getByRole('button', { name: /^Pause/ }).click();
     await page.getByRole('button', { name: /Leave the session/ }).click();
-    await homePage(page).waitUntilReady();
-    await homePage(page).openStudy('Pause check');
+    await page.getByRole('button', { name: 'Coordinator: back to the study' }).click();
+    await page.getByRole('heading', { name: 'Pause check' }).waitFor();
     const rows = Papa.parse<Record<string, string>>(await studyPage(page).exportText(/Save read log/), { header: true, skipEmptyLines: true }).data;
     expect(rows).toHaveLength(1);
     expect(Number(rows[0]?.total_ms)).toBeGreaterThan(0);
     expect(Number(rows[0]?.total_ms)).toBeLessThan(2500);
   });
+
+  it('offers a rest break before the planned case, with the image hidden and the clock waiting', async () => {
+    const page = chrome!.page;
+    await page.getByRole('button', { name: '← Heed' }).click();
+    await homePage(page).waitUntilReady();
+    await homePage(page).newStudy({ name: 'Break check', aidedMode: 'concurrent', breakEvery: 2 });
+    await studyPage(page).enrol('B01');
+    await studyPage(page).enrolled('B01');
+    const painted = await studyPage(page).startPeriod('B01', 1);
+    await readingPage(page).waitForCase(painted);
+    const reading = readingPage(page);
+    // 5 practice cases, then main cases; the first break comes before the 3rd main case (case 8),
+    // whose image is already prefetched when it comes up
+    for (let i = 0; i < 7; i++) {
+      expect(await page.getByRole('dialog', { name: 'Break' }).count()).toBe(0);
+      await reading.answerByKeys(1, 5);
+    }
+    await page.getByRole('dialog', { name: 'Break' }).waitFor();
+    expect((await reading.state()).progress).toBe('Case 8 of 125');
+    expect(await page.locator('canvas.viewport-canvas').evaluate((el) => getComputedStyle(el).visibility)).toBe('hidden');
+    const before = await page.evaluate(() => Number(document.body.getAttribute('data-heed-case-painted') ?? 0));
+    await page.keyboard.press('Enter');
+    await page.getByRole('dialog', { name: 'Break' }).waitFor({ state: 'detached' });
+    await reading.waitForCase(before);
+    expect(await page.locator('canvas.viewport-canvas').evaluate((el) => getComputedStyle(el).visibility)).toBe('visible');
+    await reading.answerByKeys(0, 7);
+    expect((await reading.state()).progress).toBe('Case 9 of 125');
+  });
 });
+

@@ -77,7 +77,8 @@ describe('spine: a crossover study on the demo set, durably, exported per Contra
     await readSteps(chrome, aidedFirst, pressed, 10_000);
     expect(await readingPage(page).isDone()).toBe(true);
     expect(pressed.size).toBe(250);
-    await page.getByRole('button', { name: 'Back to the study' }).click();
+    await page.getByRole('button', { name: 'Done: hand back the workstation' }).click();
+    await page.getByRole('button', { name: 'Coordinator: back to the study' }).click();
     await page.getByRole('heading', { name: 'Sequential demo' }).waitFor();
     const log1 = await study.exportText(/Save read log/);
 
@@ -111,8 +112,8 @@ describe('spine: a crossover study on the demo set, durably, exported per Contra
     // Export the concurrent study and check both logs against what was pressed.
     await page.getByRole('button', { name: /^Pause/ }).click();
     await page.getByRole('button', { name: /Leave the session/ }).click();
-    await homePage(page).waitUntilReady();
-    await homePage(page).openStudy('Concurrent demo');
+    await page.getByRole('button', { name: 'Coordinator: back to the study' }).click();
+    await page.getByRole('heading', { name: 'Concurrent demo' }).waitFor();
     const log2 = await studyPage(page).exportText(/Save read log/);
 
     for (const [log, reader, rows] of [[log1, aidedFirst, 125], [log2, 'C01', 10]] as const) {

@@ -12,7 +12,7 @@ import { suggestionKey } from '../../core/suggestions';
 import { logSessionMoment } from '../../store/sessions';
 import { useDb } from '../db-context';
 import { signal } from '../signals';
-import { actions } from '../state/app-state';
+import { actions, type Notice } from '../state/app-state';
 import { AnswerPanel } from './AnswerPanel';
 import { createImageCache } from './image-cache';
 import { DEFAULT_VIEW, ImageViewport, type View } from './ImageViewport';
@@ -22,7 +22,12 @@ import { SuggestionPanel } from './SuggestionPanel';
 import { readingKeyAction } from './reading-keys';
 import { useReadingSession } from './use-reading-session';
 
-type Props = { studyId: string; sessionId: string };
+type Props = { studyId: string; sessionId: string; notice: Notice | null };
+
+/** Logs a session moment; a failed log line must not interrupt reading, so it is reported, not thrown. */
+const logMoment = (...args: Parameters<typeof logSessionMoment>): void => {
+  logSessionMoment(...args).catch((e: unknown) => actions.notify({ kind: 'error', text: `Could not log ${args[2]}: ${String(e)}` }));
+};
 
 /** The reading view fills the screen on request (F); leaving it is always one key away. */
 const toggleFullscreen = (): void => {
@@ -30,7 +35,7 @@ const toggleFullscreen = (): void => {
   else void document.documentElement.requestFullscreen().catch(() => undefined);
 };
 
-export const ReadingScreen = ({ studyId, sessionId }: Props) => {
+export const ReadingScreen = ({ studyId, sessionId, notice }: Props) => {
   const db = useDb();
   const { loaded, position, reads, error, commit } = useReadingSession(db, studyId, sessionId);
   const setId = loaded?.setId;
@@ -42,12 +47,11 @@ export const ReadingScreen = ({ studyId, sessionId }: Props) => {
   const [confidence, setConfidence] = useState<number | null>(null);
   const [busy, setBusy] = useState(false);
   const [paused, setPaused] = useState(false);
-  const [breakFor, setBreakFor] = useState<string | null>(null);
+  const [breaksTaken, setBreaksTaken] = useState<ReadonlySet<string>>(new Set());
   const [clockStarted, setClockStarted] = useState(false);
   const clock = useRef<ActiveClock | null>(null);
   const clockCase = useRef<string | null>(null);
   const shownAt = useRef('');
-  const breaksTaken = useRef(new Set<string>());
 
   const item = position && !position.done ? position.item : null;
   const mine = viewOf && item && viewOf.caseId === item.caseId ? viewOf : null;
@@ -68,19 +72,20 @@ export const ReadingScreen = ({ studyId, sessionId }: Props) => {
     });
   }, [item]);
   const caseRecord = item ? loaded?.cases.get(item.caseId) : undefined;
+  // A rest screen before this case, until the reader continues: derived, so it holds from the case's first render.
+  const breakFor = item && item.breakBefore && !breaksTaken.has(item.caseId) ? item.caseId : null;
   const currentRead = item && position && !position.done
     ? reads.find((r) => r.caseId === item.caseId && r.finding === position.step.finding) : undefined;
 
-  // A new case: offer a break if one is due, and load the next case's images ahead.
+  // Each new case loads the next case's images ahead, so they can be drawn in its first render.
+  const itemIndex = position && !position.done ? position.step.itemIndex : -1;
   useEffect(() => {
-    if (!item || !caseRecord || !cache || !loaded || !position || position.done) return;
-    if (clockCase.current === item.caseId) return;
-    if (item.breakBefore && !breaksTaken.current.has(item.caseId)) setBreakFor(item.caseId);
-    const next = loaded.session.items[position.step.itemIndex + 1];
+    if (!caseRecord || !cache || !loaded || itemIndex < 0) return;
+    const next = loaded.session.items[itemIndex + 1];
     const nextPaths = next ? loaded.cases.get(next.caseId)?.images ?? [] : [];
     cache.forget(new Set([...caseRecord.images, ...nextPaths]));
-    for (const path of nextPaths) void cache.get(path);
-  }, [item, caseRecord, cache, loaded, position]);
+    for (const path of nextPaths) cache.get(path).catch(() => undefined); // a failure shows when that case is reached
+  }, [caseRecord, cache, loaded, itemIndex]);
 
   const imagePath = caseRecord?.images[imageIndex] ?? caseRecord?.images[0];
   useEffect(() => {
@@ -100,11 +105,13 @@ export const ReadingScreen = ({ studyId, sessionId }: Props) => {
     clockCase.current = item.caseId;
     const now = performance.now();
     const resumedInitial = currentRead?.initial?.ms ?? 0;
-    clock.current = { ...startClock(now), accumulated: resumedInitial };
+    const started = { ...startClock(now), accumulated: resumedInitial };
+    // drawn while paused (a save was finishing when the reader paused): the clock waits for resume
+    clock.current = paused ? pauseClock(started, now) : started;
     setClockStarted(true);
     shownAt.current = currentRead?.shownAt ?? new Date().toISOString();
     requestAnimationFrame(() => signal('case-painted', { caseId: item.caseId }));
-  }, [item, breakFor, currentRead]);
+  }, [item, breakFor, currentRead, paused]);
 
   useEffect(() => {
     if (position?.done) signal('ready', { screen: 'reading-done' });
@@ -139,16 +146,14 @@ export const ReadingScreen = ({ studyId, sessionId }: Props) => {
     const now = performance.now();
     clock.current = paused ? resumeClock(clock.current, now) : pauseClock(clock.current, now);
     setPaused(!paused);
-    if (loaded) void logSessionMoment(db, loaded.session, paused ? 'resumed' : 'paused', { caseId: clockCase.current });
+    if (loaded) logMoment(db, loaded.session, paused ? 'resumed' : 'paused', { caseId: clockCase.current });
   }, [paused, db, loaded]);
 
   const endBreak = useCallback(() => {
-    if (breakFor) breaksTaken.current.add(breakFor);
-    if (breakFor && loaded) void logSessionMoment(db, loaded.session, 'break-taken', { beforeCase: breakFor });
-    setBreakFor(null);
-    clockCase.current = null; // the clock starts at the next draw
-    setView((v) => ({ ...v }));
-  }, [breakFor, setView, db, loaded]);
+    if (!breakFor) return;
+    setBreaksTaken((taken) => new Set([...taken, breakFor]));
+    if (loaded) logMoment(db, loaded.session, 'break-taken', { beforeCase: breakFor });
+  }, [breakFor, db, loaded]);
 
   useEffect(() => {
     const onKey = (event: KeyboardEvent) => {
@@ -156,7 +161,11 @@ export const ReadingScreen = ({ studyId, sessionId }: Props) => {
       if (!action) return;
       event.preventDefault();
       if (action.kind === 'fullscreen') { toggleFullscreen(); return; }
-      if (action.kind === 'pause') { if (breakFor) endBreak(); else togglePause(); return; }
+      if (action.kind === 'pause') {
+        if (busy) return; // a save is finishing; pausing now would split its clock from the next case's
+        if (breakFor) endBreak(); else togglePause();
+        return;
+      }
       if (paused || busy) return;
       if (breakFor) { if (action.kind === 'commit') endBreak(); return; }
       switch (action.kind) {
@@ -175,7 +184,7 @@ export const ReadingScreen = ({ studyId, sessionId }: Props) => {
 
   if (error) return <main className="reading"><p role="alert">Cannot open this session: {error}</p></main>;
   if (!loaded || !position) return <main className="reading" aria-busy="true"><p>Opening the session…</p></main>;
-  if (position.done) return <ReadingDone readerCode={loaded.readerCode} period={loaded.session.period} onBack={() => actions.openStudy(studyId)} />;
+  if (position.done) return <ReadingDone readerCode={loaded.readerCode} period={loaded.session.period} onBack={() => actions.handOver(studyId)} />;
 
   const { step } = position;
   const current = position.item;
@@ -188,7 +197,7 @@ export const ReadingScreen = ({ studyId, sessionId }: Props) => {
   return (
     <main className="reading" data-case={current.caseId} data-phase={step.phase} data-assistance={current.assistance}>
       <header className="reading-bar">
-        <span className="reading-progress" aria-label="Progress">Case {position.caseNumber} of {position.caseCount}</span>
+        <span className="reading-progress" role="status" aria-label="Progress">Case {position.caseNumber} of {position.caseCount}</span>
         {current.practice && <span className="badge badge-practice">Practice case</span>}
         {findingCount > 1 && <span>Question {loaded.study.design.findings.indexOf(step.finding) + 1} of {findingCount}</span>}
         <span className="reading-reader">Reader {loaded.readerCode} · period {loaded.session.period}</span>
@@ -199,7 +208,7 @@ export const ReadingScreen = ({ studyId, sessionId }: Props) => {
       <div className="reading-body">
         <div className="reading-image">
           <ImageViewport image={image} view={view} onView={setView} hidden={paused || breakFor !== null || image === null} onDrawn={onDrawn} />
-          <div className="view-controls" aria-label="Image controls">
+          <div className="view-controls" role="group" aria-label="Image controls">
             {caseRecord && caseRecord.images.length > 1 && (
               <span>Image {imageIndex + 1} of {caseRecord.images.length} <kbd>[</kbd> <kbd>]</kbd></span>
             )}
@@ -211,7 +220,7 @@ export const ReadingScreen = ({ studyId, sessionId }: Props) => {
         </div>
         <aside className="reading-side">
           {sequential && step.phase === 'final' && currentRead?.initial && (
-            <p className="locked-initial" aria-label="Your first call, locked">
+            <p className="locked-initial">
               Your first call (locked): {currentRead.initial.call === 1 ? 'present' : 'absent'}
               {currentRead.initial.confidence !== null ? `, confidence ${currentRead.initial.confidence}` : ''}
             </p>
@@ -226,7 +235,8 @@ export const ReadingScreen = ({ studyId, sessionId }: Props) => {
           />
         </aside>
       </div>
-      <ReadingOverlay paused={paused} onBreak={breakFor !== null} onContinue={paused ? togglePause : endBreak} onLeave={actions.goHome} />
+      <ReadingOverlay paused={paused} onBreak={breakFor !== null} onContinue={paused ? togglePause : endBreak} onLeave={() => actions.handOver(studyId)} />
+      {notice?.kind === 'error' && <p className="reading-error" role="alert">{notice.text} <button type="button" onClick={actions.clearNotice}>OK</button></p>}
     </main>
   );
 };

@@ -3,7 +3,7 @@ export type GrayImage = { width: number; height: number; gray: Uint8ClampedArray
 
 /** Decodes PNG/JPEG bytes in the browser and keeps the luminance (images are grayscale). */
 export const decodeGray = async (bytes: Uint8Array, mime: string): Promise<GrayImage> => {
-  const bitmap = await createImageBitmap(new Blob([bytes as BlobPart], { type: mime }));
+  const bitmap = await createImageBitmap(new Blob([new Uint8Array(bytes)], { type: mime }));
   const canvas = new OffscreenCanvas(bitmap.width, bitmap.height);
   const context = canvas.getContext('2d');
   if (!context) throw new Error('no 2D canvas');

@@ -23,7 +23,7 @@ export const ExportPanel = ({ study, caseSet, caution }: Props) => {
     try {
       const text = await make();
       const result = await getHost().saveFile(file, text, mime);
-      setStatus(result.saved ? `Saved ${file}${result.where ? ` to ${result.where}` : ''}.` : result.handedTo ? `${file} handed to the browser's downloads.` : 'Not saved.');
+      setStatus(result.handedTo === 'downloads' ? `${file} handed to the browser's downloads.` : result.saved ? `Saved ${file}${result.where ? ` to ${result.where}` : ''}.` : 'Not saved.');
       signal('saved', { file });
     } catch (e) {
       actions.notify({ kind: 'error', text: `Export failed: ${e instanceof Error ? e.message : String(e)}` });

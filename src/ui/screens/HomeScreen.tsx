@@ -31,7 +31,7 @@ export const HomeScreen = () => {
         <CautionLine />
       </header>
       {home.error && <p role="alert">Could not open the database: {home.error.message}</p>}
-      {!home.value && !home.error && <p aria-busy="true">Preparing the demo case set…</p>}
+      {!home.value && !home.error && <p aria-busy="true">Opening Heed (on first launch the demo case set is generated: a few seconds)…</p>}
       {home.value && (
         <>
           {home.value.unfinished.length > 0 && (

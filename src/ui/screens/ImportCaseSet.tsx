@@ -27,7 +27,7 @@ export const ImportCaseSet = ({ onImported }: { onImported: () => void }) => {
       if (outcome.ok) { setState({ kind: 'imported', summary: outcome.summary }); onImported(); signal('saved', { caseSet: outcome.caseSet.id }); }
       else { setState({ kind: 'refused', label: picked.label, lines: outcome.problems.map((p) => problemLine(picked.label, p)), total: outcome.total }); signal('saved', { refused: true }); }
     } catch (e) {
-      setState({ kind: 'refused', label: '', lines: [e instanceof Error ? e.message : String(e)], total: 1 });
+      setState({ kind: 'refused', label: 'you picked', lines: [e instanceof Error ? e.message : String(e)], total: 1 });
       signal('saved', { refused: true });
     }
   };

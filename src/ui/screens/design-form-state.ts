@@ -40,7 +40,7 @@ export const parseSequences = (text: string, problems: string[]): Sequence[] =>
     const match = /^([A-Za-z0-9_-]{1,16})\s*:\s*(.+)$/.exec(line);
     if (!match) { problems.push(`Sequences, line ${n}: write it as "LABEL: none, sequential" (got "${line}").`); return []; }
     const periods = (match[2] ?? '').split(',').map((w) => w.trim().toLowerCase());
-    const unknown = periods.find((w) => !(w in ASSISTANCE_WORDS));
+    const unknown = periods.find((w) => !Object.hasOwn(ASSISTANCE_WORDS, w));
     if (unknown !== undefined) { problems.push(`Sequences, line ${n}: "${unknown}" is not none, concurrent or sequential.`); return []; }
     return [{ label: match[1] ?? '', periods: periods.map((w) => ASSISTANCE_WORDS[w] ?? 'none') }];
   });

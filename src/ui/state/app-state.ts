@@ -9,7 +9,9 @@ export type Screen =
   | { name: 'new-study' }
   | { name: 'study'; studyId: string }
   | { name: 'results'; studyId: string }
-  | { name: 'read'; sessionId: string; studyId: string };
+  | { name: 'read'; sessionId: string; studyId: string }
+  /** between a reader and the coordinator: nothing of the study is on screen */
+  | { name: 'handover'; studyId: string };
 
 export type Notice = { kind: 'info' | 'error'; text: string };
 
@@ -29,6 +31,7 @@ export const actions = {
   openStudy: (studyId: string, notice: Notice | null = null): void => set({ screen: { name: 'study', studyId }, notice }),
   openResults: (studyId: string): void => set({ screen: { name: 'results', studyId }, notice: null }),
   startReading: (studyId: string, sessionId: string): void => set({ screen: { name: 'read', studyId, sessionId }, notice: null }),
+  handOver: (studyId: string): void => set({ screen: { name: 'handover', studyId }, notice: null }),
   notify: (notice: Notice): void => set({ ...state, notice }),
   clearNotice: (): void => set({ ...state, notice: null }),
 };

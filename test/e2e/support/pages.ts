@@ -14,6 +14,7 @@ export type DesignChoices = {
   caution?: 'never' | 'with every aided read' | 'with a random half of aided reads';
   findings?: string[];
   caseSet?: string;
+  breakEvery?: number;
 };
 
 export const homePage = (page: Page) => ({
@@ -32,6 +33,7 @@ export const homePage = (page: Page) => ({
     if (d.washoutDays !== undefined) await page.getByLabel('Washout days').fill(String(d.washoutDays));
     if (d.plantedFalsePositive !== undefined) await page.getByLabel('False-positive suggestions').fill(String(d.plantedFalsePositive));
     if (d.plantedFalseNegative !== undefined) await page.getByLabel('False-negative suggestions').fill(String(d.plantedFalseNegative));
+    if (d.breakEvery !== undefined) await page.getByLabel('Break every N cases').fill(String(d.breakEvery));
     if (d.caution) await page.getByLabel('Show the notice').selectOption({ label: d.caution });
     await page.getByRole('button', { name: 'Create study' }).click();
     await page.getByRole('heading', { name: d.name, level: 1 }).waitFor();
@@ -101,7 +103,11 @@ export const readingPage = (page: Page) => {
       await waitForSignal(page, 'saved', saved);
       // a new case is answerable once its image is painted (the clock starts then)
       const main = page.locator('main.reading[data-case]');
-      if ((await main.count()) > 0 && (await main.getAttribute('data-case')) !== before) await waitForSignal(page, 'case-painted', painted);
+      // (or, before a planned rest break, once the break screen is up)
+      if ((await main.count()) > 0 && (await main.getAttribute('data-case')) !== before) {
+        await page.waitForFunction((min) => Number(document.body.getAttribute('data-heed-case-painted') ?? 0) > min
+          || document.querySelector('[role=dialog][aria-label=Break]') !== null, painted, { timeout: 60_000 });
+      }
     },
     isDone: async () => (await page.getByRole('heading', { name: /Period \d+ complete/ }).count()) > 0,
   };

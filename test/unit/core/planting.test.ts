@@ -154,3 +154,14 @@ describe('planted errors', () => {
     expect([bySite('East'), bySite('North'), bySite('West')]).toEqual([4, 3, 3]);
   });
 });
+
+describe('planted scores in a set without scores', () => {
+  it('show no score, so a planted suggestion looks like every other one', () => {
+    const manifest = makeManifest();
+    for (const c of manifest.cases) for (const f of c.findings) { f.modelCall = f.modelScore !== null && f.modelScore >= 0.5 ? 1 : 0; f.modelScore = null; }
+    const table = buildSuggestions(manifest, plants({ mode: 'count', value: 3 }, { mode: 'count', value: 2 }));
+    expect(plantedList(table)).toHaveLength(5);
+    expect(table.every((r) => r.score === null)).toBe(true);
+  });
+});
+

@@ -31,6 +31,8 @@ describe('session state machine', () => {
   it('asks initial then final per finding in sequential mode, revealing the suggestion only for the final call', () => {
     const plan = { items: items('sequential', 2), findings: ['a'] };
     expect(planSteps(plan).map((s) => s.phase)).toEqual(['initial', 'final', 'initial', 'final']);
+    const two = { items: items('sequential', 1), findings: ['a', 'b'] };
+    expect(planSteps(two).map((s) => `${s.finding}${s.phase[0]}`)).toEqual(['ai', 'bi', 'af', 'bf']);
     expect(suggestionVisible('sequential', 'initial')).toBe(false);
     expect(suggestionVisible('sequential', 'final')).toBe(true);
     expect(suggestionVisible('concurrent', 'final')).toBe(true);

@@ -109,4 +109,16 @@ describe('applySessionPolicy', () => {
     expect((hooks.check as (wc: unknown, p: string) => boolean)({}, permission)).toBe(false);
     expect((hooks.device as () => boolean)()).toBe(false);
   });
+
+  it('grants full screen to Heed\'s own page only', () => {
+    const hooks = fakeSession();
+    const request = hooks.request as (wc: unknown, p: string, cb: (g: boolean) => void) => void;
+    const granted: boolean[] = [];
+    request({ getURL: () => 'heed://app/index.html' }, 'fullscreen', (g) => granted.push(g));
+    request({ getURL: () => 'https://example.org/' }, 'fullscreen', (g) => granted.push(g));
+    expect(granted).toEqual([true, false]);
+    const check = hooks.check as (wc: unknown, p: string, origin: string) => boolean;
+    expect(check({}, 'fullscreen', 'heed://app')).toBe(true);
+    expect(check({}, 'fullscreen', 'http://127.0.0.1:5178')).toBe(false);
+  });
 });
