@@ -24,12 +24,15 @@ export type Phase = 'initial' | 'final';
 /** A step is one question: one finding of one case, and for sequential reads its phase. */
 export type Step = { itemIndex: number; finding: string; phase: Phase };
 
+/** One committed call: the call, its confidence (null when none is asked) and ms since the case was shown. */
+export type AnswerPart = { call: Bit; confidence: number | null; ms: number };
+
 /** What has been committed for one finding of one case. */
 export type CommittedAnswer = {
   caseId: string;
   finding: string;
-  initial: { call: Bit; confidence: number | null; ms: number } | null;
-  final: { call: Bit; confidence: number | null; ms: number } | null;
+  initial: AnswerPart | null;
+  final: AnswerPart | null;
 };
 
 export type SessionPlan = { items: SessionItem[]; findings: string[] };
@@ -97,7 +100,7 @@ export const applyCommit = (
   position: SessionPosition,
   expected: Step,
   previous: CommittedAnswer | null,
-  answer: { call: Bit; confidence: number | null; ms: number },
+  answer: AnswerPart,
 ): CommittedAnswer => {
   if (position.done) throw new Error('the session is complete; nothing more can be committed');
   const { step, item } = position;

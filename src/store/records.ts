@@ -2,7 +2,7 @@
 import type { CaseSetManifest } from '../core/case-set';
 import type { StudyDesign } from '../core/design';
 import type { Bit } from '../core/read-log';
-import type { SessionItem } from '../core/session';
+import type { AnswerPart, SessionItem } from '../core/session';
 import type { SuggestionRow } from '../core/suggestions';
 import type { WashoutOverride } from '../core/washout';
 
@@ -60,7 +60,7 @@ export type StoredSession = {
   override: WashoutOverride | null;
 };
 
-export type StoredAnswerPart = { call: Bit; confidence: number | null; ms: number };
+export type StoredAnswerPart = AnswerPart;
 
 export type StoredRead = {
   /** `${sessionId}/${caseId}/${finding}` */
