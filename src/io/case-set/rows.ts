@@ -35,8 +35,10 @@ export const readRows = (file: string, columns: Columns, rows: CsvRow[], problem
     }
     const cell = (name: string): string | null => {
       const i = col(name);
-      return i === undefined ? null : (cells[i] as string);
+      return i === undefined ? null : cells[i] ?? null;
     };
+    // required columns were checked in the header, and the row is as wide as the header
+    const required = (name: string): string => cell(name) ?? '';
     const before = problems.count;
     const bit = (name: string, required: boolean): 0 | 1 | null => {
       const raw = cell(name);
@@ -48,13 +50,13 @@ export const readRows = (file: string, columns: Columns, rows: CsvRow[], problem
       return null;
     };
 
-    const caseId = cell('case_id') as string;
+    const caseId = required('case_id');
     if (!CASE_ID.test(caseId)) {
       problems.add(file, line, 'case_id', caseId === ''
         ? 'case_id is empty'
         : `case_id ${show(caseId)} must be 1-64 characters of letters, digits, '.', '_' or '-'`);
     }
-    const finding = (cell('finding') as string).trim();
+    const finding = required('finding').trim();
     if (finding === '') problems.add(file, line, 'finding', 'finding is empty');
     else if (finding.length > MAX_FINDING || [...finding].some((ch) => ch.charCodeAt(0) < 0x20)) {
       problems.add(file, line, 'finding', `finding ${show(finding)} must be at most ${MAX_FINDING} characters with no control characters`);
@@ -70,7 +72,7 @@ export const readRows = (file: string, columns: Columns, rows: CsvRow[], problem
       if (!(value >= 0 && value <= 1)) problems.add(file, line, 'model_score', `model_score must be a number from 0 to 1, found ${show(text)}`);
       else modelScore = value;
     }
-    const imagesText = cell('image') as string;
+    const imagesText = required('image');
     const images: string[] = [];
     for (const part of imagesText.split(';')) {
       const checked = checkImagePath(part);
@@ -78,8 +80,8 @@ export const readRows = (file: string, columns: Columns, rows: CsvRow[], problem
       else problems.add(file, line, 'image', checked.message);
     }
     const attributes: Record<string, string> = {};
-    for (const { name, index } of columns.attributes) attributes[name] = (cells[index] as string).trim();
-    if (problems.count > before) continue;
+    for (const { name, index } of columns.attributes) attributes[name] = (cells[index] ?? '').trim();
+    if (problems.count > before || truth === null) continue;
 
     const pairKey = `${caseId}\u0000${finding}`;
     const firstPair = pairs.get(pairKey);
@@ -88,7 +90,7 @@ export const readRows = (file: string, columns: Columns, rows: CsvRow[], problem
       continue;
     }
     pairs.set(pairKey, line);
-    const entry: CaseFinding = { finding, truth: truth as 0 | 1, modelScore, modelCall };
+    const entry: CaseFinding = { finding, truth, modelScore, modelCall };
     const seen = byId.get(caseId);
     if (seen) {
       if (images.join(';') !== seen.record.images.join(';')) {
