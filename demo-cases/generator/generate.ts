@@ -11,51 +11,15 @@ import type { CaseFinding, CaseImage, CaseRecord, CaseSetManifest } from '../../
 import { casesCsv } from '../../src/io/case-set/write-cases-csv';
 import { detect } from './detector';
 import { synthesiseImage } from './image';
-import type { Target } from './image';
+import { drawSpecks, drawTarget, planCases } from './plan';
 import { grayPng } from './png';
 import { makeRandom } from './random';
-import type { Random } from './random';
-import {
-  CONTRAST, DEFAULT_CASES, DEFAULT_SEED, DEMO_FINDING, DEMO_SET_NAME, IMAGE_SIZE,
-  PRACTICE_CASES, PREVALENCE, SCANNERS, TARGET_SIGMA,
-} from './scenario';
-import type { ContrastBand, Scanner } from './scenario';
+import { DEFAULT_CASES, DEFAULT_SEED, DEMO_FINDING, DEMO_SET_NAME, IMAGE_SIZE } from './scenario';
 
 export type DemoOptions = { seed?: number; cases?: number };
 export type DemoCaseSet = { manifest: CaseSetManifest; images: CaseImage[]; csv: string };
 
-type Plan = { caseId: string; practice: boolean; scanner: Scanner; band: ContrastBand | null };
-
-const MARGIN = 40;
 const MODEL_THRESHOLD = 0.5;
-
-/** Balanced plan: positives and contrast bands spread evenly over the scanners, then shuffled. */
-const planCases = (count: number, random: Random): Plan[] => {
-  const positives = Math.round(count * PREVALENCE);
-  const bandOf = (i: number): ContrastBand | null =>
-    i >= positives ? null : Math.floor(i / SCANNERS.length) % 2 === 0 ? 'low' : 'high';
-  const main = Array.from({ length: count }, (_, i) => ({
-    scanner: SCANNERS[i % SCANNERS.length] as Scanner,
-    band: bandOf(i),
-  }));
-  const digits = Math.max(3, String(count).length);
-  const shuffled = random.shuffle(main).map((p, i) => ({
-    ...p, practice: false, caseId: `VV-${String(i + 1).padStart(digits, '0')}`,
-  }));
-  // Practice: clear examples first, one faint one, both scanners.
-  const practiceBands: (ContrastBand | null)[] = ['high', null, 'high', null, 'low'];
-  const practice = practiceBands.slice(0, PRACTICE_CASES).map((band, i) => ({
-    caseId: `VV-P${i + 1}`, practice: true, scanner: SCANNERS[i % SCANNERS.length] as Scanner, band,
-  }));
-  return [...practice, ...shuffled];
-};
-
-const drawTarget = (band: ContrastBand, random: Random): Target => ({
-  x: random.between(MARGIN, IMAGE_SIZE - MARGIN),
-  y: random.between(MARGIN, IMAGE_SIZE - MARGIN),
-  sigma: random.between(...TARGET_SIGMA),
-  contrast: random.between(...CONTRAST[band]),
-});
 
 export const generateDemoCaseSet = (options: DemoOptions = {}): DemoCaseSet => {
   const seed = options.seed ?? DEFAULT_SEED;
@@ -68,7 +32,8 @@ export const generateDemoCaseSet = (options: DemoOptions = {}): DemoCaseSet => {
   const images: CaseImage[] = [];
   for (const plan of planCases(count, random)) {
     const target = plan.band === null ? null : drawTarget(plan.band, random);
-    const pixels = synthesiseImage({ size: IMAGE_SIZE, noise: plan.scanner.noise, target }, random);
+    const specks = drawSpecks(plan.scanner, random);
+    const pixels = synthesiseImage({ size: IMAGE_SIZE, noise: plan.scanner.noise, target, specks }, random);
     // Three decimals in the CSV; the manifest keeps the same rounded value so both agree.
     const score = Number(detect(pixels, IMAGE_SIZE).score.toFixed(3));
     const path = `images/${plan.caseId}.png`;

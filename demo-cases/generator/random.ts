@@ -10,6 +10,8 @@ export type Random = {
   between: (lo: number, hi: number) => number;
   /** a copy of `items` in a seeded random order (Fisher-Yates) */
   shuffle: <T>(items: readonly T[]) => T[];
+  /** fills `out` with uniform bytes, four from each 32-bit draw (the bulk source of image grain) */
+  fillBytes: (out: Uint8Array) => void;
 };
 
 export const makeRandom = (seed: number): Random => {
@@ -38,5 +40,21 @@ export const makeRandom = (seed: number): Random => {
     }
     return out;
   };
-  return { uniform, normal, between, shuffle };
+  // Bytes taken from each draw low to high by shifts, so the stream is the same on any platform.
+  const fillBytes = (out: Uint8Array): void => {
+    const whole = out.length - (out.length % 4);
+    let i = 0;
+    for (; i < whole; i += 4) {
+      const word = rng.next();
+      out[i] = word;
+      out[i + 1] = word >>> 8;
+      out[i + 2] = word >>> 16;
+      out[i + 3] = word >>> 24;
+    }
+    if (i < out.length) {
+      const word = rng.next();
+      for (let k = 0; i < out.length; i += 1, k += 8) out[i] = word >>> k;
+    }
+  };
+  return { uniform, normal, between, shuffle, fillBytes };
 };

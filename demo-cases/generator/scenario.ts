@@ -9,24 +9,33 @@ export type Scanner = {
   name: string;
   /** standard deviation of the fine-grain noise, in intensity units (0..1) */
   noise: number;
+  /** mean number of bright specks per image (a fictional sensor defect; Poisson) */
+  specks: number;
 };
 
-/** Halden: a quiet scanner. Korvik: nearly twice the noise, so faint targets drown more often. */
+/**
+ * Halden: a quiet scanner. Korvik: more grain, so faint targets drown more often, and small
+ * bright specks, which a reader can tell from a soft round target but the model often cannot.
+ */
 export const SCANNERS: readonly Scanner[] = [
-  { name: 'Halden', noise: 0.02 },
-  { name: 'Korvik', noise: 0.032 },
+  { name: 'Halden', noise: 0.02, specks: 0 },
+  { name: 'Korvik', noise: 0.032, specks: 0.8 },
 ];
+
+/** A speck: Gaussian sigma (px) and peak brightness (intensity units), drawn uniformly. */
+export const SPECK_SIGMA: readonly [number, number] = [1.5, 2.5];
+export const SPECK_BRIGHTNESS: readonly [number, number] = [0.2, 0.4];
 
 export type ContrastBand = 'low' | 'high';
 
 /** Peak target contrast (intensity units) drawn uniformly within the band. */
 export const CONTRAST: Record<ContrastBand, readonly [number, number]> = {
-  low: [0.04, 0.065],
-  high: [0.065, 0.11],
+  low: [0.05, 0.085],
+  high: [0.085, 0.15],
 };
 
 /** Target size: Gaussian blob sigma in pixels, drawn uniformly. */
-export const TARGET_SIGMA: readonly [number, number] = [5, 7.5];
+export const TARGET_SIGMA: readonly [number, number] = [6, 9];
 
 export const IMAGE_SIZE = 320;
 /** Share of main cases with the target present. */
