@@ -31,24 +31,31 @@ export type CrossoverSection = PairedAccuracy & {
  * Example: crossoverPairs(reads).length.
  */
 export const crossoverPairs = (reads: readonly ReadRow[]): CrossoverPair[] => {
-  const byCase = new Map<string, { u: ReadRow[]; a: ReadRow[] }>();
+  // Per case, in order of first appearance: the first unaided read, and the aided reads (most
+  // cases have one, kept without an array).
+  const byCase = new Map<string, CaseReads>();
   for (const r of reads) {
     let e = byCase.get(r.case_id);
     if (e === undefined) {
-      e = { u: [], a: [] };
+      e = { unaided: null, aided: null, moreAided: null };
       byCase.set(r.case_id, e);
     }
-    (isAided(r) ? e.a : e.u).push(r);
+    if (!isAided(r)) {
+      if (e.unaided === null) e.unaided = r;
+    } else if (e.aided === null) e.aided = r;
+    else if (e.moreAided === null) e.moreAided = [r];
+    else e.moreAided.push(r);
   }
   const pairs: CrossoverPair[] = [];
-  for (const { u, a } of byCase.values()) {
-    const unaided = u[0];
-    if (unaided === undefined) continue;
-    const aided = a.find((x) => x.period !== unaided.period);
-    if (aided !== undefined) pairs.push({ unaided, aided });
+  for (const { unaided, aided, moreAided } of byCase.values()) {
+    if (unaided === null || aided === null) continue;
+    const other = aided.period !== unaided.period ? aided : moreAided?.find((x) => x.period !== unaided.period);
+    if (other !== undefined) pairs.push({ unaided, aided: other });
   }
   return pairs;
 };
+
+type CaseReads = { unaided: ReadRow | null; aided: ReadRow | null; moreAided: ReadRow[] | null };
 
 /**
  * Paired accuracy with McNemar's exact test (SPEC Contract 2) over crossover pairs.

@@ -11,24 +11,49 @@ export type ReadersAgreement = { kappa: number | null; readers: number; cases: n
  * Example: readersAgreement(unaidedReads).kappa.
  */
 export const readersAgreement = (reads: readonly ReadRow[]): ReadersAgreement => {
-  const readers = new Set<string>();
-  const byCase = new Map<string, Map<string, 0 | 1>>();
-  for (const r of reads) {
-    readers.add(r.reader_id);
-    let calls = byCase.get(r.case_id);
-    if (calls === undefined) {
-      calls = new Map();
-      byCase.set(r.case_id, calls);
+  // readers and cases numbered in order of first appearance, then one flat table of who read what
+  const readerIdx = new Map<string, number>();
+  const caseIdx = new Map<string, number>();
+  const n = reads.length;
+  const readerOf = new Int32Array(n);
+  const caseOf = new Int32Array(n);
+  for (let k = 0; k < n; k++) {
+    const r = reads[k] as ReadRow;
+    let i = readerIdx.get(r.reader_id);
+    if (i === undefined) {
+      i = readerIdx.size;
+      readerIdx.set(r.reader_id, i);
     }
-    if (!calls.has(r.reader_id)) calls.set(r.reader_id, r.final_call);
+    let c = caseIdx.get(r.case_id);
+    if (c === undefined) {
+      c = caseIdx.size;
+      caseIdx.set(r.case_id, c);
+    }
+    readerOf[k] = i;
+    caseOf[k] = c;
+  }
+  const R = readerIdx.size;
+  const C = caseIdx.size;
+  // a flat table while it stays small; a sparse set for odd logs of very many readers and cases
+  const flat = R * C <= 1 << 24 ? new Uint8Array(R * C) : null;
+  const sparse = flat === null ? new Set<number>() : null;
+  const raters = new Int32Array(C);
+  const ones = new Int32Array(C);
+  for (let k = 0; k < n; k++) {
+    const c = caseOf[k] as number;
+    const cell = c * R + (readerOf[k] as number);
+    if (flat !== null) {
+      if (flat[cell] === 1) continue;
+      flat[cell] = 1;
+    } else if (sparse !== null) {
+      if (sparse.has(cell)) continue;
+      sparse.add(cell);
+    }
+    raters[c] = (raters[c] as number) + 1;
+    ones[c] = (ones[c] as number) + (reads[k] as ReadRow).final_call;
   }
   const counts: number[][] = [];
-  for (const calls of byCase.values()) {
-    if (calls.size !== readers.size) continue;
-    let ones = 0;
-    for (const c of calls.values()) ones += c;
-    counts.push([calls.size - ones, ones]);
-  }
-  if (readers.size < 2 || counts.length === 0) return { kappa: null, readers: readers.size, cases: counts.length };
-  return { kappa: fleissKappa(counts), readers: readers.size, cases: counts.length };
+  for (let c = 0; c < C; c++) if (raters[c] === R) counts.push([R - (ones[c] as number), ones[c] as number]);
+  if (R < 2 || counts.length === 0) return { kappa: null, readers: R, cases: counts.length };
+  return { kappa: fleissKappa(counts), readers: R, cases: counts.length };
 };

@@ -4,14 +4,26 @@ import { READ_LOG_COLUMNS, type ReadLogColumn, type ReadRow } from '../../core/r
 import * as f from './fields';
 import { ReadLogError } from './read-log-error';
 
-/** Where each required column sits in the header, and the case_<name> columns. */
-export type RowLayout = { at: Readonly<Record<string, number>>; attrs: { name: string; i: number }[] };
+/**
+ * Where each required column sits in the header, the case_<name> columns, and `same`, which
+ * hands back one shared copy of each distinct id text: a log repeats a few reader, case and
+ * finding ids many thousand times, and one copy each keeps the heap small and makes the
+ * engine's lookups by id cheap (a shared string carries its hash).
+ */
+export type RowLayout = { at: Readonly<Record<string, number>>; attrs: { name: string; i: number }[]; same: (text: string) => string };
 
 /** The layout of a header whose required columns are known to be present. */
 export const rowLayout = (header: readonly string[]): RowLayout => {
   const at = Object.fromEntries(READ_LOG_COLUMNS.map((col) => [col, header.indexOf(col)]));
   const attrs = header.flatMap((name, i) => (name.startsWith('case_') && name !== 'case_id' ? [{ name: name.slice(5), i }] : []));
-  return { at, attrs };
+  const shared = new Map<string, string>();
+  const same = (text: string): string => {
+    const known = shared.get(text);
+    if (known !== undefined) return known;
+    shared.set(text, text);
+    return text;
+  };
+  return { at, attrs, same };
 };
 
 /**
@@ -19,7 +31,7 @@ export const rowLayout = (header: readonly string[]): RowLayout => {
  * Throws ReadLogError naming the line and the first bad column.
  */
 export const parseRow = (cells: readonly string[], line: number, layout: RowLayout): ReadRow => {
-  const { at } = layout;
+  const { at, same } = layout;
   const cell = (column: ReadLogColumn): string => cells[at[column] ?? -1] ?? '';
   const assistance = f.assistance(cell('assistance'), line, 'assistance');
   const aiCall = f.optionalBit(cell('ai_call'), line, 'ai_call');
@@ -28,18 +40,18 @@ export const parseRow = (cells: readonly string[], line: number, layout: RowLayo
   const initialCall = f.optionalBit(cell('initial_call'), line, 'initial_call');
   if (assistance === 'sequential' && initialCall === null) throw new ReadLogError(line, 'initial_call', 'must be 0 or 1 when assistance is sequential');
   const case_attributes: Record<string, string> = {};
-  for (const a of layout.attrs) case_attributes[a.name] = cells[a.i] ?? '';
+  for (const a of layout.attrs) case_attributes[a.name] = same(cells[a.i] ?? '');
   // the property order below is the order cells are checked in (and the ReadRow field order)
   return {
-    study_id: f.text(cell('study_id'), line, 'study_id'),
-    reader_id: f.text(cell('reader_id'), line, 'reader_id'),
-    reader_role: cell('reader_role'),
+    study_id: same(f.text(cell('study_id'), line, 'study_id')),
+    reader_id: same(f.text(cell('reader_id'), line, 'reader_id')),
+    reader_role: same(cell('reader_role')),
     reader_years: f.optionalNumber(cell('reader_years'), line, 'reader_years', 0, 100, 'a number of years in 0..100'),
-    sequence: f.optionalText(cell('sequence')),
+    sequence: f.optionalText(same(cell('sequence'))),
     period: f.positiveInteger(cell('period'), line, 'period'),
     assistance,
-    case_id: f.text(cell('case_id'), line, 'case_id'),
-    finding: f.text(cell('finding'), line, 'finding'),
+    case_id: same(f.text(cell('case_id'), line, 'case_id')),
+    finding: same(f.text(cell('finding'), line, 'finding')),
     practice: f.bit(cell('practice'), line, 'practice'),
     order: f.positiveInteger(cell('order'), line, 'order'),
     truth: f.bit(cell('truth'), line, 'truth'),
