@@ -1,4 +1,5 @@
 import type { ReadRow } from '../core/read-log';
+import { lowerBound } from './midrank';
 import { seededInts } from './prng';
 import { quantileSorted } from './quantile';
 import { finalScore, isAided } from './read-scores';
@@ -33,25 +34,30 @@ type Cond = { n: number; caseIdx: Int32Array; truth: Uint8Array; correct: Uint8A
 const toCond = (reads: ReadRow[], caseIndex: Map<string, number>): Cond | null => {
   const n = reads.length;
   if (n === 0) return null;
-  const scores = reads.map(finalScore);
-  const distinct = [...new Set(scores)].sort((a, b) => a - b);
-  const levelOf = new Map(distinct.map((v, i) => [v, i]));
+  const scores = new Float64Array(n);
+  for (let i = 0; i < n; i++) scores[i] = finalScore(reads[i] as ReadRow);
+  // score levels: the distinct scores ascending; a read's level is its score's place among them
+  const sorted = scores.slice().sort();
+  let levels = 0;
+  for (let i = 0; i < n; i++) if (i === 0 || sorted[i] !== sorted[i - 1]) sorted[levels++] = sorted[i] as number;
+  const distinct = sorted.subarray(0, levels);
   const c: Cond = {
-    n, levels: distinct.length,
+    n, levels,
     caseIdx: new Int32Array(n), truth: new Uint8Array(n), correct: new Uint8Array(n), level: new Int32Array(n),
     follow: new Uint8Array(n), aiWrong: new Uint8Array(n), hasAi: new Uint8Array(n),
   };
-  reads.forEach((r, i) => {
+  for (let i = 0; i < n; i++) {
+    const r = reads[i] as ReadRow;
     c.caseIdx[i] = caseIndex.get(r.case_id) ?? 0;
     c.truth[i] = r.truth;
     c.correct[i] = r.final_call === r.truth ? 1 : 0;
-    c.level[i] = levelOf.get(scores[i] as number) ?? 0;
+    c.level[i] = lowerBound(distinct, scores[i] as number);
     if (r.ai_call !== null) {
       c.hasAi[i] = 1;
       c.follow[i] = r.final_call === r.ai_call ? 1 : 0;
       c.aiWrong[i] = r.ai_call !== r.truth ? 1 : 0;
     }
-  });
+  }
   return c;
 };
 

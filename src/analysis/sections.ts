@@ -25,21 +25,30 @@ export type Sections = {
 export const sections = (reads: readonly ReadRow[], options: { pairedAuc?: boolean } = {}): Sections => {
   const unaidedReads: ReadRow[] = [];
   const aidedReads: ReadRow[] = [];
-  const byReader = new Map<string, ReadRow[]>();
-  for (const r of reads) {
-    (isAided(r) ? aidedReads : unaidedReads).push(r);
-    const list = byReader.get(r.reader_id);
-    if (list === undefined) byReader.set(r.reader_id, [r]);
-    else list.push(r);
-  }
-  const pairs = [...byReader.values()].flatMap((rs) => crossoverPairs(rs));
+  for (const r of reads) (isAided(r) ? aidedReads : unaidedReads).push(r);
+  const perReader = byReader(reads);
+  const pairs = perReader.length === 1 ? crossoverPairs(perReader[0] as readonly ReadRow[]) : perReader.flatMap((rs) => crossoverPairs(rs));
   const unaided = conditionSection(unaidedReads);
   const aided = aidedSection(aidedReads);
   return {
     unaided,
     aided,
     sequential: sequentialSection(aidedReads),
-    crossover: crossoverFromPairs(pairs, byReader.size <= 1 && (options.pairedAuc ?? true)),
+    crossover: crossoverFromPairs(pairs, perReader.length <= 1 && (options.pairedAuc ?? true)),
     time_ratio: timeRatio(aided?.median_ms ?? null, unaided?.median_ms ?? null),
   };
+};
+
+// Reads grouped by reader, readers in order of first appearance. Most calls get one reader's
+// reads (per reader, per subgroup), which need no grouping at all.
+const byReader = (reads: readonly ReadRow[]): (readonly ReadRow[])[] => {
+  const first = reads[0]?.reader_id;
+  if (reads.every((r) => r.reader_id === first)) return reads.length === 0 ? [] : [reads];
+  const groups = new Map<string, ReadRow[]>();
+  for (const r of reads) {
+    const list = groups.get(r.reader_id);
+    if (list === undefined) groups.set(r.reader_id, [r]);
+    else list.push(r);
+  }
+  return [...groups.values()];
 };
