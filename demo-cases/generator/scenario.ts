@@ -14,12 +14,13 @@ export type Scanner = {
 };
 
 /**
- * Halden: a quiet scanner. Korvik: more grain, so faint targets drown more often, and small
- * bright specks, which a reader can tell from a soft round target but the model often cannot.
+ * Halden: a quiet scanner. Korvik: about 1.45 times the grain, so faint targets drown more
+ * often, and small bright specks, which a reader can tell from a soft round target but the
+ * model often cannot. Set with demo-cases/tools/calibrate.ts and sample-sheet.ts.
  */
 export const SCANNERS: readonly Scanner[] = [
   { name: 'Halden', noise: 0.02, specks: 0 },
-  { name: 'Korvik', noise: 0.032, specks: 0.8 },
+  { name: 'Korvik', noise: 0.029, specks: 0.9 },
 ];
 
 /** A speck: Gaussian sigma (px) and peak brightness (intensity units), drawn uniformly. */
@@ -28,10 +29,14 @@ export const SPECK_BRIGHTNESS: readonly [number, number] = [0.2, 0.4];
 
 export type ContrastBand = 'low' | 'high';
 
-/** Peak target contrast (intensity units) drawn uniformly within the band. */
+/**
+ * Peak target contrast (intensity units) drawn uniformly within the band. Looked at by eye:
+ * high is plain on Halden and findable on Korvik; low is findable with effort on Halden and
+ * mostly lost in Korvik's grain.
+ */
 export const CONTRAST: Record<ContrastBand, readonly [number, number]> = {
   low: [0.05, 0.085],
-  high: [0.085, 0.15],
+  high: [0.09, 0.16],
 };
 
 /** Target size: Gaussian blob sigma in pixels, drawn uniformly. */

@@ -1,9 +1,10 @@
 // The demo generator: deterministic, balanced, with a detector whose errors are real and more
-// frequent on the noisy scanner; and its output passes the importer's validation unchanged.
+// frequent on the noisy scanner (misses of faint targets, false alarms on its specks); and its
+// output passes the importer's validation unchanged.
 import { decode } from 'fast-png';
 import { generateDemoCaseSet } from '../../../demo-cases/generator/generate';
 import type { DemoCaseSet } from '../../../demo-cases/generator/generate';
-import { detect } from '../../../demo-cases/generator/detector';
+import { detect, DETECTOR_Z0 } from '../../../demo-cases/generator/detector';
 import { synthesiseImage } from '../../../demo-cases/generator/image';
 import { makeRandom } from '../../../demo-cases/generator/random';
 import { IMAGE_SIZE } from '../../../demo-cases/generator/scenario';
@@ -59,6 +60,24 @@ describe('generateDemoCaseSet (default: 120 cases)', () => {
     expect(main.some((f) => f?.truth === 1 && f.modelCall === 0)).toBe(true);
   });
 
+  it('is right on 85-92% of Halden cases and 60-72% of Korvik cases with the default seed', () => {
+    // Design targets set for the demo (issue 2), not from a source: a model good on the quiet
+    // scanner and poor on the noisy one. demo-cases/tools/calibrate.ts shows them over seeds.
+    expect(1 - errorRate(set, 'Halden')).toBeGreaterThanOrEqual(0.85);
+    expect(1 - errorRate(set, 'Halden')).toBeLessThanOrEqual(0.92);
+    expect(1 - errorRate(set, 'Korvik')).toBeGreaterThanOrEqual(0.6);
+    expect(1 - errorRate(set, 'Korvik')).toBeLessThanOrEqual(0.72);
+  });
+
+  it('scores high-contrast targets above low-contrast ones, and those above no target (graded)', () => {
+    const meanScore = (band: string): number => {
+      const of = set.manifest.cases.filter((c) => !c.practice && c.attributes.contrast_band === band);
+      return of.reduce((sum, c) => sum + (c.findings[0]?.modelScore ?? 0), 0) / of.length;
+    };
+    expect(meanScore('high')).toBeGreaterThan(meanScore('low'));
+    expect(meanScore('low')).toBeGreaterThan(meanScore('none'));
+  });
+
   it('makes model_call from the score at 0.5', () => {
     for (const c of set.manifest.cases) {
       const f = c.findings[0];
@@ -112,6 +131,20 @@ describe('detect (matched filter)', () => {
     const blank = detect(synthesiseImage({ size: IMAGE_SIZE, noise: 0.02, target: null }, random), IMAGE_SIZE);
     expect(blank.score).toBeLessThan(withTarget.score);
     expect(blank.z).toBeLessThan(withTarget.z - 3);
+  });
+
+  it('fires on a small bright speck where there is no target (the false alarm Korvik invites)', () => {
+    const speck = { x: 90, y: 230, sigma: 2, contrast: 0.35 };
+    const plain = detect(synthesiseImage({ size: IMAGE_SIZE, noise: 0.029, target: null }, makeRandom(21)), IMAGE_SIZE);
+    const specked = detect(synthesiseImage({ size: IMAGE_SIZE, noise: 0.029, target: null, specks: [speck] }, makeRandom(21)), IMAGE_SIZE);
+    // A speck is far smaller than the 13 px box, so the response is flat wherever the box holds
+    // it: the peak lands within the box's half-width (6 px each way), not on the speck itself.
+    expect(Math.abs(specked.x - speck.x)).toBeLessThanOrEqual(7);
+    expect(Math.abs(specked.y - speck.y)).toBeLessThanOrEqual(7);
+    expect(specked.z).toBeGreaterThan(plain.z);
+    // Over the call threshold: the model says "present" on an image with no target.
+    expect(specked.z).toBeGreaterThan(DETECTOR_Z0);
+    expect(specked.score).toBeGreaterThan(0.5);
   });
 
   it('gives a lower z for the same target under stronger noise', () => {
