@@ -38,7 +38,7 @@ export const readRows = (file: string, columns: Columns, rows: CsvRow[], problem
       return i === undefined ? null : cells[i] ?? null;
     };
     // required columns were checked in the header, and the row is as wide as the header
-    const text = (name: string): string => cell(name) ?? '';
+    const textOf = (name: string): string => cell(name) ?? '';
     const before = problems.count;
     const bit = (name: string, required: boolean): 0 | 1 | null => {
       const raw = cell(name);
@@ -50,13 +50,13 @@ export const readRows = (file: string, columns: Columns, rows: CsvRow[], problem
       return null;
     };
 
-    const caseId = text('case_id');
+    const caseId = textOf('case_id');
     if (!CASE_ID.test(caseId)) {
       problems.add(file, line, 'case_id', caseId === ''
         ? 'case_id is empty'
         : `case_id ${show(caseId)} must be 1-64 characters of letters, digits, '.', '_' or '-'`);
     }
-    const finding = text('finding').trim();
+    const finding = textOf('finding').trim();
     if (finding === '') problems.add(file, line, 'finding', 'finding is empty');
     else if (finding.length > MAX_FINDING || [...finding].some((ch) => ch.charCodeAt(0) < 0x20)) {
       problems.add(file, line, 'finding', `finding ${show(finding)} must be at most ${MAX_FINDING} characters with no control characters`);
@@ -72,7 +72,7 @@ export const readRows = (file: string, columns: Columns, rows: CsvRow[], problem
       if (!(value >= 0 && value <= 1)) problems.add(file, line, 'model_score', `model_score must be a number from 0 to 1, found ${show(text)}`);
       else modelScore = value;
     }
-    const imagesText = text('image');
+    const imagesText = textOf('image');
     const images: string[] = [];
     for (const part of imagesText.split(';')) {
       const checked = checkImagePath(part);
