@@ -9,7 +9,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import Papa from 'papaparse';
 import { inject } from 'vitest';
-import { newProfileDir, removeProfileDir, startChromium, type RunningChromium } from './support/chromium';
+import { useChromiumProfile, type RunningChromium } from './support/chromium';
 import { writeCaseFolder } from './support/case-folder';
 import { homePage, readingPage, studyPage } from './support/pages';
 
@@ -36,14 +36,11 @@ const readWholePeriod = async (chrome: RunningChromium) => {
 
 describe('design: own case set, planted errors, caution notice, crossover with washout', () => {
   const url = inject('appUrl');
-  let profile = '';
-  let chrome: RunningChromium | null = null;
-  beforeAll(() => { profile = newProfileDir(); });
-  afterAll(async () => { await chrome?.stop(); removeProfileDir(profile); });
+  const browser = useChromiumProfile(url);
 
   it('imports, designs, reads two periods with an override, and logs exactly what each reader saw', async () => {
     const folder = writeCaseFolder(CASES, PRACTICE);
-    chrome = await startChromium(profile, url);
+    const chrome = await browser.launch();
     const { page } = chrome;
     await homePage(page).waitUntilReady();
 

@@ -9,19 +9,16 @@ import { join } from 'node:path';
 import { zipSync } from 'fflate';
 import Papa from 'papaparse';
 import { inject } from 'vitest';
-import { newProfileDir, removeProfileDir, startChromium, type RunningChromium } from './support/chromium';
+import { useChromiumProfile } from './support/chromium';
 import { writeCaseFolder } from './support/case-folder';
 import { homePage, readingPage, studyPage } from './support/pages';
 
 describe('refusals and interruptions', () => {
   const url = inject('appUrl');
-  let profile = '';
-  let chrome: RunningChromium | null = null;
-  beforeAll(() => { profile = newProfileDir(); });
-  afterAll(async () => { await chrome?.stop(); removeProfileDir(profile); });
+  const browser = useChromiumProfile(url);
 
   it('refuses a bad folder and a climbing zip with the place named, storing nothing', async () => {
-    chrome = await startChromium(profile, url);
+    const chrome = await browser.launch();
     const { page } = chrome;
     await homePage(page).waitUntilReady();
     const setRows = () => page.getByRole('region', { name: 'Case sets' }).getByRole('row').count();
@@ -49,7 +46,7 @@ describe('refusals and interruptions', () => {
   });
 
   it('hides the image and stops the clock while paused', async () => {
-    const page = chrome!.page;
+    const page = browser.current().page;
     await homePage(page).newStudy({ name: 'Pause check', aidedMode: 'concurrent' });
     await studyPage(page).enrol('P01');
     await studyPage(page).enrolled('P01');
@@ -77,7 +74,7 @@ describe('refusals and interruptions', () => {
   });
 
   it('offers a rest break before the planned case, with the image hidden and the clock waiting', async () => {
-    const page = chrome!.page;
+    const page = browser.current().page;
     await page.getByRole('button', { name: '← Heed' }).click();
     await homePage(page).waitUntilReady();
     await homePage(page).newStudy({ name: 'Break check', aidedMode: 'concurrent', breakEvery: 2 });

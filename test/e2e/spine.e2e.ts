@@ -8,7 +8,7 @@ import { join } from 'node:path';
 import Papa from 'papaparse';
 import { inject } from 'vitest';
 import { READ_LOG_COLUMNS } from '../../src/core/read-log';
-import { newProfileDir, removeProfileDir, startChromium, type RunningChromium } from './support/chromium';
+import { useChromiumProfile, type RunningChromium } from './support/chromium';
 import { homePage, readingPage, studyPage } from './support/pages';
 
 const SHOTS = join(import.meta.dirname, '..', '..', 'test-results', 'screens');
@@ -31,14 +31,10 @@ const readSteps = async (chrome: RunningChromium, reader: string, pressed: Map<s
 
 describe('spine: a crossover study on the demo set, durably, exported per Contract 1', () => {
   const url = inject('appUrl');
-  let profile = '';
-  let chrome: RunningChromium | null = null;
-
-  beforeAll(() => { profile = newProfileDir(); });
-  afterAll(async () => { await chrome?.stop(); removeProfileDir(profile); });
+  const browser = useChromiumProfile(url);
 
   it('runs from a fresh profile to a parsed reads.csv', async () => {
-    chrome = await startChromium(profile, url);
+    let chrome = await browser.launch();
     let page = chrome.page;
     await homePage(page).waitUntilReady();
     await page.getByText('Vesper Valley Imaging (demo)').waitFor();
@@ -100,7 +96,7 @@ describe('spine: a crossover study on the demo set, durably, exported per Contra
     expect(beforeKill.progress).toBe('Case 8 of 125');
     await chrome.kill(); // SIGKILL: a crash, not a close
 
-    chrome = await startChromium(profile, url);
+    chrome = await browser.launch();
     page = chrome.page;
     await homePage(page).waitUntilReady();
     await homePage(page).resume(/Resume C01, period 1/);

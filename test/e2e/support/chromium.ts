@@ -66,3 +66,21 @@ export const waitForSignal = async (page: Page, name: string, after = 0): Promis
 
 export const signalCount = (page: Page, name: string): Promise<number> =>
   page.evaluate((attr) => Number(document.body.getAttribute(attr) ?? 0), `data-heed-${name}`);
+
+/**
+ * One fresh profile for a test file, made before its tests and removed (with Chromium stopped)
+ * after them. `launch()` starts Chromium on that profile, again after a kill if asked.
+ */
+export const useChromiumProfile = (url: string) => {
+  let profile = '';
+  let running: RunningChromium | null = null;
+  beforeAll(() => { profile = newProfileDir(); });
+  afterAll(async () => { await running?.stop(); removeProfileDir(profile); });
+  return {
+    launch: async (): Promise<RunningChromium> => { running = await startChromium(profile, url); return running; },
+    current: (): RunningChromium => {
+      if (!running) throw new Error('Chromium has not been launched in this test file');
+      return running;
+    },
+  };
+};
