@@ -5,9 +5,16 @@ import { wilson, type Proportion } from './wilson';
 export type Reliance = {
   /** P(d = a) */
   agreement: Proportion;
-  /** following a wrong suggestion: k = #(d = a, a ≠ y), n = #(a ≠ y) */
+  /**
+   * over-reliance, unconditional: following a wrong suggestion, k = #(d = a, a ≠ y), n = #(a ≠ y),
+   * whatever the reader thought first. The form conditional on a first right call is
+   * `overreliance_given_first_right` of the sequential section (docs/methods.md).
+   */
   overreliance: Proportion;
-  /** rejecting a right suggestion: k = #(d ≠ a, a = y), n = #(a = y) */
+  /**
+   * under-reliance, unconditional: rejecting a right suggestion, k = #(d ≠ a, a = y), n = #(a = y).
+   * The form conditional on a first wrong call is `underreliance_given_first_wrong` (sequential).
+   */
   underreliance: Proportion;
   /** P(d = y | a = y) and P(d = y | a ≠ y) */
   accuracy_ai_right: Proportion;
@@ -21,8 +28,11 @@ export type Reliance = {
 };
 
 /**
- * Reliance on the suggestion over aided reads (SPEC Contract 2), with y = truth, d = final call,
- * a = ai_call; Wilson intervals throughout. Reads without a suggestion call are ignored.
+ * Reliance on the suggestion over aided reads (docs/methods.md, "Reliance"), with y = truth,
+ * d = final call, a = ai_call; Wilson intervals throughout. Reads without a suggestion call are
+ * ignored. These are the unconditional forms: they need no initial call, so they work for
+ * concurrent reads too. The unconditional counts are a common way to report reliance; we know of
+ * no single paper that defines them, so no source is claimed.
  * Throws nothing for empty input: proportions with n = 0 are null.
  * Example: reliance(aidedReads).overreliance.estimate → share of wrong suggestions followed.
  */

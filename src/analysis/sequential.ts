@@ -1,6 +1,6 @@
 import type { ReadRow } from '../core/read-log';
 import { initialScore, finalScore } from './read-scores';
-import { weightOfAdvice, type WeightOfAdvice } from './weight-of-advice';
+import { weightOfAdvice, weightOfAdviceAbsolute, type WeightOfAdvice } from './weight-of-advice';
 import { wilson, type Proportion } from './wilson';
 
 export type SequentialSection = {
@@ -15,16 +15,34 @@ export type SequentialSection = {
   detrimental: Proportion;
   /** relative AI reliance (Schemmer et al. 2023): k = #(d0 ≠ y, a = y, d = y), n = #(d0 ≠ y, a = y) */
   rair: Proportion;
-  /** relative self-reliance: k = #(d0 = y, a ≠ y, d = y), n = #(d0 = y, a ≠ y) */
+  /** relative self-reliance (Schemmer et al. 2023): k = #(d0 = y, a ≠ y, d = y), n = #(d0 = y, a ≠ y) */
   rsr: Proportion;
+  /**
+   * over-reliance given the reader was first right, = 1 − rsr (Schemmer et al. 2023):
+   * k = #(d0 = y, a ≠ y, d ≠ y), n = #(d0 = y, a ≠ y). Not the unconditional `overreliance`
+   * of the aided section, whose n is every wrong suggestion.
+   */
+  overreliance_given_first_right: Proportion;
+  /**
+   * under-reliance given the reader was first wrong, = 1 − rair (Schemmer et al. 2023):
+   * k = #(d0 ≠ y, a = y, d ≠ y), n = #(d0 ≠ y, a = y). Not the unconditional `underreliance`.
+   */
+  underreliance_given_first_wrong: Proportion;
+  /** weight of advice, signed form (Harvey & Fischer 1997): (s − s0)/(100p − s0) in [0,1] */
+  woa_signed: WeightOfAdvice;
+  /** weight of advice, absolute form (Yaniv 2004): |s − s0|/|100p − s0| in [0,1] */
+  woa_absolute: WeightOfAdvice;
+  /** the signed form under its first name, kept so older readers of the JSON keep working */
   woa: WeightOfAdvice;
 };
 
 /**
- * Sequential-reading metrics (SPEC Contract 2) over reads with an initial call d0, a suggestion
+ * Sequential-reading metrics (docs/methods.md) over reads with an initial call d0, a suggestion
  * call a and a final call d; counts as proportions of the n sequential reads (Wilson intervals).
  * RAIR and RSR follow Schemmer, Kuehl, Benz, Bartos & Satzger (2023), "Appropriate reliance on
- * AI advice", IUI '23; weight of advice follows Harvey & Fischer (1997), see weight-of-advice.ts.
+ * AI advice", IUI '23 (the conditional over- and under-reliance are their complements: a wrong
+ * final call with binary calls means following the wrong suggestion, or rejecting the right one).
+ * Weight of advice in both forms, see weight-of-advice.ts. Definitions: docs/methods.md.
  * Returns null when no read qualifies. Throws RangeError when a confidence is outside 0..100.
  * Example: sequentialSection(reads)?.changed.k → number of reads whose call changed.
  */
@@ -66,6 +84,7 @@ export const sequentialSection = (reads: readonly ReadRow[]): SequentialSection 
     }
   }
   const n = seq.length;
+  const signed = weightOfAdvice(s, s0, p);
   return {
     n,
     changed: wilson(changed, n),
@@ -74,6 +93,10 @@ export const sequentialSection = (reads: readonly ReadRow[]): SequentialSection 
     detrimental: wilson(detrimental, n),
     rair: wilson(rairK, rairN),
     rsr: wilson(rsrK, rsrN),
-    woa: weightOfAdvice(s, s0, p),
+    overreliance_given_first_right: wilson(rsrN - rsrK, rsrN),
+    underreliance_given_first_wrong: wilson(rairN - rairK, rairN),
+    woa_signed: signed,
+    woa_absolute: weightOfAdviceAbsolute(s, s0, p),
+    woa: signed,
   };
 };

@@ -5,6 +5,7 @@ import { analyzeReads, DEFAULT_BOOT, DEFAULT_SEED } from '../analysis/engine';
 import type { AveragedValue } from '../analysis/reader-bootstrap';
 import type { AnalysisReport, GroupFinding, ReaderEntry } from '../analysis/report-types';
 import type { Sections } from '../analysis/sections';
+import type { WeightOfAdvice } from '../analysis/weight-of-advice';
 import type { Proportion } from '../analysis/wilson';
 import { parseReadLog, ReadLogError } from '../io/read-log-parse';
 import { CliError } from './cli-error';
@@ -74,7 +75,10 @@ const range = (lo: number | null, hi: number | null): string => (lo === null || 
 const prop = (p: Proportion | undefined): string =>
   p === undefined || p.estimate === null ? `- (n=${p?.n ?? 0})` : `${num(p.estimate)}${range(p.lower, p.upper)} (${p.k}/${p.n})`;
 const ms = (v: number | null | undefined): string => (v === null || v === undefined ? '-' : `${Math.round(v)} ms`);
-const row = (label: string, value: string): string => `  ${label.padEnd(30)}${value}`;
+const row = (label: string, value: string): string => `  ${label.padEnd(LABEL_WIDTH)}${value}`;
+const LABEL_WIDTH = 44;
+
+const woa = (w: WeightOfAdvice): string => `mean ${num(w.mean)}, median ${num(w.median)} (n=${w.n})`;
 
 const sectionLines = (s: Sections): string[] => {
   const out: string[] = [];
@@ -92,8 +96,8 @@ const sectionLines = (s: Sections): string[] => {
   const a = s.aided;
   if (a !== null) {
     out.push(row('  agreement with suggestion', prop(a.agreement)));
-    out.push(row('  over-reliance', prop(a.overreliance)));
-    out.push(row('  under-reliance', prop(a.underreliance)));
+    out.push(row('  over-reliance (of all wrong suggestions)', prop(a.overreliance)));
+    out.push(row('  under-reliance (of all right suggestions)', prop(a.underreliance)));
     out.push(row('  kappa vs suggestion', a.kappa.estimate === null ? '-' : `${num(a.kappa.estimate)} (SE ${num(a.kappa.se)})`));
     out.push(row('  suggestion accuracy', prop(a.ai_accuracy)));
     out.push(row('  over-reliance, caution', prop(a.caution.shown)));
@@ -107,7 +111,10 @@ const sectionLines = (s: Sections): string[] => {
     out.push(row('  beneficial / detrimental', `${q.beneficial.k} / ${q.detrimental.k}`));
     out.push(row('  RAIR', prop(q.rair)));
     out.push(row('  RSR', prop(q.rsr)));
-    out.push(row('  weight of advice', `mean ${num(q.woa.mean)}, median ${num(q.woa.median)} (n=${q.woa.n})`));
+    out.push(row('  over-reliance if first right (1 - RSR)', prop(q.overreliance_given_first_right)));
+    out.push(row('  under-reliance if first wrong (1 - RAIR)', prop(q.underreliance_given_first_wrong)));
+    out.push(row('  weight of advice, signed', woa(q.woa_signed)));
+    out.push(row('  weight of advice, absolute', woa(q.woa_absolute)));
   }
   const x = s.crossover;
   if (x !== null) {

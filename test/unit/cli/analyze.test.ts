@@ -40,7 +40,12 @@ describe('heed analyze', () => {
     const r = heed(good, '--boot', '0');
     expect(r.code).toBe(0);
     expect(r.out).toMatch(/reader R1 \(radiologist\), finding target/);
-    expect(r.out).toMatch(/over-reliance\s+1\.000 \[0\.207, 1\.000\] \(1\/1\)/);
+    expect(r.out).toMatch(/over-reliance \(of all wrong suggestions\)\s+1\.000 \[0\.207, 1\.000\] \(1\/1\)/);
+    // sample, sequential reads of R1: C1 truth 1, first call 0, suggestion 1 (right): a first-wrong read;
+    // C2 truth 0, first call 0 (right), suggestion 1 (wrong), final 1: followed it, 1 of 1 first-right reads
+    expect(r.out).toMatch(/over-reliance if first right \(1 - RSR\)\s+1\.000 \[0\.207, 1\.000\] \(1\/1\)/);
+    expect(r.out).toMatch(/weight of advice, signed\s+mean/);
+    expect(r.out).toMatch(/weight of advice, absolute\s+mean/);
     expect(r.out.trim().split('\n').at(-1)).toBe('Heed is a research and training tool, not a medical device; results are for research and training, under local ethics, data-protection and licensed-practice rules.');
   });
   it.each([
