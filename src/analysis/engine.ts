@@ -1,6 +1,7 @@
 import type { ReadRow } from '../core/read-log';
 import { readersAgreement } from './fleiss-readers';
 import { mrmc } from './mrmc-adapter';
+import { COVARIANCE_METHODS, type CovarianceMethod } from './or-covariances';
 import { isAided } from './read-scores';
 import { readerAveraged } from './reader-bootstrap';
 import type { AnalysisReport, GroupFinding, ReaderEntry } from './report-types';
@@ -9,7 +10,15 @@ import { subgroups } from './subgroups';
 
 export type { AnalysisReport } from './report-types';
 
-export type AnalyzeOptions = { seed?: number; boot?: number };
+export type AnalyzeOptions = {
+  seed?: number;
+  boot?: number;
+  /** error covariances of the Obuchowski-Rockette analysis: 'jackknife' (default) or 'delong' */
+  covariance?: CovarianceMethod;
+};
+
+export type { CovarianceMethod } from './or-covariances';
+export const DEFAULT_COVARIANCE: CovarianceMethod = 'jackknife';
 
 export const DEFAULT_SEED = 1;
 export const DEFAULT_BOOT = 1000;
@@ -17,14 +26,14 @@ export const DEFAULT_BOOT = 1000;
 const byReaderId = (a: string, b: string) => a.localeCompare(b, 'en', { numeric: true });
 
 /**
- * The whole analysis of a read log (SPEC Contracts 2 and 3): per reader and finding the
+ * The whole analysis of a read log (docs/methods.md, docs/formats.md): per reader and finding the
  * unaided, aided, sequential and crossover sections (null where they do not apply), time ratio
  * and subgroups per case attribute; per finding the pooled and reader-averaged figures with a
  * seeded two-way bootstrap (options.seed, default 1; options.boot resamples, default 1000, 0 for
  * none), Fleiss' kappa across readers, pooled subgroups and, when fully crossed, the
- * Obuchowski-Rockette analysis. Practice reads are left out of every statistic. Readers are
+ * Obuchowski-Rockette analysis (options.covariance: 'jackknife', the default, or 'delong'). Practice reads are left out of every statistic. Readers are
  * ordered by id (numeric-aware), findings by first appearance.
- * Throws RangeError on a bad seed or boot, or a confidence outside 0..100.
+ * Throws RangeError on a bad seed, boot or covariance, or a confidence outside 0..100.
  * Example: analyzeReads(parseReadLog(csv), { seed: 7, boot: 500 }).readers[0].aided.overreliance.
  */
 export const analyzeReads = (rows: readonly ReadRow[], options: AnalyzeOptions = {}): AnalysisReport => {
@@ -32,6 +41,8 @@ export const analyzeReads = (rows: readonly ReadRow[], options: AnalyzeOptions =
   const boot = options.boot ?? DEFAULT_BOOT;
   if (!Number.isInteger(seed)) throw new RangeError(`seed must be a whole number, got ${seed}`);
   if (!Number.isInteger(boot) || boot < 0) throw new RangeError(`boot must be a whole number >= 0, got ${boot}`);
+  const covariance = options.covariance ?? DEFAULT_COVARIANCE;
+  if (!COVARIANCE_METHODS.includes(covariance)) throw new RangeError(`covariance must be jackknife or delong, got ${JSON.stringify(covariance)}`);
   const reads = rows.filter((r) => r.practice === 0);
   const attributes: string[] = [];
   const byFinding = new Map<string, Map<string, ReadRow[]>>();
@@ -56,7 +67,7 @@ export const analyzeReads = (rows: readonly ReadRow[], options: AnalyzeOptions =
       all.push(...rs);
       readers.push({ reader_id: id, reader_role: rs[0]?.reader_role ?? '', finding, ...sections(rs), subgroups: subgroups(rs, attributes) });
     }
-    const m = mrmc(all);
+    const m = mrmc(all, covariance);
     findings.push({
       finding,
       readers: ids.length,
@@ -70,5 +81,5 @@ export const analyzeReads = (rows: readonly ReadRow[], options: AnalyzeOptions =
     });
   }
   readers.sort((a, b) => byReaderId(a.reader_id, b.reader_id));
-  return { readers, group: { reads: reads.length, practice_excluded: rows.length - reads.length, seed, boot, attributes, findings } };
+  return { readers, group: { reads: reads.length, practice_excluded: rows.length - reads.length, seed, boot, covariance, attributes, findings } };
 };

@@ -1,3 +1,5 @@
+import { covarianceSums, deviations } from './covariance-sums';
+
 /**
  * The four averaged error (co)variances of the Obuchowski & Rockette (1995) model, estimated by
  * the case jackknife (Hillis, Obuchowski, Schartz & Berbaum 2005, Stat Med 24:1579-1607):
@@ -7,7 +9,7 @@
  *   cov1 = mean over i ≠ i', j = j'   (same reader, different modalities)
  *   cov2 = mean over i = i', j ≠ j'   (same modality, different readers)
  *   cov3 = mean over i ≠ i', j ≠ j'   (different modality and reader).
- * Computed in O(t·r·c) from per-case sums, not by forming the (t·r)² matrix.
+ * Computed in O(t·r·c) from per-case sums (covariance-sums.ts), not by forming the (t·r)² matrix.
  * Throws RangeError when fewer than 2 modalities, readers or cases are given or the arrays are ragged.
  * Example: jackknifeCovariances(leaveOneOut) with leaveOneOut[i][j] a Float64Array over cases.
  */
@@ -26,45 +28,8 @@ export const jackknifeCovariances = (leaveOneOut: ArrayLike<number>[][]): OrCova
     }
   }
   // deviations from each (i, j) jackknife mean
-  const dev: Float64Array[][] = leaveOneOut.map((row) => row.map((v) => {
-    let mean = 0;
-    for (let k = 0; k < c; k++) mean += v[k] as number;
-    mean /= c;
-    const d = new Float64Array(c);
-    for (let k = 0; k < c; k++) d[k] = (v[k] as number) - mean;
-    return d;
-  }));
-  let diag = 0;
-  let sameReader = 0;
-  let sameModality = 0;
-  let all = 0;
-  const readerSum = new Float64Array(r);
-  const modalitySum = new Float64Array(t);
-  for (let k = 0; k < c; k++) {
-    readerSum.fill(0);
-    modalitySum.fill(0);
-    let total = 0;
-    let sq = 0;
-    for (let i = 0; i < t; i++) {
-      const row = dev[i] as Float64Array[];
-      for (let j = 0; j < r; j++) {
-        const d = (row[j] as Float64Array)[k] as number;
-        readerSum[j] = (readerSum[j] as number) + d;
-        modalitySum[i] = (modalitySum[i] as number) + d;
-        total += d;
-        sq += d * d;
-      }
-    }
-    let a2 = 0;
-    for (let j = 0; j < r; j++) a2 += (readerSum[j] as number) ** 2;
-    let b2 = 0;
-    for (let i = 0; i < t; i++) b2 += (modalitySum[i] as number) ** 2;
-    diag += sq;
-    sameReader += a2 - sq;
-    sameModality += b2 - sq;
-    all += total * total;
-  }
-  const other = all - diag - sameReader - sameModality;
+  const dev: Float64Array[][] = leaveOneOut.map((row) => row.map((v) => deviations(v, 0, c)));
+  const { diag, sameReader, sameModality, other } = covarianceSums(dev, 0, c);
   const f = (c - 1) / c;
   return {
     varE: (f * diag) / (t * r),

@@ -2,8 +2,10 @@ import fCdf from '@stdlib/stats-base-dists-f-cdf';
 import normalCdf from '@stdlib/stats-base-dists-normal-cdf';
 import normalQuantile from '@stdlib/stats-base-dists-normal-quantile';
 import tQuantile from '@stdlib/stats-base-dists-t-quantile';
-import { jackknifeAuc } from './jackknife-auc';
-import { jackknifeCovariances, type OrCovariances } from './jackknife-covariance';
+import type { OrCovariances } from './jackknife-covariance';
+import { averagedCovariances, caseDeviations, type CovarianceMethod } from './or-covariances';
+import { singleTreatments, type ORTreatment } from './or-single-treatment';
+import { readerCountWarning } from './or-warning';
 
 /** One test of the reader-averaged AUC difference (aided minus unaided), with its 95% interval. */
 export type ORTest = {
@@ -28,8 +30,14 @@ export type ORResult = {
   fixedCases: ORTest;
   /** Mann-Whitney AUC of each [modality][reader] */
   auc: number[][];
-  /** the jackknife error variance and covariances the tests used */
+  /** how the error covariances were estimated: case jackknife or DeLong structural components */
+  covarianceMethod: CovarianceMethod;
+  /** the error variance and covariances the tests used, by covarianceMethod */
   covariances: OrCovariances;
+  /** each modality's reader-averaged AUC with its own interval (single-treatment analysis) */
+  treatments: ORTreatment[];
+  /** a caution about the random-reader result (fewer than 4 readers), else null */
+  warning: string | null;
   /** mean squares of the AUCs: modality, modality × reader */
   msT: number;
   msTR: number;
@@ -40,11 +48,14 @@ export type ORResult = {
  * modalities): is the reader-averaged AUC different aided (modality 1) vs unaided (modality 0)?
  * Obuchowski & Rockette (1995), Commun Stat Simul Comput 24:285-308, with the error covariances
  * estimated by the case jackknife of the AUCs (Hillis, Obuchowski, Schartz & Berbaum 2005,
- * Stat Med 24:1579-1607) and Hillis' (2007, Stat Med 26:596-619) denominator degrees of freedom.
+ * Stat Med 24:1579-1607) or, with covariance 'delong', by the DeLong, DeLong & Clarke-Pearson
+ * (1988) structural components (or-covariances.ts), and Hillis' (2007, Stat Med 26:596-619)
+ * denominator degrees of freedom. Each modality also gets its own single-treatment interval
+ * (or-single-treatment.ts), and fewer than 4 readers a warning (or-warning.ts). docs/methods.md.
  * With t = 2 modalities, r readers, θij the AUC of modality i and reader j, θ̄i. the reader mean:
  *   MS(T)  = r Σi (θ̄i. − θ̄..)² / (t − 1)
  *   MS(TR) = Σij (θij − θ̄i. − θ̄.j + θ̄..)² / ((t − 1)(r − 1))
- *   varE, cov1, cov2, cov3 from jackknifeCovariances (see that file).
+ *   varE, cov1, cov2, cov3 from averagedCovariances (definitions in jackknife-covariance.ts).
  * Random readers and cases: D = MS(TR) + r·max(cov2 − cov3, 0), F = MS(T)/D on (t − 1, ddfH),
  *   ddfH = D² / (MS(TR)² / ((t − 1)(r − 1))), se = sqrt(2D/r), CI difference ± t(0.975; ddfH)·se.
  * Fixed readers: D = varE − cov1 + (r − 1)·max(cov2 − cov3, 0), χ² = (t − 1)MS(T)/D on t − 1 df,
@@ -55,23 +66,20 @@ export type ORResult = {
  * Throws RangeError when there are not exactly 2 modalities, fewer than 2 readers, modalities
  * or readers differ in size, case counts do not match truth, a truth value is not 0/1, a class
  * has fewer than 2 cases, or a score is not finite.
- * Example: obuchowskiRockette({ scores: [[r1u, r2u], [r1a, r2a]], truth }).random.p
+ * Example: obuchowskiRockette({ scores: [[r1u, r2u], [r1a, r2a]], truth, covariance: 'delong' }).random.p
  */
-export const obuchowskiRockette = (input: { scores: number[][][]; truth: (0 | 1)[] }): ORResult => {
+export const obuchowskiRockette = (input: { scores: number[][][]; truth: (0 | 1)[]; covariance?: CovarianceMethod }): ORResult => {
   const { scores, truth } = input;
+  const covarianceMethod = input.covariance ?? 'jackknife';
+  if (covarianceMethod !== 'jackknife' && covarianceMethod !== 'delong') {
+    throw new RangeError(`covariance must be jackknife or delong, got ${JSON.stringify(covarianceMethod)}`);
+  }
   checkShape(scores, truth);
   const t = 2;
   const r = (scores[0] as number[][]).length;
-  const jk = scores.map((modality, i) => modality.map((readerScores, j) => {
-    try {
-      return jackknifeAuc(readerScores, truth);
-    } catch (error) {
-      if (error instanceof RangeError) throw new RangeError(`Obuchowski-Rockette, modality ${i} reader ${j}: ${error.message}`);
-      throw error;
-    }
-  }));
-  const auc = jk.map((m) => m.map((x) => x.auc));
-  const covariances = jackknifeCovariances(jk.map((m) => m.map((x) => x.leaveOneOut)));
+  const deviations = caseDeviations(covarianceMethod, scores, truth);
+  const { auc } = deviations;
+  const covariances = averagedCovariances(deviations);
   const { varE, cov1, cov2, cov3 } = covariances;
 
   const modalityMean = auc.map((row) => row.reduce((s, v) => s + v, 0) / r);
@@ -100,7 +108,11 @@ export const obuchowskiRockette = (input: { scores: number[][][]; truth: (0 | 1)
 
   const fixedCases = fTest(difference, msT, msTR, t - 1, dfTR, r);
 
-  return { random, fixedReaders, fixedCases, auc, covariances, msT, msTR };
+  return {
+    random, fixedReaders, fixedCases, auc, covarianceMethod, covariances, msT, msTR,
+    treatments: singleTreatments(deviations),
+    warning: readerCountWarning(r),
+  };
 };
 
 // F = MS(T)/D on (df1, ddf), se of the difference sqrt(2D/r); ddf Infinity means normal / chi-square.

@@ -1,6 +1,7 @@
-// The shape of `heed analyze --json` (SPEC Contract 3), as analyzeReads returns it.
+// The shape of `heed analyze --json` (docs/formats.md), as analyzeReads returns it.
 import type { ReadersAgreement } from './fleiss-readers';
 import type { MrmcResult } from './mrmc-adapter';
+import type { CovarianceMethod } from './or-covariances';
 import type { ReaderAveraged } from './reader-bootstrap';
 import type { Sections } from './sections';
 import type { SubgroupEntry } from './subgroups';
@@ -25,7 +26,10 @@ export type GroupFinding = {
   fleiss_kappa: { unaided: ReadersAgreement; aided: ReadersAgreement };
   /** pooled subgroups: each with the suggestion's own accuracy beside readers' over-reliance */
   subgroups: SubgroupEntry[];
-  /** Obuchowski-Rockette / Hillis analysis of aided minus unaided AUC; null unless fully crossed */
+  /**
+   * Obuchowski-Rockette / Hillis analysis of aided minus unaided AUC, with each condition's own
+   * interval (treatments), the covariance method and a warning below 4 readers; null unless fully crossed
+   */
   mrmc: MrmcResult | null;
   /** why mrmc is null, else null */
   mrmc_note: string | null;
@@ -40,6 +44,8 @@ export type AnalysisReport = {
     practice_excluded: number;
     seed: number;
     boot: number;
+    /** error covariance method asked for the Obuchowski-Rockette analyses */
+    covariance: CovarianceMethod;
     /** case attribute names found (case_<name> columns, without the prefix) */
     attributes: string[];
     findings: GroupFinding[];

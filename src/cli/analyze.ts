@@ -1,7 +1,9 @@
-// `heed analyze FILE [--json] [--seed N] [--boot N]`: statistics of a reads.csv (SPEC Contract 3),
+// `heed analyze FILE [--json] [--seed N] [--boot N] [--covariance jackknife|delong]`: statistics of
+// a reads.csv (docs/formats.md),
 // as JSON or as a readable table per reader and finding, then the group.
 import { readFile } from 'node:fs/promises';
-import { analyzeReads, DEFAULT_BOOT, DEFAULT_SEED } from '../analysis/engine';
+import { analyzeReads, DEFAULT_BOOT, DEFAULT_COVARIANCE, DEFAULT_SEED, type CovarianceMethod } from '../analysis/engine';
+import type { ORInterval } from '../analysis/or-single-treatment';
 import type { AveragedValue } from '../analysis/reader-bootstrap';
 import type { AnalysisReport, GroupFinding, ReaderEntry } from '../analysis/report-types';
 import type { Sections } from '../analysis/sections';
@@ -10,7 +12,14 @@ import type { Proportion } from '../analysis/wilson';
 import { parseReadLog, ReadLogError } from '../io/read-log-parse';
 import { CliError } from './cli-error';
 
-type AnalyzeArgs = { file: string; json: boolean; seed: number; boot: number };
+type AnalyzeArgs = { file: string; json: boolean; seed: number; boot: number; covariance: CovarianceMethod };
+
+const USAGE = 'usage: heed analyze FILE [--json] [--seed N] [--boot N] [--covariance jackknife|delong]';
+
+const covarianceMethod = (value: string | undefined): CovarianceMethod => {
+  if (value === 'jackknife' || value === 'delong') return value;
+  throw new CliError(`--covariance needs jackknife or delong, got ${value === undefined ? 'nothing' : JSON.stringify(value)}`);
+};
 
 const wholeNumber = (flag: string, value: string | undefined, min: number): number => {
   if (value === undefined || !/^\d+$/.test(value) || Number(value) < min || !Number.isSafeInteger(Number(value))) {
@@ -24,22 +33,24 @@ export const parseAnalyzeArgs = (args: string[]): AnalyzeArgs => {
   let json = false;
   let seed = DEFAULT_SEED;
   let boot = DEFAULT_BOOT;
+  let covariance = DEFAULT_COVARIANCE;
   for (let i = 0; i < args.length; i++) {
     const a = args[i] as string;
     if (a === '--json') json = true;
     else if (a === '--seed') seed = wholeNumber('--seed', args[++i], 0);
     else if (a === '--boot') boot = wholeNumber('--boot', args[++i], 0);
-    else if (a.startsWith('--')) throw new CliError(`analyze: unknown option ${a}; usage: heed analyze FILE [--json] [--seed N] [--boot N]`);
+    else if (a === '--covariance') covariance = covarianceMethod(args[++i]);
+    else if (a.startsWith('--')) throw new CliError(`analyze: unknown option ${a}; ${USAGE}`);
     else if (file === undefined) file = a;
     else throw new CliError(`analyze takes one FILE, got a second: ${a}`);
   }
-  if (file === undefined) throw new CliError('usage: heed analyze FILE [--json] [--seed N] [--boot N]');
+  if (file === undefined) throw new CliError(USAGE);
   if (seed > 0x7fffffff) throw new CliError(`--seed must be at most ${0x7fffffff}, got ${seed}`);
-  return { file, json, seed, boot };
+  return { file, json, seed, boot, covariance };
 };
 
 export const runAnalyze = async (args: string[]): Promise<number> => {
-  const { file, json, seed, boot } = parseAnalyzeArgs(args);
+  const { file, json, seed, boot, covariance } = parseAnalyzeArgs(args);
   let text: string;
   try {
     text = await readFile(file, 'utf8');
@@ -58,7 +69,7 @@ export const runAnalyze = async (args: string[]): Promise<number> => {
   }
   let report;
   try {
-    report = analyzeReads(rows, { seed, boot });
+    report = analyzeReads(rows, { seed, boot, covariance });
   } catch (error) {
     if (error instanceof RangeError) throw new CliError(`${file}: ${error.message}`);
     throw error;
@@ -129,6 +140,8 @@ const sectionLines = (s: Sections): string[] => {
 
 const readerBlock = (r: ReaderEntry): string[] => [`reader ${r.reader_id}${r.reader_role ? ` (${r.reader_role})` : ''}, finding ${r.finding}`, ...sectionLines(r)];
 
+const orInterval = (x: ORInterval): string => ` [${num(x.lower)}, ${num(x.upper)}] (${Number.isFinite(x.ddf) ? `${num(x.ddf, 1)} df` : 'normal'})`;
+
 const avg = (v: AveragedValue): string => `${num(v.estimate)}${range(v.lower, v.upper)}`;
 
 const groupBlock = (g: GroupFinding, boot: number): string[] => {
@@ -142,9 +155,16 @@ const groupBlock = (g: GroupFinding, boot: number): string[] => {
   ] as const) out.push(row(`  ${label}`, avg(ra[key])));
   out.push(row('  Fleiss kappa unaided/aided', `${num(g.fleiss_kappa.unaided.kappa)} / ${num(g.fleiss_kappa.aided.kappa)}`));
   if (g.mrmc !== null) {
-    const t = g.mrmc.random;
-    out.push(row('  MRMC AUC difference', `${num(t.difference)} [${num(t.lower)}, ${num(t.upper)}], F ${num(t.f, 2)} on ${num(t.df1, 0)} and ${num(t.ddf, 1)} df, p ${num(t.p, 4)} (Obuchowski-Rockette, Hillis df)`));
-  } else out.push(row('  MRMC', g.mrmc_note ?? '-'));
+    const m = g.mrmc;
+    const t = m.random;
+    out.push(`  multi-reader analysis (Obuchowski-Rockette, ${m.covarianceMethod === 'delong' ? 'DeLong' : 'jackknife'} covariances, Hillis df)`);
+    out.push(row('  AUC aided - unaided, random readers', `${num(t.difference)} [${num(t.lower)}, ${num(t.upper)}], F ${num(t.f, 2)} on ${num(t.df1, 0)} and ${num(t.ddf, 1)} df, p ${num(t.p, 4)}`));
+    for (const [label, x] of [['fixed readers', m.fixedReaders], ['fixed cases', m.fixedCases]] as const) {
+      out.push(row(`  AUC aided - unaided, ${label}`, `${num(x.difference)} [${num(x.lower)}, ${num(x.upper)}], p ${num(x.p, 4)}`));
+    }
+    for (const tr of m.treatments) out.push(row(`  AUC ${tr.modality === 1 ? 'aided' : 'unaided'}, readers averaged`, `${num(tr.auc)}${orInterval(tr.random)}`));
+    if (m.warning !== null) out.push(row('  warning', m.warning));
+  } else out.push(row('  multi-reader analysis', g.mrmc_note ?? '-'));
   for (const s of g.subgroups) {
     out.push(row(`  ${s.attribute} = ${s.value}`, `suggestion accuracy ${prop(s.ai_accuracy)}; over-reliance ${prop(s.overreliance)}`));
   }

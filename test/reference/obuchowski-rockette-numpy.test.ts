@@ -5,6 +5,9 @@
 // (none is used for this method); agreement shows the fast TypeScript path computes the formulas
 // as written, not that the formulas are right — the null simulation
 // (test/unit/analysis/obuchowski-rockette-null.test.ts, npm run validate:mrmc) checks that side.
+// With covariance 'delong' the numpy side forms the DeLong et al. (1988) covariance matrix of all
+// reader-by-modality AUCs from brute-force placement values and numpy.cov ("expected_delong");
+// each modality's single-treatment interval ("treatments") comes from that matrix's diagonal block.
 import { analyzeReads } from '../../src/analysis/engine';
 import { obuchowskiRockette, type ORResult, type ORTest } from '../../src/analysis/obuchowski-rockette';
 import { parseReadLog } from '../../src/io/read-log-parse';
@@ -12,7 +15,25 @@ import { loadReference, near, readFixture, type RefOr, type RefOrTest } from './
 
 const TOL = 1e-9;
 
-type ScoresFixture = { scores: number[][][]; truth: (0 | 1)[]; expected: RefOr };
+type RefInterval = { se: number; ddf: number | null; lower: number; upper: number };
+type RefTreatment = { modality: number; auc: number; random: RefInterval; fixedReaders: RefInterval; fixedCases: RefInterval; msR: number; varE: number; cov2: number };
+type RefOrFull = RefOr & { treatments: RefTreatment[] };
+type ScoresFixture = { scores: number[][][]; truth: (0 | 1)[]; expected: RefOrFull; expected_delong: RefOrFull };
+
+const compareTreatments = (got: ORResult, want: RefTreatment[], where: string) => {
+  expect(got.treatments).toHaveLength(want.length);
+  want.forEach((w, i) => {
+    const g = got.treatments[i];
+    expect(g?.modality, `${where} treatment ${i}`).toBe(w.modality);
+    for (const key of ['auc', 'msR', 'varE', 'cov2'] as const) near(g?.[key], w[key], 1e-12, `${where} treatment ${i} ${key}`);
+    for (const test of ['random', 'fixedReaders', 'fixedCases'] as const) {
+      for (const field of ['se', 'lower', 'upper'] as const) near(g?.[test][field], w[test][field], TOL, `${where} treatment ${i} ${test}.${field}`);
+      const ddf = w[test].ddf;
+      if (ddf === null) expect(g?.[test].ddf, `${where} treatment ${i} ${test}.ddf`).toBe(Infinity);
+      else near(g?.[test].ddf, ddf, TOL * Math.max(1, ddf), `${where} treatment ${i} ${test}.ddf`);
+    }
+  });
+};
 
 const compare = (got: ORResult, want: RefOr, where: string) => {
   for (const key of ['random', 'fixedReaders', 'fixedCases'] as const) {
@@ -32,7 +53,18 @@ const compare = (got: ORResult, want: RefOr, where: string) => {
 describe('Obuchowski-Rockette vs independent numpy re-implementation', () => {
   it.each(['a', 'b', 'c'])('or-scores-%s.json (seeded scores with ties)', (name) => {
     const fx: ScoresFixture = JSON.parse(readFixture(`or-scores-${name}.json`));
-    compare(obuchowskiRockette({ scores: fx.scores, truth: fx.truth }), fx.expected, `or-scores-${name}`);
+    const got = obuchowskiRockette({ scores: fx.scores, truth: fx.truth });
+    expect(got.covarianceMethod).toBe('jackknife');
+    compare(got, fx.expected, `or-scores-${name}`);
+    compareTreatments(got, fx.expected.treatments, `or-scores-${name}`);
+  });
+
+  it.each(['a', 'b', 'c'])('or-scores-%s.json with DeLong covariances', (name) => {
+    const fx: ScoresFixture = JSON.parse(readFixture(`or-scores-${name}.json`));
+    const got = obuchowskiRockette({ scores: fx.scores, truth: fx.truth, covariance: 'delong' });
+    expect(got.covarianceMethod).toBe('delong');
+    compare(got, fx.expected_delong, `or-scores-${name} delong`);
+    compareTreatments(got, fx.expected_delong.treatments, `or-scores-${name} delong`);
   });
 
   // The engine's group mrmc from the parsed logs; numpy builds the same fully crossed arrays from the CSV.

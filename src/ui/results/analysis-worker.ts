@@ -1,12 +1,12 @@
 /// <reference lib="webworker" />
 // Runs the analysis engine (the same one `heed analyze` uses) off the main thread.
-import { analyzeReads } from '../../analysis/engine';
+import { analyzeReads, type CovarianceMethod } from '../../analysis/engine';
 import type { ReadRow } from '../../core/read-log';
 
-self.onmessage = (event: MessageEvent<{ rows: ReadRow[]; seed: number; boot: number }>) => {
+self.onmessage = (event: MessageEvent<{ rows: ReadRow[]; seed: number; boot: number; covariance?: CovarianceMethod }>) => {
   try {
-    const { rows, seed, boot } = event.data;
-    self.postMessage({ ok: true, report: analyzeReads(rows, { seed, boot }) });
+    const { rows, seed, boot, covariance } = event.data;
+    self.postMessage({ ok: true, report: analyzeReads(rows, { seed, boot, covariance }) });
   } catch (error) {
     self.postMessage({ ok: false, error: error instanceof Error ? error.message : String(error) });
   }

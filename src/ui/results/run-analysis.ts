@@ -1,9 +1,10 @@
-import type { AnalysisReport } from '../../analysis/engine';
+import type { AnalysisReport, CovarianceMethod } from '../../analysis/engine';
 import type { ReadRow } from '../../core/read-log';
 
 type Reply = { ok: true; report: AnalysisReport } | { ok: false; error: string };
 
-export const runAnalysis = (rows: ReadRow[], seed: number, boot: number): Promise<AnalysisReport> =>
+/** The analysis engine in a worker; covariance picks the Obuchowski-Rockette covariance method. */
+export const runAnalysis = (rows: ReadRow[], seed: number, boot: number, covariance: CovarianceMethod = 'jackknife'): Promise<AnalysisReport> =>
   new Promise((resolve, reject) => {
     const worker = new Worker(new URL('./analysis-worker.ts', import.meta.url), { type: 'module' });
     worker.onmessage = (event: MessageEvent<Reply>) => {
@@ -12,5 +13,5 @@ export const runAnalysis = (rows: ReadRow[], seed: number, boot: number): Promis
       else reject(new Error(event.data.error));
     };
     worker.onerror = (event) => { worker.terminate(); reject(new Error(event.message)); };
-    worker.postMessage({ rows, seed, boot });
+    worker.postMessage({ rows, seed, boot, covariance });
   });

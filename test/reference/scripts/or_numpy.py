@@ -7,7 +7,13 @@ the jackknife recomputes every leave-one-case-out AUC by brute force over all ca
 the full (t*r) x (t*r) jackknife covariance matrix (the TypeScript uses per-case sums).
 Formulas: Obuchowski & Rockette (1995); jackknife covariances Hillis, Obuchowski, Schartz &
 Berbaum (2005); ddf Hillis (2007). p values and quantiles from scipy.stats.
-Run as a script to write ../fixtures/or-scores-*.json (seeded inputs plus these results).
+DeLong covariances (method="delong"): DeLong, DeLong & Clarke-Pearson (1988); here the placement
+values come from brute-force comparison of every positive with every negative (the TypeScript uses
+midranks), and the full (t*r) x (t*r) matrix S10/m + S01/n is formed with numpy.cov.
+Single-treatment intervals ("treatments"): each modality on its own, from the diagonal block of
+the same covariance matrix (docs/methods.md gives the formulas).
+Run as a script to write ../fixtures/or-scores-*.json (seeded inputs plus these results:
+"expected" with jackknife covariances, "expected_delong" with DeLong covariances).
 """
 import json
 import os
@@ -23,17 +29,60 @@ def auc_pairs(score, truth):
     return float(((diff > 0) + 0.5 * (diff == 0)).mean())
 
 
-def or_analysis(scores, truth):
-    scores = np.asarray(scores, float)
-    truth = np.asarray(truth)
+def jackknife_matrix(scores, truth):
     t, r, c = scores.shape
-    auc = np.array([[auc_pairs(scores[i, j], truth) for j in range(r)] for i in range(t)])
     keep = ~np.eye(c, dtype=bool)
     jk = np.array([[[auc_pairs(scores[i, j][keep[k]], truth[keep[k]]) for k in range(c)]
                     for j in range(r)] for i in range(t)])  # t x r x c
     flat = jk.reshape(t * r, c)
     dev = flat - flat.mean(axis=1, keepdims=True)
-    cov = (c - 1) / c * dev @ dev.T
+    return (c - 1) / c * dev @ dev.T
+
+
+def delong_matrix(scores, truth):
+    """DeLong et al. (1988) covariance of all t*r AUCs: S10/m + S01/n, brute-force placements."""
+    t, r, c = scores.shape
+    flat = scores.reshape(t * r, c)
+    pos, neg = flat[:, truth == 1], flat[:, truth == 0]
+    m, n = pos.shape[1], neg.shape[1]
+    psi = (pos[:, :, None] > neg[:, None, :]) + 0.5 * (pos[:, :, None] == neg[:, None, :])  # (t*r) x m x n
+    v10 = psi.mean(axis=2)  # share of negatives below each positive
+    v01 = psi.mean(axis=1)  # share of positives above each negative
+    return np.cov(v10) / m + np.cov(v01) / n
+
+
+def single_treatments(auc, cov, t, r):
+    out = []
+    for i in range(t):
+        block = cov[i * r:(i + 1) * r, i * r:(i + 1) * r]
+        var_e = np.diag(block).mean()
+        cov2 = block[~np.eye(r, dtype=bool)].mean()
+        a = auc[i]
+        mean = a.mean()
+        ms_r = np.sum((a - mean) ** 2) / (r - 1)
+        den = ms_r + r * max(cov2, 0)
+        ddf = den ** 2 / (ms_r ** 2 / (r - 1))
+        se = np.sqrt(den / r)
+        q = stats.t.ppf(0.975, ddf)
+        random = {"se": se, "ddf": ddf, "lower": mean - q * se, "upper": mean + q * se}
+        se = np.sqrt((var_e + (r - 1) * max(cov2, 0)) / r)
+        q = stats.norm.ppf(0.975)
+        fixed_readers = {"se": se, "ddf": None, "lower": mean - q * se, "upper": mean + q * se}
+        se = np.sqrt(ms_r / r)
+        q = stats.t.ppf(0.975, r - 1)
+        fixed_cases = {"se": se, "ddf": r - 1, "lower": mean - q * se, "upper": mean + q * se}
+        fl = lambda d: {k: (None if v is None else float(v)) for k, v in d.items()}  # noqa: E731
+        out.append({"modality": i, "auc": float(mean), "random": fl(random), "fixedReaders": fl(fixed_readers),
+                    "fixedCases": fl(fixed_cases), "msR": float(ms_r), "varE": float(var_e), "cov2": float(cov2)})
+    return out
+
+
+def or_analysis(scores, truth, method="jackknife"):
+    scores = np.asarray(scores, float)
+    truth = np.asarray(truth)
+    t, r, c = scores.shape
+    auc = np.array([[auc_pairs(scores[i, j], truth) for j in range(r)] for i in range(t)])
+    cov = jackknife_matrix(scores, truth) if method == "jackknife" else delong_matrix(scores, truth)
     mod = np.repeat(np.arange(t), r)
     rdr = np.tile(np.arange(r), t)
     same_m = mod[:, None] == mod[None, :]
@@ -68,6 +117,7 @@ def or_analysis(scores, truth):
     res["auc"] = auc.tolist()
     res["covariances"] = {"varE": float(var_e), "cov1": float(cov1), "cov2": float(cov2), "cov3": float(cov3)}
     res["msT"], res["msTR"] = float(ms_t), float(ms_tr)
+    res["treatments"] = single_treatments(auc, cov, t, r)
     return res
 
 
@@ -93,7 +143,8 @@ def main():
         out = {"generated_by": "test/reference/scripts/or_numpy.py",
                "method": "independent numpy re-implementation (brute-force jackknife), not a reference library",
                "versions": {"numpy": np.__version__, "scipy": scipy.__version__},
-               "scores": scores.tolist(), "truth": truth.tolist(), "expected": or_analysis(scores, truth)}
+               "scores": scores.tolist(), "truth": truth.tolist(), "expected": or_analysis(scores, truth),
+               "expected_delong": or_analysis(scores, truth, "delong")}
         with open(os.path.join(here, "..", "fixtures", name), "w") as f:
             json.dump(out, f)
         print("wrote", name)

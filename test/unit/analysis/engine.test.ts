@@ -54,5 +54,8 @@ describe('analyzeReads', () => {
   it('refuses a bad seed or boot', () => {
     expect(() => analyzeReads(rows, { boot: 1.5 })).toThrow(/boot/);
     expect(() => analyzeReads(rows, { seed: Number.NaN })).toThrow(/seed/);
+    // @ts-expect-error: a value from outside the type, as the worker could receive
+    expect(() => analyzeReads(rows, { covariance: 'exact' })).toThrow(/covariance must be jackknife or delong, got "exact"/);
+    expect(analyzeReads(rows, { boot: 0 }).group.covariance).toBe('jackknife');
   });
 });

@@ -141,3 +141,30 @@ describe('obuchowskiRockette', () => {
     expect(() => obuchowskiRockette({ scores: [u], truth })).toThrow(RangeError);
   });
 });
+
+describe('obuchowskiRockette options and warning', () => {
+  it('warns below 4 readers (common practice, no source) and not from 4 up', () => {
+    const three = study(7, 3, 30);
+    const warned = obuchowskiRockette(three);
+    expect(warned.warning).toMatch(/^Only 3 readers: .*random-reader result.*2 degrees of freedom/);
+    expect(warned.warning).toMatch(/common-practice threshold with no published source/);
+    expect(obuchowskiRockette(study(7, 4, 30)).warning).toBeNull();
+  });
+  it('names the covariance method and refuses an unknown one', () => {
+    const s = study(8, 3, 30);
+    expect(obuchowskiRockette(s).covarianceMethod).toBe('jackknife');
+    expect(obuchowskiRockette({ ...s, covariance: 'delong' }).covarianceMethod).toBe('delong');
+    // @ts-expect-error: an option from outside the type, as a JavaScript caller could pass
+    expect(() => obuchowskiRockette({ ...s, covariance: 'bootstrap' })).toThrow(/covariance must be jackknife or delong, got "bootstrap"/);
+  });
+  it('gives each modality its reader-averaged AUC, the same as the modality means', () => {
+    const s = study(9, 4, 36);
+    const got = obuchowskiRockette({ ...s, covariance: 'delong' });
+    got.auc.forEach((row, i) => {
+      expect(got.treatments[i]?.auc).toBeCloseTo(row.reduce((a, b) => a + b, 0) / row.length, 14);
+      expect(got.treatments[i]?.fixedCases.ddf).toBe(3);
+      expect(got.treatments[i]?.fixedReaders.ddf).toBe(Infinity);
+    });
+  });
+});
+

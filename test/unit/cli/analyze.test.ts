@@ -65,6 +65,21 @@ describe('heed analyze', () => {
     expect(r.err.trim().split('\n')).toHaveLength(1);
     expect(r.err).toContain(`heed: ${path}${expected}`);
   });
+  it('names the covariance method of the multi-reader analysis and warns below 4 readers', () => {
+    const log = 'test/reference/fixtures/log-noconf.csv'; // 3 readers, fully crossed
+    const jk = heed(log, '--boot', '0');
+    expect(jk.code).toBe(0);
+    expect(jk.out).toMatch(/multi-reader analysis \(Obuchowski-Rockette, jackknife covariances, Hillis df\)/);
+    expect(jk.out).toMatch(/warning\s+Only 3 readers:/);
+    expect(jk.out).toMatch(/AUC aided, readers averaged\s+\d\.\d{3} \[/);
+    const dl = heed(log, '--boot', '0', '--covariance', 'delong', '--json');
+    expect(dl.code).toBe(0);
+    const report = JSON.parse(dl.out);
+    expect(report.group.covariance).toBe('delong');
+    expect(report.group.findings[0].mrmc).toMatchObject({ covarianceMethod: 'delong', warning: expect.stringMatching(/^Only 3 readers/) });
+    expect(report.group.findings[0].mrmc.treatments).toHaveLength(2);
+    expect(heed(log, '--covariance', 'bootstrap').err).toMatch(/--covariance needs jackknife or delong, got "bootstrap"/);
+  });
   it('exits 2 on a missing file and on bad arguments', () => {
     expect(heed(join(dir, 'absent.csv')).err).toMatch(/absent\.csv: cannot read the file \(no such file\)/);
     expect(heed(good, '--boot', 'many').code).toBe(2);
