@@ -1,6 +1,6 @@
 """The per-reader figures of `heed analyze` computed with numpy + scikit-learn + statsmodels,
 for the speed comparison in bench/analysis-vs-python.ts (not a test; no bootstrap, no
-Obuchowski-Rockette, no calibration or subgroups: the comparison covers the Contract 3 per-reader
+Obuchowski-Rockette, no calibration or subgroups: the comparison covers the documented per-reader
 figures plus pooled ones).
 Usage: /usr/bin/python3 bench/analysis-vs-python.py READS.csv OUT.json
 """

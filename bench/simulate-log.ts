@@ -1,5 +1,5 @@
 /**
- * A seeded simulated read log (SPEC Contract 1) in a fictional scenario of our own: invented
+ * A seeded simulated read log (docs/formats.md, "The read log") in a fictional scenario of our own: invented
  * readers read invented cases from three fictional scanners (Halden, Veyra, Tamsin) in a
  * two-period crossover, unaided in one period and aided (sequential by default) in the other,
  * so every reader reads every case both ways (fully crossed). No patient data; for benchmarks
@@ -96,5 +96,5 @@ export const simulateReadRows = (o: SimulationOptions): ReadRow[] => {
   return rows;
 };
 
-/** The simulated log as a Contract 1 CSV string (with a case_scanner column). */
+/** The simulated log as a read-log CSV string (docs/formats.md) (with a case_scanner column). */
 export const simulateReadLog = (o: SimulationOptions): string => readLogCsv(simulateReadRows(o), ['scanner']);

@@ -1,6 +1,6 @@
 /**
  * Brier (1950) score: mean squared difference between a forecast probability and the 0/1 outcome,
- * here mean((s/100 − y)²) over derived scores s in 0..100 (SPEC Contract 2). Lower is better.
+ * here mean((s/100 − y)²) over derived scores s in 0..100 (docs/methods.md). Lower is better.
  * n = 0 gives null. Throws RangeError on unequal lengths or a score outside 0..100.
  * Example: brier([90, 20], [1, 0]) → ((0.1)² + (0.2)²)/2 = 0.025.
  */

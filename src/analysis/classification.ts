@@ -4,7 +4,7 @@ export type Classification = { n: number; accuracy: Proportion; sensitivity: Pro
 
 /**
  * Accuracy P(d = y), sensitivity P(d = 1 | y = 1) and specificity P(d = 0 | y = 0) of calls d
- * against truth y (SPEC Contract 2), each with its Wilson interval; an empty class gives nulls.
+ * against truth y (docs/methods.md), each with its Wilson interval; an empty class gives nulls.
  * Throws RangeError when the arrays differ in length or hold anything but 0/1.
  * Example: classification([1, 0, 1], [1, 1, 0]) → accuracy 1/3, sensitivity 1/2, specificity 0/1.
  */

@@ -25,7 +25,7 @@ export type ConditionSection = {
 export type AidedSection = ConditionSection & Reliance;
 
 /**
- * Metrics of one condition over a set of reads (SPEC Contract 2): accuracy, sensitivity,
+ * Metrics of one condition over a set of reads (docs/methods.md): accuracy, sensitivity,
  * specificity, AUC, Brier score, reading time and calibration of the derived score.
  * Returns null for no reads. Throws RangeError when a confidence is outside 0..100.
  * Example: conditionSection(unaidedReads)?.auc.estimate.

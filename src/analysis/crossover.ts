@@ -26,7 +26,7 @@ export type CrossoverSection = PairedAccuracy & {
 
 /**
  * Crossover pairs: the same reader, case and finding read unaided in one period and aided in
- * another (SPEC Contract 2). Reads must already be one reader's reads of one finding. Each case
+ * another (docs/methods.md). Reads must already be one reader's reads of one finding. Each case
  * gives at most one pair: its first unaided read and the first aided read in another period.
  * Example: crossoverPairs(reads).length.
  */
@@ -58,7 +58,7 @@ export const crossoverPairs = (reads: readonly ReadRow[]): CrossoverPair[] => {
 type CaseReads = { unaided: ReadRow | null; aided: ReadRow | null; moreAided: ReadRow[] | null };
 
 /**
- * Paired accuracy with McNemar's exact test (SPEC Contract 2) over crossover pairs.
+ * Paired accuracy with McNemar's exact test (docs/methods.md) over crossover pairs.
  * Example: pairedAccuracy(pairs).mcnemar.p.
  */
 export const pairedAccuracy = (pairs: readonly CrossoverPair[]): PairedAccuracy => {

@@ -121,7 +121,7 @@ export const delongAuc = (positives: ArrayLike<number>, negatives: ArrayLike<num
 export type AucSummary = { estimate: number | null; se: number | null; lower: number | null; upper: number | null };
 
 /**
- * AUC as reported (SPEC Contract 2): estimate, DeLong SE, and estimate ± z·se clipped to [0,1].
+ * AUC as reported (docs/methods.md): estimate, DeLong SE, and estimate ± z·se clipped to [0,1].
  * Unlike delongAuc it never throws for an empty class: it gives nulls.
  * Example: aucSummary([1], []) → all null.
  */

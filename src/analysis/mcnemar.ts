@@ -13,7 +13,7 @@ export type McNemar = {
 };
 
 /**
- * McNemar's test for paired binary outcomes from the discordant counts b and c (SPEC Contract 2):
+ * McNemar's test for paired binary outcomes from the discordant counts b and c (docs/methods.md):
  * exact two-sided p, mid-p and the uncorrected chi-square statistic.
  * Throws RangeError when b or c is not a whole number ≥ 0.
  * Example: mcnemar(150, 86).chi_square → 17.356 (Agresti, Categorical Data Analysis, Table 10.1).

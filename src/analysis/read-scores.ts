@@ -2,7 +2,7 @@ import { derivedScore } from '../core/derived-score';
 import type { ReadRow } from '../core/read-log';
 
 /**
- * Derived final score s of a read (SPEC Contract 1): call 1 → 50 + confidence/2, call 0 →
+ * Derived final score s of a read (docs/formats.md, "The read log"): call 1 → 50 + confidence/2, call 0 →
  * 50 − confidence/2, on 0..100. When the confidence is empty (the study asked none), it is
  * taken as 100, so s is 100 or 0 and the AUC reduces to the call's (sensitivity + specificity)/2.
  * Throws RangeError when a confidence is outside 0..100.
@@ -14,5 +14,5 @@ export const finalScore = (r: ReadRow): number => derivedScore(r.final_call, r.f
 export const initialScore = (r: ReadRow): number | null =>
   r.initial_call === null ? null : derivedScore(r.initial_call, r.initial_confidence ?? 100);
 
-/** "Aided" reads are those with a suggestion shown (SPEC Contract 2). */
+/** "Aided" reads are those with a suggestion shown (docs/methods.md). */
 export const isAided = (r: ReadRow): boolean => r.assistance !== 'none';

@@ -6,7 +6,7 @@ import type { ReaderAveraged } from './reader-bootstrap';
 import type { Sections } from './sections';
 import type { SubgroupEntry } from './subgroups';
 
-/** One reader and finding: Contract 3's unaided / aided / sequential / crossover, plus more. */
+/** One reader and finding: the unaided / aided / sequential / crossover, plus more. */
 export type ReaderEntry = Sections & {
   reader_id: string;
   reader_role: string;

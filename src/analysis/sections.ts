@@ -15,7 +15,7 @@ export type Sections = {
 };
 
 /**
- * All per-condition sections of a set of reads of one finding (SPEC Contract 3): unaided reads
+ * All per-condition sections of a set of reads of one finding (docs/formats.md, "The output of heed analyze"): unaided reads
  * have assistance none, aided reads a suggestion shown. Crossover pairs are formed within each
  * reader; with several readers they are pooled and the paired AUC test is left out (null).
  * options.pairedAuc false also leaves it out (subgroups, where it costs much and says little).

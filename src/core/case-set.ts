@@ -1,4 +1,4 @@
-/** A case set (SPEC Contract 4) once validated: cases with ground truth and model outputs. */
+/** A case set (docs/formats.md, "The case set") once validated: cases with ground truth and model outputs. */
 
 export type CaseFinding = {
   finding: string;

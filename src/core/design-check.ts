@@ -1,6 +1,6 @@
 /**
- * Design check: will the study measure over-reliance (following a wrong suggestion, SPEC
- * Contract 2) precisely enough? Per sequence (every reader on it reads the same) and finding:
+ * Design check: will the study measure over-reliance (following a wrong suggestion,
+ * docs/methods.md) precisely enough? Per sequence (every reader on it reads the same) and finding:
  * the number of aided main reads whose shown suggestion is wrong (the model's own errors plus
  * planted ones), and the half-width of the 95% Wilson interval that an over-reliance rate of
  * 0.3 would have on that many reads:

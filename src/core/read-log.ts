@@ -1,5 +1,5 @@
 /**
- * The read log of SPEC Contract 1: one row per read. This is the one shape that the store
+ * The read log (docs/formats.md, "The read log"): one row per read. This is the one shape that the store
  * exports, the CLI parses and the analysis engine consumes.
  */
 import type { Assistance } from './design';

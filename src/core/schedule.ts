@@ -13,7 +13,7 @@
  *   sequence's entry ((p + b) mod P), so each block meets each condition once; blocks are
  *   interleaved in the shuffled order rather than read one after another. Practice item i then
  *   gets the entry of block (i mod k), so practice shows the conditions the period mixes.
- * - `order` is 1-based over the whole period, practice included (SPEC Contract 1).
+ * - `order` is 1-based over the whole period, practice included (docs/formats.md, "The read log").
  * - With breakEvery = N, breakBefore is set on main items N+1, 2N+1, ... (a rest after every N
  *   main cases); never on practice items or the first main item.
  * - Caution notices: see caution.ts.

@@ -1,7 +1,7 @@
 /**
  * The model's own ("natural") suggestion for each case-finding of a study, before any planted
  * error: the call is the case set's model_call, or score >= threshold when the set has none
- * (SPEC Contract 4); the score is the set's model_score, or null when it has none.
+ * (docs/formats.md, "The case set"); the score is the set's model_score, or null when it has none.
  *
  * Throws Error naming the case and finding when the design asks a finding the case lacks, or
  * when a case-finding has neither a call nor a score (nothing could be shown).

@@ -2,7 +2,7 @@
 export type Ms = number & { readonly __unit: 'ms' };
 /** A probability in [0, 1], such as a model score. */
 export type Probability = number & { readonly __unit: 'probability' };
-/** A 0..100 value: a confidence, or the derived likelihood score of SPEC Contract 1. */
+/** A 0..100 value: a confidence, or the derived likelihood score (docs/formats.md, "The derived score"). */
 export type Score100 = number & { readonly __unit: 'score100' };
 
 export const ms = (value: number): Ms => {

@@ -35,6 +35,7 @@ export const dataDictionary = (attributeNames: readonly string[]): string => [
   '',
   'UTF-8, comma-separated, header row, \\n line ends, RFC 4180 quoting. Booleans are 0/1; a value that does not apply is empty.',
   'Derived score (0..100, likelihood the finding is present): final_call = 1 ? 50 + final_confidence/2 : 50 - final_confidence/2.',
+  "Full description: docs/formats.md (this file's format) and docs/methods.md (the statistics) in Heed's repository.",
   '',
   ...READ_LOG_COLUMNS.map((c) => `${c}: ${MEANING[c]}`),
   ...attributeNames.map((a) => `case_${a}: text, case attribute "${a}" from the case set`),

@@ -1,5 +1,5 @@
 /**
- * Writes the read log of SPEC Contract 1: UTF-8, comma-separated, header row, "\n" line ends,
+ * Writes the read log (docs/formats.md, "The read log"): UTF-8, comma-separated, header row, "\n" line ends,
  * RFC 4180 quoting (by papaparse), booleans 0/1, empty where a value does not apply, then one
  * `case_<name>` column per case attribute.
  */

@@ -6,7 +6,7 @@ import { parseRow, repeatedReads, rowLayout, type RowLayout } from './read-log/r
 export { ReadLogError } from './read-log/read-log-error';
 
 /**
- * Parses a reads.csv (SPEC Contract 1) into typed reads, checking every cell first: the whole
+ * Parses a reads.csv (docs/formats.md, "The read log") into typed reads, checking every cell first: the whole
  * file is refused at its first problem with a ReadLogError carrying the 1-based line (header is
  * line 1) and the column. Required columns may come in any order; `case_<name>` columns become
  * case_attributes; other extra columns are ignored. Fully blank lines are skipped.

@@ -1,5 +1,5 @@
 /**
- * Importing a case set: the whole set is validated first (SPEC Contract 4); only a set with no
+ * Importing a case set: the whole set is validated first (docs/formats.md, "The case set"); only a set with no
  * problem is stored, in one transaction, so a refused set leaves the database exactly as it was.
  */
 import { readCaseSet } from '../io/case-set/read-case-set';

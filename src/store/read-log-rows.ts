@@ -1,4 +1,4 @@
-/** Joins a study's stored reads with its readers, sessions and case set into Contract 1 rows. */
+/** Joins a study's stored reads with its readers, sessions and case set into read-log rows (docs/formats.md). */
 import type { Bit, ReadRow } from '../core/read-log';
 import { getCaseSet } from './case-sets';
 import type { HeedDb } from './db';

@@ -29,7 +29,7 @@ const readSteps = async (chrome: RunningChromium, reader: string, pressed: Map<s
   }
 };
 
-describe('spine: a crossover study on the demo set, durably, exported per Contract 1', () => {
+describe('spine: a crossover study on the demo set, durably, exported as a read log', () => {
   const url = inject('appUrl');
   const browser = useChromiumProfile(url);
 

@@ -1,4 +1,4 @@
-// `heed analyze --json` on a reference log gives the reference values too (SPEC: the app and the
+// `heed analyze --json` on a reference log gives the reference values too (docs/methods.md: the app and the
 // command-line tool give the same numbers from the same log). Reference values as in
 // libraries-conditions.test.ts (R pROC 1.18.0 DeLong SE) and obuchowski-rockette-numpy.test.ts.
 import { spawnSync } from 'node:child_process';

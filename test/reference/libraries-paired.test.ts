@@ -39,7 +39,7 @@ describe.each(['crossover', 'sequential', 'ties', 'noconf'])('log-%s.csv: paired
     near(ad?.p, pd.p, EXACT, `${where} paired DeLong p`);
   });
 
-  it.each(ref.readers.map((r) => [r.reader_id, r.finding, r] as const))('%s %s: sequential counts, RAIR/RSR (Wilson, statsmodels), weight of advice (numpy, by SPEC definition)', (id, finding, want) => {
+  it.each(ref.readers.map((r) => [r.reader_id, r.finding, r] as const))('%s %s: sequential counts, RAIR/RSR (Wilson, statsmodels), weight of advice (numpy, by the definition in docs/methods.md)', (id, finding, want) => {
     const where = `${name} ${id} ${finding}`;
     const got = entry(id, finding)?.sequential;
     const w = want.sequential;

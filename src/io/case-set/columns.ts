@@ -1,4 +1,4 @@
-// The header of cases.csv: which column is which (SPEC Contract 4).
+// The header of cases.csv: which column is which (docs/formats.md, "The case set").
 import type { Problems } from './problems';
 
 export const REQUIRED = ['case_id', 'finding', 'truth', 'image'] as const;

@@ -1,5 +1,5 @@
 /**
- * Reads and validates a whole case set (SPEC Contract 4) from an abstract source: all or
+ * Reads and validates a whole case set (docs/formats.md, "The case set") from an abstract source: all or
  * nothing. On success, the manifest, every image's bytes (type read from the bytes) and a
  * summary; otherwise every problem found (up to limits.problems, in file then row order; the
  * first is the one to show in a one-line message) and their total count. It never throws for bad

@@ -1,4 +1,4 @@
-// Data rows of cases.csv to case records, checking every value (SPEC Contract 4).
+// Data rows of cases.csv to case records, checking every value (docs/formats.md, "The case set").
 import type { CaseFinding, CaseRecord } from '../../core/case-set';
 import type { Columns } from './columns';
 import type { CsvRow } from './csv-rows';

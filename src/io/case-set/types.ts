@@ -1,4 +1,4 @@
-// Shared types of case-set reading (SPEC Contract 4). No Node APIs: a source is abstract.
+// Shared types of case-set reading (docs/formats.md, "The case set"). No Node APIs: a source is abstract.
 
 /** Where a case set's files come from: a folder, a zip, or memory. */
 export type SetSource = {

@@ -1,5 +1,5 @@
 /**
- * A manifest written back out as `cases.csv` (SPEC Contract 4): one row per case and finding,
+ * A manifest written back out as `cases.csv` (docs/formats.md, "The case set"): one row per case and finding,
  * `\n` line ends, RFC 4180 quoting. Columns: the four required ones, then `model_score` and
  * `model_call` when any finding has them, `practice`, then `case_<name>` per attribute.
  * Reading the result back with readCaseSet gives the same manifest.

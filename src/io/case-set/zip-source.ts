@@ -1,5 +1,5 @@
 /**
- * A SetSource over the bytes of a zip (SPEC Contract 4: "a zip of one" folder). Refuses, with the
+ * A SetSource over the bytes of a zip (docs/formats.md, "The case set": a folder, or a zip of one). Refuses, with the
  * entry named: entries whose path is absolute or climbs out of the root with `..`, backslash
  * paths, symbolic links (unix mode in the external attributes), encrypted entries, methods other
  * than stored and deflate, repeated names, ZIP64, and zip bombs (declared sizes are bounded by

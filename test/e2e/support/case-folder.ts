@@ -1,4 +1,4 @@
-/** Writes a small case-set folder (Contract 4) of invented placeholder images, for import tests. */
+/** Writes a small case-set folder (docs/formats.md) of invented placeholder images, for import tests. */
 import { mkdirSync, mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';

@@ -4,9 +4,9 @@ Run from anywhere with Debian's Python (the pyenv python3 on PATH lacks these li
   /usr/bin/python3 test/reference/scripts/simulate_logs.py   # the input logs (committed)
   /usr/bin/python3 test/reference/scripts/make_fixtures.py   # this: ../fixtures/reference-*.json
 It calls Rscript proc_delong.R for the DeLong values (R pROC). Library versions and the exact
-calls are written into each fixture. Definitions follow SPEC Contract 2; where a figure is a
+calls are written into each fixture. Definitions follow docs/methods.md; where a figure is a
 plain count or mean by that definition (sequential counts, weight of advice) it is computed here
-in numpy and marked "numpy, by SPEC definition": that is an independent computation, not a
+in numpy and marked "numpy, by the definition in docs/methods.md": that is an independent computation, not a
 reference library.
 """
 import csv
@@ -45,7 +45,7 @@ CALLS = {
     "kappa_se": "statsmodels.stats.inter_rater.cohens_kappa(table).std_kappa (Fleiss, Cohen & Everitt 1969 large-sample variance, kappa form); cross-checked against the same formula in numpy in the po/pe form (kappa_se_numpy)",
     "mcnemar": "statsmodels.stats.contingency_tables.mcnemar([[0, b], [c, 0]], exact=True).pvalue; also scipy.stats.binomtest(min(b, c), b + c, 0.5).pvalue",
     "median_ms": "numpy.median(total_ms)",
-    "sequential": "numpy, by SPEC definition",
+    "sequential": "numpy, by the definition in docs/methods.md",
     "or": "or_numpy.py: independent re-implementation in numpy from the published formulas (brute-force jackknife), not a reference library; scipy.stats.f / t / norm for p and quantiles",
 }
 
@@ -56,7 +56,7 @@ def read_log(name):
 
 
 def derived(call, conf):
-    c = 100.0 if conf == "" else float(conf)  # no confidence asked: treated as 100 (SPEC engine rule)
+    c = 100.0 if conf == "" else float(conf)  # no confidence asked: treated as 100 (the engine rule, docs/formats.md)
     return 50 + c / 2 if call == 1 else 50 - c / 2
 
 

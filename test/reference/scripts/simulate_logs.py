@@ -1,4 +1,4 @@
-"""Write the small seeded read logs (SPEC Contract 1) that the reference checks run on.
+"""Write the small seeded read logs (docs/formats.md, "The read log") that the reference checks run on.
 
 Fictional scenario, invented data for checks only: readers R1.. read cases from two made-up
 scanners ("Orion-3", "Vega-X") at two made-up sites ("North Annex", "Harbour Clinic").

@@ -1,6 +1,6 @@
 import { classification } from '../../../src/analysis/classification';
 
-// SPEC Contract 2 definitions, counted by hand.
+// docs/methods.md definitions, counted by hand.
 describe('classification', () => {
   it('counts accuracy, sensitivity and specificity', () => {
     const c = classification([1, 0, 1, 1, 0], [1, 1, 0, 1, 0]);

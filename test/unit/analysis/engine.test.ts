@@ -5,7 +5,7 @@ import { aided, makeRead } from './make-read';
 describe('analyzeReads', () => {
   const rows = simulateReadRows({ seed: 5, readers: 4, cases: 40, practiceCases: 3 });
   const report = analyzeReads(rows, { seed: 2, boot: 100 });
-  it('has one entry per reader and finding with the Contract 3 keys', () => {
+  it('has one entry per reader and finding with the documented keys (docs/formats.md)', () => {
     expect(report.readers.map((r) => r.reader_id)).toEqual(['R1', 'R2', 'R3', 'R4']);
     const r = report.readers[0];
     expect(Object.keys(r?.unaided ?? {})).toEqual(expect.arrayContaining(['n', 'accuracy', 'sensitivity', 'specificity', 'auc', 'brier', 'median_ms']));

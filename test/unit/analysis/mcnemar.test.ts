@@ -1,6 +1,6 @@
 import { mcnemar } from '../../../src/analysis/mcnemar';
 
-// SPEC Contract 2 formula, worked by hand: X ~ Binomial(b+c, 1/2).
+// docs/methods.md formula, worked by hand: X ~ Binomial(b+c, 1/2).
 describe('mcnemar', () => {
   it('computes exact p, mid-p and chi-square by hand', () => {
     const t = mcnemar(3, 0); // P(X <= 0) = 1/8

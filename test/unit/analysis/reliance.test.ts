@@ -1,7 +1,7 @@
 import { reliance } from '../../../src/analysis/reliance';
 import { aided } from './make-read';
 
-// SPEC Contract 2 definitions, counted by hand on a small table of aided reads.
+// docs/methods.md definitions, counted by hand on a small table of aided reads.
 describe('reliance', () => {
   // (truth, ai, final): wrong suggestions at rows 3-5, right at 0-2 and 6
   const reads = [

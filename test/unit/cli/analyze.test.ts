@@ -18,7 +18,7 @@ const heed = (...args: string[]) => {
 
 describe('heed analyze', () => {
   const good = write('reads.csv', SAMPLE_CSV);
-  it('prints one JSON object with the Contract 3 keys and numbers', () => {
+  it('prints one JSON object with the documented keys (docs/formats.md) and numbers', () => {
     const r = heed(good, '--json', '--boot', '20', '--seed', '9');
     expect(r.code).toBe(0);
     const report = JSON.parse(r.out);

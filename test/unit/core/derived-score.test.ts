@@ -1,6 +1,6 @@
 import { derivedScore } from '../../../src/core/derived-score';
 
-// SPEC Contract 1 defines the derived score; these are its two branches and both ends.
+// docs/formats.md ("The derived score") defines the derived score; these are its two branches and both ends.
 describe('derivedScore', () => {
   it('maps a present call to 50..100 and an absent call to 0..50', () => {
     expect(derivedScore(1, 80)).toBe(90);

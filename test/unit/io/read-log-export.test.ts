@@ -9,7 +9,7 @@ const row: ReadRow = {
   final_confidence: 55, total_ms: 2040.1, shown_at: '2026-12-01T10:00:00.000Z', case_attributes: { scanner: 'Korvik "B"' },
 };
 
-describe('readLogCsv (SPEC Contract 1)', () => {
+describe('readLogCsv (docs/formats.md, "The read log")', () => {
   it('writes the required columns in order, then case attributes, with \\n line ends and RFC 4180 quoting', () => {
     const csv = readLogCsv([row], ['scanner']);
     expect(csv.includes('\r')).toBe(false);

@@ -19,7 +19,7 @@ describe('parseReadLog', () => {
     expect(rows[0]).toMatchObject({ reader_years: 5, period: 1, assistance: 'none', ai_call: null, ai_score: null, initial_call: null, final_confidence: 80, case_attributes: { scanner: 'Halden' } });
     expect(rows[3]).toMatchObject({ assistance: 'sequential', ai_call: 1, ai_score: 0.72, ai_planted: 1, initial_call: 0, initial_confidence: 60, initial_ms: 2000, total_ms: 3900 });
   });
-  it('round-trips the Contract 1 export', () => {
+  it('round-trips the read-log export', () => {
     const rows = parseReadLog(SAMPLE_CSV);
     expect(parseReadLog(readLogCsv(rows, ['scanner']))).toEqual(rows);
   });

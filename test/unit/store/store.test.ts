@@ -78,7 +78,7 @@ describe('store', () => {
     expect(types).toEqual(['study-created', 'reader-enrolled', 'design-locked', 'session-started', 'initial-committed', 'final-committed', 'initial-committed']);
   });
 
-  it('marks the session complete on its last answer and exports Contract 1 rows', async () => {
+  it('marks the session complete on its last answer and exports read-log rows', async () => {
     const db = freshDb();
     const { manifest, study } = await setUpStudy(db);
     const reader = await enrolReader(db, study.id, { code: 'R07', role: 'resident', years: null }, () => 1);

@@ -1,4 +1,4 @@
-// Every refusal of SPEC Contract 4, each at the right line and column, and the accepted shape.
+// Every refusal listed in docs/formats.md ("The case set"), each at the right line and column, and the accepted shape.
 import { firstProblem, goodCsv, HEADER, png, readWith, withRow } from './fixtures';
 
 describe('readCaseSet accepts a good set', () => {
