@@ -140,7 +140,9 @@ const sectionLines = (s: Sections): string[] => {
 
 const readerBlock = (r: ReaderEntry): string[] => [`reader ${r.reader_id}${r.reader_role ? ` (${r.reader_role})` : ''}, finding ${r.finding}`, ...sectionLines(r)];
 
-const orInterval = (x: ORInterval): string => ` [${num(x.lower)}, ${num(x.upper)}] (${Number.isFinite(x.ddf) ? `${num(x.ddf, 1)} df` : 'normal'})`;
+// An AUC lies in [0,1], so the table cuts the interval there; the JSON keeps the formula's ends.
+const orInterval = (x: ORInterval): string =>
+  ` [${num(Math.max(0, x.lower))}, ${num(Math.min(1, x.upper))}] (random readers, ${Number.isFinite(x.ddf) ? `${num(x.ddf, 1)} df` : 'normal'})`;
 
 const avg = (v: AveragedValue): string => `${num(v.estimate)}${range(v.lower, v.upper)}`;
 
@@ -151,7 +153,7 @@ const groupBlock = (g: GroupFinding, boot: number): string[] => {
   for (const [label, key] of [
     ['accuracy unaided', 'unaided_accuracy'], ['accuracy aided', 'aided_accuracy'], ['accuracy aided - unaided', 'accuracy_difference'],
     ['AUC unaided', 'unaided_auc'], ['AUC aided', 'aided_auc'], ['AUC aided - unaided', 'auc_difference'],
-    ['over-reliance', 'overreliance'], ['under-reliance', 'underreliance'],
+    ['over-reliance (of all wrong suggestions)', 'overreliance'], ['under-reliance (of all right suggestions)', 'underreliance'],
   ] as const) out.push(row(`  ${label}`, avg(ra[key])));
   out.push(row('  Fleiss kappa unaided/aided', `${num(g.fleiss_kappa.unaided.kappa)} / ${num(g.fleiss_kappa.aided.kappa)}`));
   if (g.mrmc !== null) {
