@@ -1,6 +1,8 @@
 import { uniformFloat64 } from 'pure-rand/distribution/uniformFloat64';
 import { xoroshiro128plus } from 'pure-rand/generator/xoroshiro128plus';
+import normalCdf from '@stdlib/stats-base-dists-normal-cdf';
 import { obuchowskiRockette } from '../../../src/analysis/obuchowski-rockette';
+import type { CovarianceMethod } from '../../../src/analysis/or-covariances';
 
 /**
  * Null simulation of fully crossed two-modality studies under the Roe & Metz (1997) model
@@ -27,6 +29,15 @@ export type NullRun = {
   studies: number;
   rejections: { random: number; fixedReaders: number; fixedCases: number };
   rate: { random: number; fixedReaders: number; fixedCases: number };
+  /**
+   * Share of single-treatment 95% intervals (both modalities of every study) that hold the true
+   * reader-averaged AUC: the random-reader interval in scenario 'random' (true AUC
+   * Φ(μ / sqrt(2·(σ²R + σ²τR + σ²C + σ²τC + σ²RC + σ²E))), the reader terms averaged over the
+   * reader population) and the fixed-reader interval in 'fixed-readers' (the mean over the fixed
+   * readers of Φ((μ + ΔRj) / sqrt(2·(σ²C + σ²τC + σ²RC + σ²E))), ΔRj their positive-minus-negative
+   * reader effect); null in 'fixed-cases'. The formulas follow from the model (our derivation).
+   */
+  coverage: number | null;
 };
 
 type Normal = () => number;
@@ -64,7 +75,7 @@ const draws = (normal: Normal, n: number, variance: number): Float64Array => {
  */
 export const nullRun = (options: {
   seed: number; studies: number; readers: number; cases: number;
-  config?: RoeMetzConfig; scenario?: Scenario; alpha?: number;
+  config?: RoeMetzConfig; scenario?: Scenario; alpha?: number; covariance?: CovarianceMethod;
 }): NullRun => {
   const { seed, studies, readers, cases, scenario = 'random', alpha = 0.05 } = options;
   const base = options.config ?? ROE_METZ_LOW;
@@ -78,6 +89,15 @@ export const nullRun = (options: {
   const fixedR = draws(normal, readers * 2, config.r);
   const fixedC = draws(normal, cases, config.c);
   const rejections = { random: 0, fixedReaders: 0, fixedCases: 0 };
+  const caseVar = 2 * (config.c + config.tc + config.rc + config.e);
+  let trueAuc: number | null = null;
+  if (scenario === 'random') trueAuc = normalCdf(config.mu / Math.sqrt(caseVar + 2 * (config.r + config.tr)), 0, 1);
+  if (scenario === 'fixed-readers') {
+    let sum = 0;
+    for (let j = 0; j < readers; j++) sum += normalCdf((config.mu + (fixedR[j * 2 + 1] as number) - (fixedR[j * 2] as number)) / Math.sqrt(caseVar), 0, 1);
+    trueAuc = sum / readers;
+  }
+  let covered = 0;
   for (let s = 0; s < studies; s++) {
     const rEff = scenario === 'fixed-readers' ? fixedR : draws(normal, readers * 2, config.r);
     const cEff = scenario === 'fixed-cases' ? fixedC : draws(normal, cases, config.c);
@@ -94,7 +114,11 @@ export const nullRun = (options: {
       }
       return row;
     }));
-    const res = obuchowskiRockette({ scores, truth });
+    const res = obuchowskiRockette({ scores, truth, covariance: options.covariance ?? 'jackknife' });
+    for (const t of res.treatments) {
+      const interval = scenario === 'random' ? t.random : t.fixedReaders;
+      if (trueAuc !== null && interval.lower <= trueAuc && trueAuc <= interval.upper) covered++;
+    }
     if (res.random.p < alpha) rejections.random++;
     if (res.fixedReaders.p < alpha) rejections.fixedReaders++;
     if (res.fixedCases.p < alpha) rejections.fixedCases++;
@@ -107,5 +131,6 @@ export const nullRun = (options: {
       fixedReaders: rejections.fixedReaders / studies,
       fixedCases: rejections.fixedCases / studies,
     },
+    coverage: trueAuc === null ? null : covered / (2 * studies),
   };
 };
