@@ -42,7 +42,11 @@ export type StoredReader = {
   /** enrolment position, used by the balanced assignment */
   slot: number;
   enrolledAt: string;
+  /** set when the coordinator withdraws the reader (no schema change: not indexed); reads stay, marked withdrawn */
+  withdrawn?: ReaderWithdrawal | null;
 };
+
+export type ReaderWithdrawal = { at: string; reason: string; by: string };
 
 export type { WashoutOverride };
 
