@@ -66,7 +66,7 @@ export const openPeriod = async (
     previousDone = new Date(previous.completedAt);
   }
   const gate = periodGate(now, previousDone, study.design.washoutDays, override);
-  if (!gate.open) return { open: false, message: gate.message };
+  if (!gate.open) return { open: false, message: `Period ${period} of ${reader.code} is not open yet. ${gate.message}` };
   const caseSet = await getCaseSet(db, study.caseSetId);
   const schedule = buildSchedule(study.design, caseSet.manifest, { id: reader.code, index: reader.slot, sequence });
   const planned = schedule.periods[period - 1];

@@ -2,6 +2,8 @@
 import { useCallback, useEffect } from 'react';
 import { listCaseSets } from '../../store/case-sets';
 import { listStudies } from '../../store/studies';
+import { statusOfStudy } from '../../store/study-lifecycle';
+import { STATUS_WORDS } from '../../core/study-status';
 import { unfinishedSessions } from '../../store/progress';
 import { CautionLine } from '../components/CautionLine';
 import { useDb } from '../db-context';
@@ -16,7 +18,9 @@ export const HomeScreen = () => {
   const home = useAsync(useCallback(async () => {
     await ensureDemoCaseSet(db);
     const [caseSets, studies, unfinished] = await Promise.all([listCaseSets(db), listStudies(db), unfinishedSessions(db)]);
-    return { caseSets, studies, unfinished };
+    const statuses = new Map<string, string>();
+    for (const study of studies) statuses.set(study.id, STATUS_WORDS[await statusOfStudy(db, study)]);
+    return { caseSets, studies, unfinished, statuses };
   }, [db]));
 
   useEffect(() => {
@@ -59,7 +63,7 @@ export const HomeScreen = () => {
                 {home.value.studies.map((s) => (
                   <li key={s.id}>
                     <button type="button" className="link" onClick={() => actions.openStudy(s.id)}>{s.name}</button>
-                    <span className="muted"> {s.lockedAt ? 'reading under way (design locked)' : 'draft'}</span>
+                    <span className="muted"> {home.value?.statuses.get(s.id) ?? ''}</span>
                   </li>
                 ))}
               </ul>
