@@ -13,6 +13,10 @@ import { useAsync } from '../use-async';
 import { auditLines, filterAudit, type AuditFilter } from './audit-log-lines';
 
 const SHOWN_MAX = 2000;
+/** The detail in plain "key: value" pairs; internal ids are left to the exported file. */
+const readable = (detail: Record<string, unknown>): string =>
+  Object.entries(detail).filter(([k]) => k !== 'readerId' && k !== 'sessionId')
+    .map(([k, v]) => `${k}: ${typeof v === 'string' ? v : JSON.stringify(v)}`).join(' · ');
 const safeName = (name: string): string => name.replace(/[^A-Za-z0-9._-]+/g, '-').replace(/^-|-$/g, '') || 'study';
 
 export const AuditLogScreen = ({ studyId }: { studyId: string }) => {
@@ -49,18 +53,16 @@ export const AuditLogScreen = ({ studyId }: { studyId: string }) => {
       </header>
       <section className="panel" aria-label="Audit log filters">
         <div className="form-row inline-form">
-          <label>Event type
-            <select value={filter.type} onChange={(e) => setFilter({ ...filter, type: e.target.value })}>
+          <label htmlFor="audit-type">Event type</label>
+            <select id="audit-type" value={filter.type} onChange={(e) => setFilter({ ...filter, type: e.target.value })}>
               <option value="">all types</option>
               {types.map((t) => <option key={t} value={t}>{t}</option>)}
             </select>
-          </label>
-          <label>Reader
-            <select value={filter.reader} onChange={(e) => setFilter({ ...filter, reader: e.target.value })}>
+          <label htmlFor="audit-reader">Reader</label>
+            <select id="audit-reader" value={filter.reader} onChange={(e) => setFilter({ ...filter, reader: e.target.value })}>
               <option value="">all readers</option>
               {readers.map((r) => <option key={r} value={r}>{r}</option>)}
             </select>
-          </label>
           <button type="button" onClick={() => void save('csv')}>Save audit log (CSV)</button>
           <button type="button" onClick={() => void save('jsonl')}>Save audit log (JSON Lines)</button>
         </div>
@@ -74,7 +76,7 @@ export const AuditLogScreen = ({ studyId }: { studyId: string }) => {
             {shown.slice(0, SHOWN_MAX).map((l) => (
               <tr key={l.seq}>
                 <td>{l.seq}</td><td>{l.at.slice(0, 19).replace('T', ' ')}</td><td>{l.type}</td><td>{l.reader ?? '—'}</td>
-                <td className="detail">{JSON.stringify(l.detail)}</td>
+                <td className="detail">{readable(l.detail)}</td>
               </tr>
             ))}
           </tbody>

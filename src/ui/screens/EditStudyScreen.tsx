@@ -62,6 +62,7 @@ export const EditStudyScreen = ({ studyId }: { studyId: string }) => {
           <DesignFields values={values} caseSet={caseSet} onChange={setValues} problems={problems} />
           <FieldProblems problems={problems} field="form" />
           {saveProblem && <p className="problems" role="alert">{saveProblem}</p>}
+          {problems.length > 0 && <p className="problems">Fix the fields marked above, then save.</p>}
           <div className="form-actions">
             <button type="submit" className="primary">Save design</button>
             <button type="button" onClick={() => actions.openStudy(study.id)}>Cancel</button>

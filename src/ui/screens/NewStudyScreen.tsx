@@ -74,6 +74,7 @@ export const NewStudyScreen = () => {
           <DesignFields values={values} caseSet={caseSet} onChange={setValues} problems={problems} />
           <FieldProblems problems={problems} field="form" />
           {saveProblem && <p className="problems" role="alert">{saveProblem}</p>}
+          {problems.length > 0 && <p className="problems">Fix the fields marked above, then create the study.</p>}
           <div className="form-actions">
             <button type="submit" className="primary" disabled={saving}>Create study</button>
             <button type="button" onClick={actions.goHome}>Cancel</button>
