@@ -14,6 +14,8 @@ export type StoredCaseSet = {
   manifest: CaseSetManifest;
   imageCount: number;
   imageBytes: number;
+  /** content fingerprint (content-hash.ts), to refuse importing the same set twice; absent on sets stored before it existed */
+  contentHash?: string;
 };
 
 export type StoredImage = { setId: string; path: string; mime: 'image/png' | 'image/jpeg'; bytes: Uint8Array };

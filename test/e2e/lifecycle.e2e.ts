@@ -45,7 +45,14 @@ describe('a study’s whole life', () => {
     const saved = async (act: () => Promise<void>) => { const n = await signalCount(page, 'saved'); await act(); await waitForSignal(page, 'saved', n); };
 
     // two sets: one to keep (renamed), one to delete
-    await importFolder(writeCaseFolder(4, 0).dir);
+    const harbour = writeCaseFolder(4, 0);
+    await importFolder(harbour.dir);
+    // the same folder again is refused, pointing to the stored set
+    const [again] = await Promise.all([page.waitForEvent('filechooser'), page.getByRole('button', { name: 'Import a folder…' }).click()]);
+    await again.setFiles(harbour.dir);
+    await sets.getByRole('alert').filter({ hasText: 'was not imported' }).waitFor();
+    expect(await sets.getByRole('alert').textContent()).toMatch(/same cases and images as the stored case set “harbour-clinic-set”/);
+    expect(await sets.getByRole('cell', { name: 'harbour-clinic-set', exact: true }).count()).toBe(1);
     await saved(() => page.getByRole('button', { name: 'Rename case set harbour-clinic-set' }).click().then(async () => {
       await page.getByLabel('New name for harbour-clinic-set').fill('Harbour March');
       await page.getByRole('button', { name: 'Save name' }).click();
