@@ -6,6 +6,7 @@ import { InputError } from '../../store/input-error';
 import { useDb } from '../db-context';
 import { actions } from '../state/app-state';
 import { when } from '../../core/washout';
+import { periodWords } from '../../core/design-summary';
 import { ReaderActions } from './ReaderActions';
 import type { PeriodProgress, ReaderProgress } from './study-progress';
 
@@ -36,11 +37,12 @@ export const ReaderTable = ({ study, progress, onChanged }: Props) => {
   };
 
   const cell = (row: ReaderProgress, p: PeriodProgress) => {
-    const assistance = study.design.sequences[row.reader.sequenceIndex]?.periods[p.period - 1] ?? 'none';
+    const sequence = study.design.sequences[row.reader.sequenceIndex];
+    const assistance = sequence ? periodWords(sequence, p.period - 1, study.design.blocks, true) : '?';
     const label = `${row.reader.code} period ${p.period}`;
     const openedEarly = p.session?.override ? <span className="warning"> opened early by {p.session.override.by}: {p.session.override.reason}</span> : null;
     if (p.session?.completedAt) return <span>{p.answered}/{p.total} done{openedEarly}</span>;
-    const what = <span className="muted">{assistance === 'none' ? 'unaided' : assistance} · {p.session ? `${p.answered}/${p.total}` : 'not started'}</span>;
+    const what = <span className="muted">{assistance} · {p.session ? `${p.answered}/${p.total}` : 'not started'}</span>;
     if (row.reader.withdrawn) return <span className="cell-actions">{what}</span>;
     const previousDone = p.period === 1 || Boolean(row.periods[p.period - 2]?.session?.completedAt);
     const inWashout = p.inWashout;
