@@ -36,6 +36,15 @@ describe('a study’s whole life', () => {
     const home = homePage(page);
     const study = studyPage(page);
     await home.waitUntilReady();
+    // the page names its icon, and the icon is served (it was a 404 on every load)
+    const icon = await page.evaluate(async () => {
+      const link = document.querySelector<HTMLLinkElement>('link[rel=icon]');
+      if (!link) return null;
+      const response = await fetch(link.href);
+      return { status: response.status, type: response.headers.get('content-type'), body: await response.text() };
+    });
+    expect(icon).toMatchObject({ status: 200, type: 'image/svg+xml' });
+    expect(icon?.body).toMatch(/^<svg /);
     const sets = page.getByRole('region', { name: 'Case sets' });
     const importFolder = async (dir: string) => {
       const [chooser] = await Promise.all([page.waitForEvent('filechooser'), page.getByRole('button', { name: 'Import a folder…' }).click()]);
