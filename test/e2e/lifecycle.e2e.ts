@@ -45,6 +45,11 @@ describe('a study’s whole life', () => {
     });
     expect(icon).toMatchObject({ status: 200, type: 'image/svg+xml' });
     expect(icon?.body).toMatch(/^<svg /);
+    // persistent storage was asked for and its answer is shown, with the space used
+    const persistence = page.getByLabel('Persistent storage');
+    await persistence.filter({ hasText: /Persistent storage: (granted|not granted)/ }).waitFor();
+    expect(await persistence.textContent()).toMatch(/Heed uses [\d.]+ MB of the [\d.]+ MB the browser allows/);
+    expect(await page.getByRole('region', { name: 'Where the data is' }).textContent()).toMatch(/Data of this window: this browser’s own profile, for the address http:\/\/127\.0\.0\.1:\d+ only/);
     const sets = page.getByRole('region', { name: 'Case sets' });
     const importFolder = async (dir: string) => {
       const [chooser] = await Promise.all([page.waitForEvent('filechooser'), page.getByRole('button', { name: 'Import a folder…' }).click()]);

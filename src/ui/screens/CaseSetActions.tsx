@@ -23,6 +23,7 @@ export const CaseSetActions = ({ set, onChanged }: { set: StoredCaseSet; onChang
       signal('saved', { caseSet: set.id });
     } catch (e) {
       setProblem(e instanceof InputError ? e.message : `Not changed: ${String(e)}`);
+      if (mode.kind === 'confirm-delete') setMode({ kind: 'idle' }); // refused: nothing left to confirm
       signal('saved', { refused: true });
     }
   };

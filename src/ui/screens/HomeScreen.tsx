@@ -12,6 +12,7 @@ import { signal } from '../signals';
 import { actions } from '../state/app-state';
 import { useAsync } from '../use-async';
 import { CaseSetList } from './CaseSetList';
+import { DataPanel } from './DataPanel';
 
 export const HomeScreen = () => {
   const db = useDb();
@@ -70,6 +71,7 @@ export const HomeScreen = () => {
             )}
           </section>
           <CaseSetList caseSets={home.value.caseSets} onChanged={home.reload} />
+          <DataPanel />
         </>
       )}
     </main>
