@@ -9,7 +9,7 @@ import { homedir } from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import {
-  DEFAULT_PORT, chooseMode, chromiumArgs, chromiumProfileDir, electronBinary, findChromium, hasDisplay, parsePort,
+  DEFAULT_PORT, appUrl, chooseMode, chromiumArgs, chromiumProfileDir, electronBinary, findChromium, hasDisplay, parsePort,
 } from './lib/launch-plan.mjs';
 import { ELECTRON, RENDERER, targetIsStale } from './lib/freshness.mjs';
 import { startStaticServer } from './lib/static-server.mjs';
@@ -118,14 +118,14 @@ if (choice.mode === 'electron') {
     process.exit(code);
   };
   if (choice.mode === 'serve') {
-    say('open that address in Chromium; press Ctrl+C to stop');
+    say(`open ${appUrl(server.url, 'serve', null)} in Chromium; press Ctrl+C to stop`);
     process.on('SIGINT', () => shutdown(0));
     process.on('SIGTERM', () => shutdown(0));
   } else {
     const profileDir = chromiumProfileDir(env, homedir());
     mkdirSync(profileDir, { recursive: true });
     const isRoot = typeof process.getuid === 'function' && process.getuid() === 0;
-    const args = chromiumArgs({ url: server.url, profileDir, isRoot, debugPort: debugPort.port });
+    const args = chromiumArgs({ url: appUrl(server.url, 'chromium', profileDir), profileDir, isRoot, debugPort: debugPort.port });
     say(`opening a Chromium app window (profile ${profileDir})`);
     const verbose = Boolean(env.HEED_VERBOSE);
     const child = spawn(chromium, args, { stdio: ['ignore', verbose ? 'inherit' : 'ignore', verbose ? 'inherit' : 'pipe'], env });

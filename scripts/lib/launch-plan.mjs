@@ -51,6 +51,19 @@ export const parsePort = (name, value) => {
 };
 
 /**
+ * The address the launcher opens: the served root with the launch mode (and, for the Chromium
+ * window, its profile folder) in the query string, so the start screen can say where this
+ * window's data lives. The query does not change the origin, so the database is the same.
+ * @param {string} url @param {'chromium' | 'serve'} mode @param {string | null} profileDir
+ */
+export const appUrl = (url, mode, profileDir) => {
+  const address = new URL(url);
+  address.searchParams.set('mode', mode);
+  if (profileDir !== null) address.searchParams.set('profile', profileDir);
+  return address.href;
+};
+
+/**
  * The persistent Chromium profile: <config>/heed/chromium-profile where <config> is
  * $XDG_CONFIG_HOME when it is an absolute path (the XDG spec says relative values are ignored),
  * else ~/.config. The profile keeps the IndexedDB database between launches.

@@ -1,7 +1,7 @@
 // `heed check-cases PATH`: validate a case set (folder or zip) without importing it.
 import { readCaseSet } from '../io/case-set/read-case-set';
 import { CliError } from './cli-error';
-import { problemLine, summaryLines } from './format-case-set';
+import { refusalLines, summaryLines } from './format-case-set';
 import { nodeSetSource } from './node-set-source';
 
 const NOTICE = 'Heed is a research and training tool, not a medical device.';
@@ -16,10 +16,7 @@ export const runCheckCases = async (args: string[]): Promise<number> => {
   });
   const result = await readCaseSet(source);
   if (!result.ok) {
-    const [first] = result.problems;
-    console.error(first ? problemLine(source.label, first) : `${path}: the case set was refused`);
-    const more = result.total - 1;
-    if (more > 0) console.error(`(${more} more problem${more === 1 ? '' : 's'}; nothing was imported)`);
+    for (const line of refusalLines(source.label, result.problems, result.total)) console.error(line);
     return 2;
   }
   for (const line of summaryLines(result.summary)) console.log(line);

@@ -29,3 +29,13 @@ export const problemLine = (label: string, problem: CaseSetProblem): string => {
   const column = problem.column === null ? '' : ` column ${problem.column}:`;
   return `${file}${row}:${column} ${problem.message}`;
 };
+
+/** Every problem of a refused set, one line each, then how many there were (as the app lists them). */
+export const refusalLines = (label: string, problems: readonly CaseSetProblem[], total: number): string[] => {
+  const lines = problems.map((p) => problemLine(label, p));
+  if (lines.length === 0) lines.push(`${label}: the case set was refused`);
+  const unlisted = total - problems.length;
+  if (unlisted > 0) lines.push(`... and ${unlisted} more problem${unlisted === 1 ? '' : 's'} of the same kinds (the first ${problems.length} are listed)`);
+  lines.push(`${total} problem${total === 1 ? '' : 's'}; the case set is not valid and nothing was imported.`);
+  return lines;
+};

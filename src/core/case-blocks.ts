@@ -11,7 +11,7 @@
  * Example: 10 cases (4 positive), 2 blocks -> two blocks of 5, each with 2 positives.
  */
 import type { CaseSetManifest } from './case-set';
-import type { StudyDesign } from './design';
+import type { Assistance, Sequence, StudyDesign } from './design';
 import { createRng } from './rng';
 
 /** Block index (0-based) of every main case; all 0 when design.blocks is 1. */
@@ -35,4 +35,14 @@ export const caseBlocks = (manifest: CaseSetManifest, design: StudyDesign): Map<
     }
   }
   return blocks;
+};
+
+/**
+ * The assistance each block gets in one period (0-based) of a sequence: block b reads under the
+ * sequence's entry ((period + b) mod P), the rule buildSchedule applies to every main case. With one
+ * block this is the period's own entry. Example: UA with 2 blocks, period 0 -> ['none', 'sequential'].
+ */
+export const blockAssistance = (sequence: Sequence, period: number, blocks: number): Assistance[] => {
+  const p = sequence.periods.length;
+  return Array.from({ length: Math.max(1, blocks) }, (_, b) => sequence.periods[(((period + b) % p) + p) % p] ?? 'none');
 };

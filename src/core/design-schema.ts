@@ -61,7 +61,7 @@ export const studyDesignSchema = z
       stratifyBy: z.string().trim().min(1, { error: 'stratifyBy cannot be empty (use null for none)' }).nullable(),
     }),
     blocks: wholeAtLeast(1, 'the number of blocks'),
-    breakEvery: wholeAtLeast(1, 'the break interval').nullable(),
+    breakEvery: wholeAtLeast(1, 'the number of cases between breaks').nullable(),
     seed: z
       .number({ error: 'the seed must be a number' })
       .int({ error: 'the seed must be a whole number' })
@@ -108,6 +108,12 @@ export const issuesToProblems = (issues: readonly z.core.$ZodIssue[], prefix = '
     const where = formatPath([...(prefix === '' ? [] : [prefix]), ...issue.path]);
     return where === '' ? issue.message : `${where}: ${issue.message}`;
   });
+
+/** Each problem with its path, for forms that show a problem beside its own field. */
+export const designIssues = (value: unknown): { path: PropertyKey[]; message: string }[] => {
+  const result = studyDesignSchema.safeParse(value);
+  return result.success ? [] : result.error.issues.map((issue) => ({ path: [...issue.path], message: issue.message }));
+};
 
 export type DesignParse = { ok: true; design: StudyDesign } | { ok: false; problems: string[] };
 

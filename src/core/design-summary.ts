@@ -6,12 +6,25 @@
  *   { label: 'Findings', value: 'nodule' }.
  */
 import type { CaseSetManifest } from './case-set';
-import type { PlantSpec, StudyDesign } from './design';
+import type { PlantSpec, Sequence, StudyDesign } from './design';
 import type { SuggestionTable } from './suggestions';
+import { blockAssistance } from './case-blocks';
 
 export type SummaryLine = { label: string; value: string };
 
 const ASSISTANCE_WORDS = { none: 'unaided', concurrent: 'suggestion shown from the start', sequential: 'own call first, then suggestion' } as const;
+const SHORT_WORDS = { none: 'unaided', concurrent: 'concurrent', sequential: 'sequential' } as const;
+
+/**
+ * What one period (0-based) of a sequence gets, in words: its assistance, or with blocks the
+ * assistance of each block ("block 1 unaided, block 2 sequential"), so a label never says
+ * "unaided" for a period in which half the cases show a suggestion.
+ */
+export const periodWords = (sequence: Sequence, period: number, blocks: number, short = false): string => {
+  const words = short ? SHORT_WORDS : ASSISTANCE_WORDS;
+  const each = blockAssistance(sequence, period, blocks);
+  return each.length === 1 ? words[each[0] ?? 'none'] : each.map((a, b) => `block ${b + 1} ${words[a]}`).join(', ');
+};
 
 const plantWords = (spec: PlantSpec): string =>
   spec.mode === 'count' ? `${spec.value} per finding` : `${(spec.value * 100).toFixed(1).replace(/\.0$/, '')}% of eligible case-findings`;
@@ -28,7 +41,7 @@ export const designSummary = (
     { label: 'Periods', value: String(periods) },
     ...design.sequences.map((s) => ({
       label: `Sequence ${s.label}`,
-      value: s.periods.map((a, i) => `period ${i + 1}: ${ASSISTANCE_WORDS[a]}`).join('; '),
+      value: s.periods.map((_, i) => `period ${i + 1}: ${periodWords(s, i, design.blocks)}`).join('; '),
     })),
     { label: 'Washout', value: `${design.washoutDays} day${design.washoutDays === 1 ? '' : 's'} between periods` },
     { label: 'Model threshold', value: `score ${design.threshold} or more counts as "present" when the case set gives no call` },

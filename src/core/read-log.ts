@@ -43,4 +43,6 @@ export type ReadRow = {
   shown_at: string;
   /** case attributes, keyed without the `case_` prefix (e.g. { scanner: 'B' }) */
   case_attributes: Record<string, string>;
+  /** 1 when the reader was withdrawn from the study (their reads stay in the log) */
+  withdrawn?: Bit;
 };

@@ -16,7 +16,10 @@ export type PeriodGate =
 
 const DAY_MS = 24 * 60 * 60 * 1000;
 
-const when = (d: Date): string => `${d.toISOString().slice(0, 16).replace('T', ' ')} UTC`;
+/** When the period after one completed at `previousCompletedAt` opens. */
+export const periodOpensAt = (previousCompletedAt: Date, washoutDays: number): Date => new Date(previousCompletedAt.getTime() + washoutDays * DAY_MS);
+
+export const when = (d: Date): string => `${d.toISOString().slice(0, 16).replace('T', ' ')} UTC`;
 
 export const periodGate = (
   now: Date,
@@ -28,10 +31,10 @@ export const periodGate = (
   if (Number.isNaN(now.getTime())) throw new RangeError('the current time is not a valid date');
   if (previousPeriodCompletedAt === null) return { open: true };
   if (Number.isNaN(previousPeriodCompletedAt.getTime())) throw new RangeError('the completion time of the previous period is not a valid date');
-  const opensAt = new Date(previousPeriodCompletedAt.getTime() + washoutDays * DAY_MS);
+  const opensAt = periodOpensAt(previousPeriodCompletedAt, washoutDays);
   if (now.getTime() >= opensAt.getTime()) return { open: true };
   const daysLeft = Math.ceil((opensAt.getTime() - now.getTime()) / DAY_MS);
-  const wait = `The next period opens at ${when(opensAt)}, after the ${washoutDays}-day washout (${daysLeft} day${daysLeft === 1 ? '' : 's'} left).`;
+  const wait = `It opens at ${when(opensAt)}, after the ${washoutDays}-day washout (${daysLeft} day${daysLeft === 1 ? '' : 's'} left).`;
   if (override === null) return { open: false, opensAt, message: wait };
   if (override.reason.trim() === '') {
     return { open: false, opensAt, message: `${wait} Opening it early needs a reason; none was given.` };

@@ -18,7 +18,7 @@ export const unfinishedSessions = async (db: HeedDb): Promise<Unfinished[]> => {
   for (const session of open) {
     const study = await db.studies.get(session.studyId);
     const reader = await db.readers.get(session.readerId);
-    if (!study || !reader) continue;
+    if (!study || !reader || reader.withdrawn) continue;
     result.push({ session, studyName: study.name, readerCode: reader.code, answeredCases: await answeredCases(db, session, study.design.findings.length) });
   }
   return result.sort((a, b) => a.session.startedAt.localeCompare(b.session.startedAt));

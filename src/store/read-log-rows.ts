@@ -50,6 +50,7 @@ export const studyReadRows = async (db: HeedDb, studyId: string): Promise<ReadRo
       total_ms: read.final.ms,
       shown_at: read.shownAt,
       case_attributes: caseRecord.attributes,
+      withdrawn: reader.withdrawn ? 1 : 0,
     });
   }
   const findingOrder = new Map(study.design.findings.map((f, i) => [f, i]));

@@ -31,7 +31,10 @@ export const enrolReader = async (db: HeedDb, studyId: string, input: NewReader,
     if (existing.some((r) => r.code.toLowerCase() === code.toLowerCase())) {
       throw new InputError(`Reader code ${code} is already enrolled in this study.`);
     }
-    const slot = existing.length;
+    // the lowest free slot: a reader deleted before starting leaves a gap the next one fills, keeping the blocks balanced
+    const taken = new Set(existing.map((r) => r.slot));
+    let slot = 0;
+    while (taken.has(slot)) slot++;
     const reader: StoredReader = {
       id: crypto.randomUUID(),
       studyId,

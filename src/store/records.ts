@@ -14,6 +14,8 @@ export type StoredCaseSet = {
   manifest: CaseSetManifest;
   imageCount: number;
   imageBytes: number;
+  /** content fingerprint (content-hash.ts), to refuse importing the same set twice; absent on sets stored before it existed */
+  contentHash?: string;
 };
 
 export type StoredImage = { setId: string; path: string; mime: 'image/png' | 'image/jpeg'; bytes: Uint8Array };
@@ -42,7 +44,11 @@ export type StoredReader = {
   /** enrolment position, used by the balanced assignment */
   slot: number;
   enrolledAt: string;
+  /** set when the coordinator withdraws the reader (no schema change: not indexed); reads stay, marked withdrawn */
+  withdrawn?: ReaderWithdrawal | null;
 };
+
+export type ReaderWithdrawal = { at: string; reason: string; by: string };
 
 export type { WashoutOverride };
 

@@ -28,12 +28,17 @@ export const createStudy = async (db: HeedDb, input: NewStudy): Promise<StoredSt
 };
 
 /** Replaces the design (and the suggestions derived from it); refused once the study is locked. */
-export const updateStudyDesign = async (db: HeedDb, studyId: string, design: StudyDesign, suggestions: SuggestionRow[]): Promise<StoredStudy> =>
-  db.transaction('rw', db.studies, db.events, async () => {
+export const updateStudyDesign = async (
+  db: HeedDb, studyId: string, design: StudyDesign, suggestions: SuggestionRow[], chooseSequence?: (slot: number) => number,
+): Promise<StoredStudy> =>
+  db.transaction('rw', db.studies, db.readers, db.events, async () => {
     const study = await getStudy(db, studyId);
-    if (study.lockedAt) throw new InputError(`The design of "${study.name}" is locked: reading started on ${study.lockedAt}.`);
+    if (study.lockedAt) throw new InputError(`The design of “${study.name}” is locked: reading started on ${study.lockedAt.slice(0, 16).replace('T', ' ')} UTC.`);
     const updated = { ...study, design, suggestions };
     await db.studies.put(updated);
+    if (chooseSequence) {
+      await db.readers.where('studyId').equals(studyId).modify((reader) => { reader.sequenceIndex = chooseSequence(reader.slot); });
+    }
     await appendEvent(db, studyId, 'design-changed', { seed: design.seed });
     return updated;
   });

@@ -31,9 +31,10 @@ export const createStudyFromDesign = async (db: HeedDb, name: string, caseSetId:
   return createStudy(db, { name, caseSetId, ...checked });
 };
 
+/** Edits a draft's design; readers already enrolled are reassigned to the new design's sequences by their slot. */
 export const changeStudyDesign = async (db: HeedDb, study: StoredStudy, design: StudyDesign): Promise<StoredStudy> => {
   const checked = await checkedDesign(db, study.caseSetId, design);
-  return updateStudyDesign(db, study.id, checked.design, checked.suggestions);
+  return updateStudyDesign(db, study.id, checked.design, checked.suggestions, (slot) => sequenceIndexForSlot(checked.design, slot));
 };
 
 export const enrolInStudy = (db: HeedDb, study: StoredStudy, input: NewReader): Promise<StoredReader> =>
@@ -51,6 +52,8 @@ export type PeriodOpening =
 export const openPeriod = async (
   db: HeedDb, study: StoredStudy, reader: StoredReader, period: number, override: WashoutOverride | null, now: Date = new Date(),
 ): Promise<PeriodOpening> => {
+  const current = await db.readers.get(reader.id);
+  if (current?.withdrawn) return { open: false, message: `${current.code} was withdrawn (${current.withdrawn.reason}); no period opens for a withdrawn reader.` };
   const existing = await getSession(db, sessionId(reader.id, period));
   if (existing) return { open: true, session: existing };
   const sequence = study.design.sequences[reader.sequenceIndex];
@@ -63,7 +66,7 @@ export const openPeriod = async (
     previousDone = new Date(previous.completedAt);
   }
   const gate = periodGate(now, previousDone, study.design.washoutDays, override);
-  if (!gate.open) return { open: false, message: gate.message };
+  if (!gate.open) return { open: false, message: `Period ${period} of ${reader.code} is not open yet. ${gate.message}` };
   const caseSet = await getCaseSet(db, study.caseSetId);
   const schedule = buildSchedule(study.design, caseSet.manifest, { id: reader.code, index: reader.slot, sequence });
   const planned = schedule.periods[period - 1];

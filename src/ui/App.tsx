@@ -4,6 +4,8 @@ import { StudyScreen } from './screens/StudyScreen';
 import { ReadingScreen } from './reading/ReadingScreen';
 import { ResultsScreen } from './screens/ResultsScreen';
 import { HandoverScreen } from './screens/HandoverScreen';
+import { EditStudyScreen } from './screens/EditStudyScreen';
+import { AuditLogScreen } from './screens/AuditLogScreen';
 import { actions, useAppState } from './state/app-state';
 
 export const App = () => {
@@ -22,6 +24,8 @@ export const App = () => {
       {screen.name === 'results' && <ResultsScreen studyId={screen.studyId} />}
       {screen.name === 'read' && <ReadingScreen studyId={screen.studyId} sessionId={screen.sessionId} notice={notice} />}
       {screen.name === 'handover' && <HandoverScreen studyId={screen.studyId} />}
+      {screen.name === 'edit-study' && <EditStudyScreen studyId={screen.studyId} />}
+      {screen.name === 'audit' && <AuditLogScreen studyId={screen.studyId} />}
     </>
   );
 };

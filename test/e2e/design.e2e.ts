@@ -66,9 +66,11 @@ describe('design: own case set, planted errors, caution notice, crossover with w
     }
     // period 2 is behind the 14-day washout: refused, then opened early with a logged reason
     for (const code of ['H1', 'H2']) {
-      await page.getByRole('button', { name: `Start ${code} period 2` }).click();
+      // Start is disabled with the reason; the coordinator opens the period early instead
+      expect(await page.getByRole('button', { name: `Start ${code} period 2` }).isDisabled()).toBe(true);
+      await page.getByRole('button', { name: `Open ${code} period 2 early` }).click();
       await page.getByRole('group', { name: 'Washout not over' }).waitFor();
-      expect(await page.getByRole('group', { name: 'Washout not over' }).textContent()).toMatch(/14-day washout/);
+      expect(await page.getByRole('group', { name: 'Washout not over' }).textContent()).toMatch(new RegExp(`Period 2 of ${code} is not open yet.*14-day washout`));
       const before = await page.evaluate(() => Number(document.body.getAttribute('data-heed-case-painted') ?? 0));
       await study.openEarly('training block ends this week', 'QO-1');
       await readingPage(page).waitForCase(before);

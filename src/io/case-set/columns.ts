@@ -16,8 +16,32 @@ export type Columns = {
   width: number;
 };
 
+const OTHER_SEPARATORS = [[';', 'semicolons'], ['\t', 'tabs'], ['|', 'vertical bars']] as const;
+
+/**
+ * A header read as one cell that splits on another separator into names that include the required
+ * ones: a file saved with semicolons (a common spreadsheet export where the decimal mark is a comma)
+ * or tabs. Said in one message rather than one "missing" line per required column.
+ */
+const otherSeparator = (cells: string[]): string | null => {
+  if (cells.length !== 1) return null;
+  const header = cells[0] ?? '';
+  for (const [separator, words] of OTHER_SEPARATORS) {
+    const names = header.split(separator).map((c) => c.trim().toLowerCase());
+    if (names.length > 1 && REQUIRED.some((name) => names.includes(name))) {
+      return `the columns are separated by ${words}, not commas; save cases.csv with commas between columns (CSV, comma-delimited), with a full stop as the decimal mark`;
+    }
+  }
+  return null;
+};
+
 /** Reads the header; returns null (with problems added) when the file cannot be used at all. */
 export const readColumns = (file: string, cells: string[], problems: Problems): Columns | null => {
+  const separator = otherSeparator(cells);
+  if (separator !== null) {
+    problems.add(file, 1, null, separator);
+    return null;
+  }
   const index: Record<string, number> = {};
   const attributes: Columns['attributes'] = [];
   const ignored: string[] = [];

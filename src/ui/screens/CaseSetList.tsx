@@ -1,5 +1,6 @@
 /** The case sets stored on this workstation, with a short summary of each. */
 import type { StoredCaseSet } from '../../store/records';
+import { CaseSetActions } from './CaseSetActions';
 import { ImportCaseSet } from './ImportCaseSet';
 
 type Props = { caseSets: StoredCaseSet[]; onChanged: () => void };
@@ -16,7 +17,7 @@ export const CaseSetList = ({ caseSets, onChanged }: Props) => (
       <h2 id="sets-head">Case sets</h2>
     </div>
     <table className="grid">
-      <thead><tr><th scope="col">Name</th><th scope="col">Cases</th><th scope="col">Practice</th><th scope="col">Findings (prevalence)</th><th scope="col">Source</th></tr></thead>
+      <thead><tr><th scope="col">Name</th><th scope="col">Cases</th><th scope="col">Practice</th><th scope="col">Findings (prevalence)</th><th scope="col">Source</th><th scope="col">Actions</th></tr></thead>
       <tbody>
         {caseSets.map((set) => (
           <tr key={set.id}>
@@ -25,6 +26,7 @@ export const CaseSetList = ({ caseSets, onChanged }: Props) => (
             <td>{set.manifest.cases.filter((c) => c.practice).length}</td>
             <td>{set.manifest.findings.map((f) => `${f} (${prevalence(set, f)})`).join(', ')}</td>
             <td>{set.source === 'demo' ? 'demo (generated placeholders)' : 'imported'}</td>
+            <td>{set.source === 'demo' ? <span className="muted">generated at launch</span> : <CaseSetActions set={set} onChanged={onChanged} />}</td>
           </tr>
         ))}
       </tbody>

@@ -2,6 +2,8 @@
 import { useCallback, useEffect } from 'react';
 import { listCaseSets } from '../../store/case-sets';
 import { listStudies } from '../../store/studies';
+import { statusOfStudy } from '../../store/study-lifecycle';
+import { STATUS_WORDS } from '../../core/study-status';
 import { unfinishedSessions } from '../../store/progress';
 import { CautionLine } from '../components/CautionLine';
 import { useDb } from '../db-context';
@@ -10,13 +12,16 @@ import { signal } from '../signals';
 import { actions } from '../state/app-state';
 import { useAsync } from '../use-async';
 import { CaseSetList } from './CaseSetList';
+import { DataPanel } from './DataPanel';
 
 export const HomeScreen = () => {
   const db = useDb();
   const home = useAsync(useCallback(async () => {
     await ensureDemoCaseSet(db);
     const [caseSets, studies, unfinished] = await Promise.all([listCaseSets(db), listStudies(db), unfinishedSessions(db)]);
-    return { caseSets, studies, unfinished };
+    const statuses = new Map<string, string>();
+    for (const study of studies) statuses.set(study.id, STATUS_WORDS[await statusOfStudy(db, study)]);
+    return { caseSets, studies, unfinished, statuses };
   }, [db]));
 
   useEffect(() => {
@@ -59,13 +64,14 @@ export const HomeScreen = () => {
                 {home.value.studies.map((s) => (
                   <li key={s.id}>
                     <button type="button" className="link" onClick={() => actions.openStudy(s.id)}>{s.name}</button>
-                    <span className="muted"> {s.lockedAt ? 'reading under way (design locked)' : 'draft'}</span>
+                    <span className="muted"> {home.value?.statuses.get(s.id) ?? ''}</span>
                   </li>
                 ))}
               </ul>
             )}
           </section>
           <CaseSetList caseSets={home.value.caseSets} onChanged={home.reload} />
+          <DataPanel />
         </>
       )}
     </main>

@@ -5,6 +5,9 @@ import { openPeriod } from '../../store/study-service';
 import { InputError } from '../../store/input-error';
 import { useDb } from '../db-context';
 import { actions } from '../state/app-state';
+import { when } from '../../core/washout';
+import { periodWords } from '../../core/design-summary';
+import { ReaderActions } from './ReaderActions';
 import type { PeriodProgress, ReaderProgress } from './study-progress';
 
 type Props = { study: StoredStudy; progress: ReaderProgress[]; onChanged: () => void };
@@ -34,17 +37,31 @@ export const ReaderTable = ({ study, progress, onChanged }: Props) => {
   };
 
   const cell = (row: ReaderProgress, p: PeriodProgress) => {
-    const assistance = study.design.sequences[row.reader.sequenceIndex]?.periods[p.period - 1] ?? 'none';
+    const sequence = study.design.sequences[row.reader.sequenceIndex];
+    const assistance = sequence ? periodWords(sequence, p.period - 1, study.design.blocks, true) : '?';
     const label = `${row.reader.code} period ${p.period}`;
     const openedEarly = p.session?.override ? <span className="warning"> opened early by {p.session.override.by}: {p.session.override.reason}</span> : null;
     if (p.session?.completedAt) return <span>{p.answered}/{p.total} done{openedEarly}</span>;
-    const previousDone = p.period === 1 || row.periods[p.period - 2]?.session?.completedAt;
+    const what = <span className="muted">{assistance} · {p.session ? `${p.answered}/${p.total}` : 'not started'}</span>;
+    if (row.reader.withdrawn) return <span className="cell-actions">{what}</span>;
+    const previousDone = p.period === 1 || Boolean(row.periods[p.period - 2]?.session?.completedAt);
+    const inWashout = p.inWashout;
+    const why = !previousDone ? `opens after period ${p.period - 1} is complete` : inWashout && p.opensAt ? `opens ${when(p.opensAt)} (washout)` : null;
+    const whyId = `why-${row.reader.id}-${p.period}`;
     return (
       <span className="cell-actions">
-        <span className="muted">{assistance === 'none' ? 'unaided' : assistance} · {p.session ? `${p.answered}/${p.total}` : 'not started'}</span>{openedEarly}
-        <button type="button" disabled={!previousDone} onClick={() => void open(row, p.period, false)} aria-label={`${p.session ? 'Resume' : 'Start'} ${label}`}>
+        {what}{openedEarly}
+        {why && <span id={whyId} className="muted"> · {why}</span>}
+        <button type="button" disabled={why !== null} aria-describedby={why ? whyId : undefined}
+          onClick={() => void open(row, p.period, false)} aria-label={`${p.session ? 'Resume' : 'Start'} ${label}`}>
           {p.session ? 'Resume' : 'Start'}
         </button>
+        {inWashout && p.opensAt && (
+          <button type="button" aria-label={`Open ${label} early`}
+            onClick={() => { setProblem(null); setEarly({ readerId: row.reader.id, period: p.period, message: `Period ${p.period} of ${row.reader.code} is not open yet. It opens at ${when(p.opensAt ?? new Date())}, after the ${study.design.washoutDays}-day washout.` }); }}>
+            Open early…
+          </button>
+        )}
       </span>
     );
   };
@@ -56,13 +73,14 @@ export const ReaderTable = ({ study, progress, onChanged }: Props) => {
         <table className="grid">
           <thead>
             <tr><th scope="col">Code</th><th scope="col">Role</th><th scope="col">Years</th><th scope="col">Sequence</th>
-              {Array.from({ length: periodCount }, (_, i) => <th scope="col" key={i}>Period {i + 1}</th>)}</tr>
+              {Array.from({ length: periodCount }, (_, i) => <th scope="col" key={i}>Period {i + 1}</th>)}<th scope="col">Changes</th></tr>
           </thead>
           <tbody>
             {progress.map((row) => (
               <tr key={row.reader.id}>
                 <td>{row.reader.code}</td><td>{row.reader.role}</td><td>{row.reader.years ?? '—'}</td><td>{row.sequenceLabel}</td>
                 {row.periods.map((p) => <td key={p.period}>{cell(row, p)}</td>)}
+                <td><ReaderActions reader={row.reader} started={row.periods.some((p) => p.session !== null)} onChanged={onChanged} /></td>
               </tr>
             ))}
           </tbody>

@@ -11,6 +11,7 @@ import { EnrolForm } from './EnrolForm';
 import { ExportPanel } from './ExportPanel';
 import { ReaderTable } from './ReaderTable';
 import { loadStudyProgress } from './study-progress';
+import { StudyActions } from './StudyActions';
 
 export const StudyScreen = ({ studyId }: { studyId: string }) => {
   const db = useDb();
@@ -21,16 +22,18 @@ export const StudyScreen = ({ studyId }: { studyId: string }) => {
   }, [data.value]);
   if (data.error) return <main className="page"><p role="alert">Cannot open this study: {data.error.message}</p></main>;
   if (!data.value) return <main className="page" aria-busy="true"><p>Opening the study…</p></main>;
-  const { study, caseSet, progress } = data.value;
+  const { study, caseSet, progress, status } = data.value;
   const refresh = () => { data.reload(); setTick((t) => t + 1); };
   return (
     <main className="page">
       <header className="page-head">
         <button type="button" className="link" onClick={actions.goHome}>← Heed</button>
         <h1>{study.name}</h1>
-        <p className="muted">on {caseSet.name} · {study.lockedAt ? `design locked since ${study.lockedAt.slice(0, 16).replace('T', ' ')} UTC (reading started)` : 'draft: the design locks when the first reader starts'}</p>
+        <p className="muted">on {caseSet.name} · <span aria-label="Study status">{status === 'finished' ? 'finished: every period of every reader is complete'
+          : status === 'reading' ? `reading under way (design locked since ${study.lockedAt?.slice(0, 16).replace('T', ' ') ?? ''} UTC)` : 'draft: the design can be edited until the first reader starts'}</span></p>
         <CautionLine />
       </header>
+      <StudyActions study={study} onChanged={refresh} />
       <ReaderTable study={study} progress={progress} onChanged={refresh} />
       <EnrolForm study={study} onEnrolled={refresh} />
       <ExportPanel study={study} caseSet={caseSet} caution={RESEARCH_CAUTION} />

@@ -32,6 +32,21 @@ export const initialFormValues = (caseSetId: string, findings: string[]): Design
   };
 };
 
+/** The form's values for a stored design, so a draft can be edited with the same fields. */
+export const formValuesFromDesign = (name: string, caseSetId: string, d: StudyDesign): DesignFormValues => {
+  const aided = d.sequences.flatMap((s) => s.periods).find((a) => a !== 'none') ?? 'sequential';
+  const standard = d.sequences.length === 2 && d.sequences[0]?.label === 'UA' && d.sequences[1]?.label === 'AU'
+    && d.sequences[0].periods.join() === `none,${aided}` && d.sequences[1].periods.join() === `${aided},none`;
+  return {
+    ...initialFormValues(caseSetId, d.findings),
+    name, aidedMode: aided, customSequences: standard ? '' : d.sequences.map((s) => `${s.label}: ${s.periods.join(', ')}`).join('\n'),
+    washoutDays: String(d.washoutDays), threshold: String(d.threshold), showScore: d.showScore, askConfidence: d.askConfidence,
+    plantedFalsePositive: String(d.planted.falsePositive.value), plantedFalseNegative: String(d.planted.falseNegative.value),
+    plantMode: d.planted.falsePositive.mode, stratifyBy: d.planted.stratifyBy ?? '', cautionMode: d.caution.mode, cautionText: d.caution.text,
+    blocks: String(d.blocks), breakEvery: d.breakEvery === null ? '' : String(d.breakEvery), seed: String(d.seed),
+  };
+};
+
 const ASSISTANCE_WORDS: Record<string, Assistance> = { none: 'none', unaided: 'none', concurrent: 'concurrent', sequential: 'sequential' };
 
 /** Parses custom sequences, one per line: "UAA: none, sequential, concurrent". */
@@ -45,41 +60,49 @@ export const parseSequences = (text: string, problems: string[]): Sequence[] =>
     return [{ label: match[1] ?? '', periods: periods.map((w) => ASSISTANCE_WORDS[w] ?? 'none') }];
   });
 
-const numberField = (label: string, text: string, problems: string[]): number => {
+type FieldProblem = { field: keyof DesignFormValues; message: string };
+
+const numberField = (field: keyof DesignFormValues, label: string, text: string, problems: FieldProblem[]): number => {
   const value = Number(text.trim());
-  if (text.trim() === '' || !Number.isFinite(value)) problems.push(`${label}: "${text}" is not a number.`);
+  if (text.trim() === '' || !Number.isFinite(value)) problems.push({ field, message: `${label}: "${text}" is not a number.` });
   return value;
 };
 
-/** The design the form describes, or the plain-language problems with the form. */
-export const designFromForm = (v: DesignFormValues): { design: StudyDesign } | { problems: string[] } => {
-  const problems: string[] = [];
-  if (v.name.trim() === '') problems.push('Study name: give the study a name.');
-  if (v.findings.length === 0) problems.push('Findings: choose at least one finding to ask.');
-  const washoutDays = numberField('Washout days', v.washoutDays, problems);
-  const threshold = numberField('Threshold', v.threshold, problems);
-  const fp = numberField('Planted false-positive suggestions', v.plantedFalsePositive, problems);
-  const fn = numberField('Planted false-negative suggestions', v.plantedFalseNegative, problems);
-  const blocks = numberField('Blocks', v.blocks, problems);
-  const seed = numberField('Seed', v.seed, problems);
-  const breakEvery = v.breakEvery.trim() === '' ? null : numberField('Break every', v.breakEvery, problems);
-  const custom = parseSequences(v.customSequences, problems);
-  if (problems.length > 0) return { problems };
-  return {
-    design: {
-      ...defaultDesign(v.findings),
-      sequences: custom.length > 0 ? custom : [
-        { label: 'UA', periods: ['none', v.aidedMode] },
-        { label: 'AU', periods: [v.aidedMode, 'none'] },
-      ],
-      washoutDays, threshold, showScore: v.showScore, askConfidence: v.askConfidence,
-      caution: { mode: v.cautionMode, text: v.cautionText },
-      planted: {
-        falsePositive: { mode: v.plantMode, value: fp },
-        falseNegative: { mode: v.plantMode, value: fn },
-        stratifyBy: v.stratifyBy === '' ? null : v.stratifyBy,
-      },
-      blocks, breakEvery, seed,
+export type FormOutcome =
+  | { design: StudyDesign }
+  /** `partial`: the design as far as it could be read (bad numbers are NaN), for further checks */
+  | { problems: string[]; fieldProblems: FieldProblem[]; partial: StudyDesign };
+
+/** The design the form describes, or the plain-language problems with the form, each tied to its field. */
+export const designFromForm = (v: DesignFormValues): FormOutcome => {
+  const problems: FieldProblem[] = [];
+  if (v.name.trim() === '') problems.push({ field: 'name', message: 'Study name: give the study a name.' });
+  if (v.findings.length === 0) problems.push({ field: 'findings', message: 'Findings: choose at least one finding to ask.' });
+  const washoutDays = numberField('washoutDays', 'Washout days', v.washoutDays, problems);
+  const threshold = numberField('threshold', 'Threshold', v.threshold, problems);
+  const fp = numberField('plantedFalsePositive', 'Planted false-positive suggestions', v.plantedFalsePositive, problems);
+  const fn = numberField('plantedFalseNegative', 'Planted false-negative suggestions', v.plantedFalseNegative, problems);
+  const blocks = numberField('blocks', 'Blocks', v.blocks, problems);
+  const seed = numberField('seed', 'Seed', v.seed, problems);
+  const breakEvery = v.breakEvery.trim() === '' ? null : numberField('breakEvery', 'Break every N cases', v.breakEvery, problems);
+  const sequenceProblems: string[] = [];
+  const custom = parseSequences(v.customSequences, sequenceProblems);
+  for (const message of sequenceProblems) problems.push({ field: 'customSequences', message });
+  const design: StudyDesign = {
+    ...defaultDesign(v.findings),
+    sequences: custom.length > 0 ? custom : [
+      { label: 'UA', periods: ['none', v.aidedMode] },
+      { label: 'AU', periods: [v.aidedMode, 'none'] },
+    ],
+    washoutDays, threshold, showScore: v.showScore, askConfidence: v.askConfidence,
+    caution: { mode: v.cautionMode, text: v.cautionText },
+    planted: {
+      falsePositive: { mode: v.plantMode, value: fp },
+      falseNegative: { mode: v.plantMode, value: fn },
+      stratifyBy: v.stratifyBy === '' ? null : v.stratifyBy,
     },
+    blocks, breakEvery, seed,
   };
+  if (problems.length > 0) return { problems: problems.map((p) => p.message), fieldProblems: problems, partial: design };
+  return { design };
 };

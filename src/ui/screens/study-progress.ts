@@ -6,11 +6,14 @@ import type { StoredReader, StoredSession, StoredStudy } from '../../store/recor
 import { sessionsOfStudy } from '../../store/sessions';
 import { getStudy } from '../../store/studies';
 import { getCaseSet } from '../../store/case-sets';
+import { studyStatus } from '../../core/study-status';
+import { periodOpensAt } from '../../core/washout';
 
-export type PeriodProgress = { period: number; session: StoredSession | null; answered: number; total: number };
+/** `opensAt`: when the washout after the previous period ends (null when the previous period is not complete, or for period 1) */
+export type PeriodProgress = { period: number; session: StoredSession | null; answered: number; total: number; opensAt: Date | null; inWashout: boolean };
 export type ReaderProgress = { reader: StoredReader; sequenceLabel: string; periods: PeriodProgress[] };
 
-export const loadStudyProgress = async (db: HeedDb, studyId: string) => {
+export const loadStudyProgress = async (db: HeedDb, studyId: string, now: Date = new Date()) => {
   const study: StoredStudy = await getStudy(db, studyId);
   const caseSet = await getCaseSet(db, study.caseSetId);
   const readers = await listReaders(db, studyId);
@@ -22,12 +25,16 @@ export const loadStudyProgress = async (db: HeedDb, studyId: string) => {
     const periods: PeriodProgress[] = [];
     for (let period = 1; period <= periodCount; period++) {
       const session = sessions.find((s) => s.readerId === reader.id && s.period === period) ?? null;
+      const previousDone = periods[period - 2]?.session?.completedAt ?? null;
       periods.push({
         period, session, total: session?.items.length ?? caseCount,
+        opensAt: previousDone === null ? null : periodOpensAt(new Date(previousDone), study.design.washoutDays),
+        inWashout: session === null && previousDone !== null && periodOpensAt(new Date(previousDone), study.design.washoutDays).getTime() > now.getTime(),
         answered: session ? await answeredCases(db, session, study.design.findings.length) : 0,
       });
     }
     progress.push({ reader, sequenceLabel: study.design.sequences[reader.sequenceIndex]?.label ?? '?', periods });
   }
-  return { study, caseSet, progress };
+  const status = studyStatus(study.lockedAt, periodCount, readers.map((r) => ({ id: r.id, withdrawn: Boolean(r.withdrawn) })), sessions);
+  return { study, caseSet, progress, status };
 };

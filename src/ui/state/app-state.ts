@@ -11,7 +11,11 @@ export type Screen =
   | { name: 'results'; studyId: string }
   | { name: 'read'; sessionId: string; studyId: string }
   /** between a reader and the coordinator: nothing of the study is on screen */
-  | { name: 'handover'; studyId: string };
+  | { name: 'handover'; studyId: string }
+  /** editing a draft study's design (refused once it is locked) */
+  | { name: 'edit-study'; studyId: string }
+  /** the study's event log, in time order */
+  | { name: 'audit'; studyId: string };
 
 export type Notice = { kind: 'info' | 'error'; text: string };
 
@@ -20,8 +24,17 @@ export type AppState = { screen: Screen; notice: Notice | null };
 let state: AppState = { screen: { name: 'home' }, notice: null };
 const listeners = new Set<() => void>();
 
+/** An info notice fades after this long; an error stays until dismissed or the screen changes. */
+export const NOTICE_MS = 6000;
+let fadeTimer: ReturnType<typeof setTimeout> | null = null;
+
 const set = (next: AppState): void => {
+  if (next.notice !== state.notice && fadeTimer !== null) { clearTimeout(fadeTimer); fadeTimer = null; }
   state = next;
+  const shown = next.notice;
+  if (shown?.kind === 'info' && fadeTimer === null) {
+    fadeTimer = setTimeout(() => { fadeTimer = null; if (state.notice === shown) set({ ...state, notice: null }); }, NOTICE_MS);
+  }
   for (const listener of listeners) listener();
 };
 
@@ -32,6 +45,8 @@ export const actions = {
   openResults: (studyId: string): void => set({ screen: { name: 'results', studyId }, notice: null }),
   startReading: (studyId: string, sessionId: string): void => set({ screen: { name: 'read', studyId, sessionId }, notice: null }),
   handOver: (studyId: string): void => set({ screen: { name: 'handover', studyId }, notice: null }),
+  editStudy: (studyId: string): void => set({ screen: { name: 'edit-study', studyId }, notice: null }),
+  openAuditLog: (studyId: string): void => set({ screen: { name: 'audit', studyId }, notice: null }),
   notify: (notice: Notice): void => set({ ...state, notice }),
   clearNotice: (): void => set({ ...state, notice: null }),
 };
@@ -42,3 +57,6 @@ const subscribe = (listener: () => void): (() => void) => {
 };
 
 export const useAppState = (): AppState => useSyncExternalStore(subscribe, () => state);
+
+/** The state now, outside React (tests, one-off reads). */
+export const getAppState = (): AppState => state;

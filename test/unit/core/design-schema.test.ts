@@ -71,7 +71,7 @@ describe('parseDesign', () => {
 
   it('refuses a shown caution notice without text, a bad break interval and seed', () => {
     expect(problemsOf({ caution: { mode: 'all', text: ' ' } })).toEqual(['caution.text: a caution notice that is shown needs its text']);
-    expect(problemsOf({ breakEvery: 0 })).toEqual(['breakEvery: the break interval must be at least 1']);
+    expect(problemsOf({ breakEvery: 0 })).toEqual(['breakEvery: the number of cases between breaks must be at least 1']);
     expect(problemsOf({ seed: -3 })).toEqual(['seed: the seed must be 0 or more']);
   });
 

@@ -2,7 +2,7 @@ import { chmodSync, mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:f
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import {
-  chooseMode, chromiumArgs, chromiumProfileDir, electronBinary, findChromium, hasDisplay, parsePort,
+  appUrl, chooseMode, chromiumArgs, chromiumProfileDir, electronBinary, findChromium, hasDisplay, parsePort,
 } from '../../../scripts/lib/launch-plan.mjs';
 
 const facts = { electronUsable: false, chromium: '/usr/bin/chromium', hasDisplay: true };
@@ -111,5 +111,15 @@ describe('electronBinary and findChromium', () => {
     expect(findChromium({ PATH: `/nonexistent${path.delimiter}${dir}` })).toBe(bin);
     expect(findChromium({ PATH: '', HEED_CHROMIUM: bin })).toBe(bin);
     expect(findChromium({ PATH: dir, HEED_CHROMIUM: path.join(dir, 'nope') })).toBeNull();
+  });
+});
+
+describe('appUrl', () => {
+  it('puts the mode and the profile folder in the query, keeping the origin (and so the database)', () => {
+    const url = appUrl('http://127.0.0.1:5178/', 'chromium', '/home/ana/.config/heed/chromium-profile');
+    expect(new URL(url).origin).toBe('http://127.0.0.1:5178');
+    expect(new URL(url).searchParams.get('mode')).toBe('chromium');
+    expect(new URL(url).searchParams.get('profile')).toBe('/home/ana/.config/heed/chromium-profile');
+    expect(new URL(appUrl('http://127.0.0.1:5178/', 'serve', null)).search).toBe('?mode=serve');
   });
 });

@@ -52,6 +52,8 @@ describe('opening periods behind the washout', () => {
     const soon = new Date(Date.now() + 3 * 24 * 3600 * 1000);
     const early = await openPeriod(db, study, reader, 2, null, soon);
     expect(early).toMatchObject({ open: false, message: expect.stringMatching(/14-day washout/) });
+    // the message names the reader and the period, and when it opens
+    expect(early).toMatchObject({ message: expect.stringMatching(/^Period 2 of R01 is not open yet\. It opens at \d{4}-\d\d-\d\d \d\d:\d\d UTC/) });
     const noReason = await openPeriod(db, study, reader, 2, { reason: ' ', by: 'coordinator', at: soon.toISOString() }, soon);
     expect(noReason.open).toBe(false);
     expect(await db.sessions.count()).toBe(1);

@@ -1,5 +1,5 @@
 import { parseDesign } from '../../../src/core/design-schema';
-import { designFromForm, initialFormValues } from '../../../src/ui/screens/design-form-state';
+import { designFromForm, formValuesFromDesign, initialFormValues } from '../../../src/ui/screens/design-form-state';
 
 describe('the new-study form', () => {
   it('turns its default values (with a name) into a valid two-sequence crossover design', () => {
@@ -27,5 +27,16 @@ describe('the new-study form', () => {
     expect('problems' in bad && bad.problems).toEqual([
       'Sequences, line 1: "aided" is not none, concurrent or sequential.', 'Sequences, line 2: write it as "LABEL: none, sequential" (got "B none").',
     ]);
+  });
+});
+
+describe('editing a stored design', () => {
+  it('gives back form values that make the same design (standard and custom sequences)', () => {
+    for (const custom of ['', 'USC: none, sequential, concurrent\nCUS: concurrent, none, sequential']) {
+      const made = designFromForm({ ...initialFormValues('set', ['nodule']), name: 'S', customSequences: custom, plantedFalsePositive: '2', breakEvery: '10', washoutDays: '7' });
+      if (!('design' in made)) throw new Error(made.problems.join('; '));
+      const again = designFromForm(formValuesFromDesign('S', 'set', made.design));
+      expect(again).toEqual(made);
+    }
   });
 });

@@ -37,15 +37,16 @@ describe('heed check-cases', () => {
     expect(run.out).toMatch(/not a medical device/);
   });
 
-  it('exits 2 with one line FILE:ROW: column COL: message, then a count', () => {
+  it('exits 2 listing every problem, one line FILE:ROW: column COL: message each, then a count', () => {
     const csv = withRow(1, 'C1,target,yes,img/c1.png,0.9,1,0,North').replace('0.7', '7');
     const dir = writeSet('bad', csv);
     const run = heed('check-cases', dir);
     expect(run.code).toBe(2);
     const lines = run.err.trim().split('\n');
     expect(lines[0]).toBe(`${dir}/cases.csv:2: column truth: truth must be 0 or 1, found "yes"`);
-    expect(lines[1]).toBe('(1 more problem; nothing was imported)');
-    expect(lines).toHaveLength(2);
+    expect(lines[1]).toMatch(new RegExp(`^${dir}/cases\\.csv:\\d+: column model_score: `));
+    expect(lines[2]).toBe('2 problems; the case set is not valid and nothing was imported.');
+    expect(lines).toHaveLength(3);
     expect(run.err).not.toMatch(/at .*\.ts:\d+/);
   });
 
