@@ -9,7 +9,8 @@ import { subgroups } from './subgroups';
 
 export type { AnalysisReport } from './report-types';
 
-export type AnalyzeOptions = { seed?: number; boot?: number };
+/** includeWithdrawn: keep the reads of withdrawn readers (withdrawn = 1) in the statistics; default false. */
+export type AnalyzeOptions = { seed?: number; boot?: number; includeWithdrawn?: boolean };
 
 export const DEFAULT_SEED = 1;
 export const DEFAULT_BOOT = 1000;
@@ -22,8 +23,11 @@ const byReaderId = (a: string, b: string) => a.localeCompare(b, 'en', { numeric:
  * and subgroups per case attribute; per finding the pooled and reader-averaged figures with a
  * seeded two-way bootstrap (options.seed, default 1; options.boot resamples, default 1000, 0 for
  * none), Fleiss' kappa across readers, pooled subgroups and, when fully crossed, the
- * Obuchowski-Rockette analysis. Practice reads are left out of every statistic. Readers are
- * ordered by id (numeric-aware), findings by first appearance.
+ * Obuchowski-Rockette analysis. Practice reads are left out of every statistic, and so are
+ * training reads (training = 1: the reader saw the truth) and, unless options.includeWithdrawn,
+ * the reads of withdrawn readers; each is counted in `group`. A log with no suggestion shown
+ * (an external rating log) gets its performance sections only and a note saying so.
+ * Readers are ordered by id (numeric-aware), findings by first appearance.
  * Throws RangeError on a bad seed or boot, or a confidence outside 0..100.
  * Example: analyzeReads(parseReadLog(csv), { seed: 7, boot: 500 }).readers[0].aided.overreliance.
  */
@@ -32,7 +36,15 @@ export const analyzeReads = (rows: readonly ReadRow[], options: AnalyzeOptions =
   const boot = options.boot ?? DEFAULT_BOOT;
   if (!Number.isInteger(seed)) throw new RangeError(`seed must be a whole number, got ${seed}`);
   if (!Number.isInteger(boot) || boot < 0) throw new RangeError(`boot must be a whole number >= 0, got ${boot}`);
-  const reads = rows.filter((r) => r.practice === 0);
+  const includeWithdrawn = options.includeWithdrawn ?? false;
+  const excluded = { practice: 0, training: 0, withdrawn: 0 };
+  const reads: ReadRow[] = [];
+  for (const r of rows) {
+    if (r.practice === 1) excluded.practice++;
+    else if (r.training === 1) excluded.training++;
+    else if (r.withdrawn === 1 && !includeWithdrawn) excluded.withdrawn++;
+    else reads.push(r);
+  }
   const attributes: string[] = [];
   const byFinding = new Map<string, Map<string, ReadRow[]>>();
   for (const r of reads) {
@@ -70,5 +82,24 @@ export const analyzeReads = (rows: readonly ReadRow[], options: AnalyzeOptions =
     });
   }
   readers.sort((a, b) => byReaderId(a.reader_id, b.reader_id));
-  return { readers, group: { reads: reads.length, practice_excluded: rows.length - reads.length, seed, boot, attributes, findings } };
+  return {
+    readers,
+    group: {
+      reads: reads.length,
+      practice_excluded: excluded.practice,
+      training_excluded: excluded.training,
+      withdrawn_excluded: excluded.withdrawn,
+      include_withdrawn: includeWithdrawn,
+      note: logNote(reads),
+      seed, boot, attributes, findings,
+    },
+  };
+};
+
+// What the reader of the output must know about the log as a whole, or null.
+const logNote = (reads: readonly ReadRow[]): string | null => {
+  if (reads.length === 0) return null;
+  if (reads.some(isAided)) return null;
+  const rated = reads.some((r) => r.final_rating !== null);
+  return `No suggestion was shown in this log${rated ? ' (an external rating log)' : ''}: only the performance sections (accuracy, sensitivity, specificity, AUC${rated ? ' of the ratings' : ''}) are computed; the reliance sections are null.`;
 };

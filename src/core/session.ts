@@ -24,8 +24,11 @@ export type Phase = 'initial' | 'final';
 /** A step is one question: one finding of one case, and for sequential reads its phase. */
 export type Step = { itemIndex: number; finding: string; phase: Phase };
 
-/** One committed call: the call, its confidence (null when none is asked) and ms since the case was shown. */
-export type AnswerPart = { call: Bit; confidence: number | null; ms: number };
+/**
+ * One committed call: the call, its confidence (null when none is asked), ms since the case was
+ * shown, and on a rating scale the rating the call came from (absent on reads stored before scales).
+ */
+export type AnswerPart = { call: Bit; confidence: number | null; ms: number; rating?: number | null };
 
 /** What has been committed for one finding of one case. */
 export type CommittedAnswer = {

@@ -49,6 +49,11 @@ export const studyReadRows = async (db: HeedDb, studyId: string): Promise<ReadRo
       final_confidence: read.final.confidence,
       total_ms: read.final.ms,
       shown_at: read.shownAt,
+      scale: study.design.answerScale.kind,
+      initial_rating: sequential ? read.initial?.rating ?? null : null,
+      final_rating: read.final.rating ?? null,
+      training: (study.design.training ? 1 : 0) satisfies Bit,
+      withdrawn: 0,
       case_attributes: caseRecord.attributes,
     });
   }
