@@ -87,7 +87,8 @@ export const simulateReadRows = (o: SimulationOptions): ReadRow[] => {
           initial_confidence: assistance === 'sequential' ? initialConfidence : null,
           initial_ms: assistance === 'sequential' ? Math.round(totalMs * 0.7) : null,
           final_call: final, final_confidence: final === own ? initialConfidence : conf(), total_ms: totalMs,
-          shown_at: new Date(clock).toISOString(), case_attributes: { scanner: c.scanner },
+          shown_at: new Date(clock).toISOString(),
+          scale: 'call-confidence', initial_rating: null, final_rating: null, training: 0, withdrawn: 0, case_attributes: { scanner: c.scanner },
         });
         clock += totalMs + 500;
       });

@@ -3,7 +3,7 @@ import { brier } from './brier';
 import { calibration, type Calibration } from './calibration';
 import { classification } from './classification';
 import { aucSummary, type AucSummary } from './delong';
-import { finalScore } from './read-scores';
+import { finalLikelihood, finalScore } from './read-scores';
 import { readingTime, type TimeSummary } from './reading-time';
 import { reliance, type Reliance } from './reliance';
 import type { Proportion } from './wilson';
@@ -15,18 +15,21 @@ export type ConditionSection = {
   specificity: Proportion;
   /** Mann-Whitney AUC of the derived score, DeLong SE, CI clipped to [0,1] */
   auc: AucSummary;
+  /** null when any read's scale states no probability (five-point) */
   brier: number | null;
   median_ms: number | null;
   time: TimeSummary;
-  /** reliability of s/100 against truth: ECE over 10 bins [0,0.1) … [0.9,1.0] */
-  calibration: Calibration;
+  /** reliability of s/100 against truth: ECE over 10 bins [0,0.1) … [0.9,1.0]; null when any read is five-point */
+  calibration: Calibration | null;
 };
 
 export type AidedSection = ConditionSection & Reliance;
 
 /**
  * Metrics of one condition over a set of reads (docs/methods.md): accuracy, sensitivity,
- * specificity, AUC, Brier score, reading time and calibration of the derived score.
+ * specificity, AUC, Brier score, reading time and calibration of the derived score. The AUC uses
+ * the rating where the read has one; Brier and calibration need a probability, so they are null
+ * when any read is on the five-point scale.
  * Returns null for no reads. Throws RangeError when a confidence is outside 0..100.
  * Example: conditionSection(unaidedReads)?.auc.estimate.
  */
@@ -44,13 +47,16 @@ export const conditionSection = (reads: readonly ReadRow[]): ConditionSection | 
   const neg = new Float64Array(n - positives);
   let ip = 0;
   let ineg = 0;
+  let probabilities = true;
   for (let i = 0; i < n; i++) {
     const r = reads[i] as ReadRow;
     calls[i] = r.final_call;
     truth[i] = r.truth;
     const s = finalScore(r);
     scores[i] = s;
-    forecast[i] = s / 100;
+    const likelihood = finalLikelihood(r);
+    if (likelihood === null) probabilities = false;
+    else forecast[i] = likelihood / 100;
     times[i] = r.total_ms;
     if (r.truth === 1) pos[ip++] = s;
     else neg[ineg++] = s;
@@ -63,10 +69,10 @@ export const conditionSection = (reads: readonly ReadRow[]): ConditionSection | 
     sensitivity: c.sensitivity,
     specificity: c.specificity,
     auc: aucSummary(pos, neg),
-    brier: brier(scores, truth),
+    brier: probabilities ? brier(scores, truth) : null,
     median_ms: time.median_ms,
     time,
-    calibration: calibration(forecast, truth),
+    calibration: probabilities ? calibration(forecast, truth) : null,
   };
 };
 

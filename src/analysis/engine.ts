@@ -15,6 +15,8 @@ export type AnalyzeOptions = {
   boot?: number;
   /** error covariances of the Obuchowski-Rockette analysis: 'jackknife' (default) or 'delong' */
   covariance?: CovarianceMethod;
+  /** keep the reads of withdrawn readers (withdrawn = 1) in the statistics; default false */
+  includeWithdrawn?: boolean;
 };
 
 export type { CovarianceMethod } from './or-covariances';
@@ -31,8 +33,12 @@ const byReaderId = (a: string, b: string) => a.localeCompare(b, 'en', { numeric:
  * and subgroups per case attribute; per finding the pooled and reader-averaged figures with a
  * seeded two-way bootstrap (options.seed, default 1; options.boot resamples, default 1000, 0 for
  * none), Fleiss' kappa across readers, pooled subgroups and, when fully crossed, the
- * Obuchowski-Rockette analysis (options.covariance: 'jackknife', the default, or 'delong'). Practice reads are left out of every statistic. Readers are
- * ordered by id (numeric-aware), findings by first appearance.
+ * Obuchowski-Rockette analysis (options.covariance: 'jackknife', the default, or 'delong').
+ * Practice reads are left out of every statistic, and so are training reads (training = 1: the
+ * reader saw the truth) and, unless options.includeWithdrawn, the reads of withdrawn readers;
+ * each is counted in `group`. A log with no suggestion shown (an external rating log) gets its
+ * performance sections only and a note saying so.
+ * Readers are ordered by id (numeric-aware), findings by first appearance.
  * Throws RangeError on a bad seed, boot or covariance, or a confidence outside 0..100.
  * Example: analyzeReads(parseReadLog(csv), { seed: 7, boot: 500 }).readers[0].aided.overreliance.
  */
@@ -43,7 +49,15 @@ export const analyzeReads = (rows: readonly ReadRow[], options: AnalyzeOptions =
   if (!Number.isInteger(boot) || boot < 0) throw new RangeError(`boot must be a whole number >= 0, got ${boot}`);
   const covariance = options.covariance ?? DEFAULT_COVARIANCE;
   if (!COVARIANCE_METHODS.includes(covariance)) throw new RangeError(`covariance must be jackknife or delong, got ${JSON.stringify(covariance)}`);
-  const reads = rows.filter((r) => r.practice === 0);
+  const includeWithdrawn = options.includeWithdrawn ?? false;
+  const excluded = { practice: 0, training: 0, withdrawn: 0 };
+  const reads: ReadRow[] = [];
+  for (const r of rows) {
+    if (r.practice === 1) excluded.practice++;
+    else if (r.training === 1) excluded.training++;
+    else if (r.withdrawn === 1 && !includeWithdrawn) excluded.withdrawn++;
+    else reads.push(r);
+  }
   const attributes: string[] = [];
   const byFinding = new Map<string, Map<string, ReadRow[]>>();
   for (const r of reads) {
@@ -81,5 +95,24 @@ export const analyzeReads = (rows: readonly ReadRow[], options: AnalyzeOptions =
     });
   }
   readers.sort((a, b) => byReaderId(a.reader_id, b.reader_id));
-  return { readers, group: { reads: reads.length, practice_excluded: rows.length - reads.length, seed, boot, covariance, attributes, findings } };
+  return {
+    readers,
+    group: {
+      reads: reads.length,
+      practice_excluded: excluded.practice,
+      training_excluded: excluded.training,
+      withdrawn_excluded: excluded.withdrawn,
+      include_withdrawn: includeWithdrawn,
+      note: logNote(reads),
+      seed, boot, covariance, attributes, findings,
+    },
+  };
+};
+
+// What the reader of the output must know about the log as a whole, or null.
+const logNote = (reads: readonly ReadRow[]): string | null => {
+  if (reads.length === 0) return null;
+  if (reads.some(isAided)) return null;
+  const rated = reads.some((r) => r.final_rating !== null);
+  return `No suggestion was shown in this log${rated ? ' (an external rating log)' : ''}: only the performance sections (accuracy, sensitivity, specificity, AUC${rated ? ' of the ratings' : ''}) are computed; the reliance sections are null.`;
 };

@@ -42,6 +42,14 @@ export type AnalysisReport = {
     reads: number;
     /** practice reads left out of every statistic */
     practice_excluded: number;
+    /** non-practice training reads (the truth was shown) left out of the statistics */
+    training_excluded: number;
+    /** reads of withdrawn readers left out (0 when include_withdrawn) */
+    withdrawn_excluded: number;
+    /** whether withdrawn readers' reads were kept in (option includeWithdrawn, CLI --include-withdrawn) */
+    include_withdrawn: boolean;
+    /** a note on the log as a whole (e.g. no suggestion shown: performance sections only), else null */
+    note: string | null;
     seed: number;
     boot: number;
     /** error covariance method asked for the Obuchowski-Rockette analyses */

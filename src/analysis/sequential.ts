@@ -1,5 +1,5 @@
 import type { ReadRow } from '../core/read-log';
-import { initialScore, finalScore } from './read-scores';
+import { finalLikelihood, initialLikelihood } from './read-scores';
 import { weightOfAdvice, weightOfAdviceAbsolute, type WeightOfAdvice } from './weight-of-advice';
 import { wilson, type Proportion } from './wilson';
 
@@ -77,9 +77,12 @@ export const sequentialSection = (reads: readonly ReadRow[]): SequentialSection 
       rsrN++;
       if (d === y) rsrK++;
     }
-    if (r.ai_score !== null) {
-      s.push(finalScore(r));
-      s0.push(initialScore(r) as number);
+    // weight of advice compares likelihoods with the suggestion's probability: not on five-point
+    const final = finalLikelihood(r);
+    const initial = initialLikelihood(r);
+    if (r.ai_score !== null && final !== null && initial !== null) {
+      s.push(final);
+      s0.push(initial);
       p.push(r.ai_score);
     }
   }

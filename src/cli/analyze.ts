@@ -12,9 +12,9 @@ import type { Proportion } from '../analysis/wilson';
 import { parseReadLog, ReadLogError } from '../io/read-log-parse';
 import { CliError } from './cli-error';
 
-type AnalyzeArgs = { file: string; json: boolean; seed: number; boot: number; covariance: CovarianceMethod };
+type AnalyzeArgs = { file: string; json: boolean; seed: number; boot: number; covariance: CovarianceMethod; includeWithdrawn: boolean };
 
-const USAGE = 'usage: heed analyze FILE [--json] [--seed N] [--boot N] [--covariance jackknife|delong]';
+const USAGE = 'usage: heed analyze FILE [--json] [--seed N] [--boot N] [--covariance jackknife|delong] [--include-withdrawn]';
 
 const covarianceMethod = (value: string | undefined): CovarianceMethod => {
   if (value === 'jackknife' || value === 'delong') return value;
@@ -34,9 +34,11 @@ export const parseAnalyzeArgs = (args: string[]): AnalyzeArgs => {
   let seed = DEFAULT_SEED;
   let boot = DEFAULT_BOOT;
   let covariance = DEFAULT_COVARIANCE;
+  let includeWithdrawn = false;
   for (let i = 0; i < args.length; i++) {
     const a = args[i] as string;
     if (a === '--json') json = true;
+    else if (a === '--include-withdrawn') includeWithdrawn = true;
     else if (a === '--seed') seed = wholeNumber('--seed', args[++i], 0);
     else if (a === '--boot') boot = wholeNumber('--boot', args[++i], 0);
     else if (a === '--covariance') covariance = covarianceMethod(args[++i]);
@@ -46,11 +48,11 @@ export const parseAnalyzeArgs = (args: string[]): AnalyzeArgs => {
   }
   if (file === undefined) throw new CliError(USAGE);
   if (seed > 0x7fffffff) throw new CliError(`--seed must be at most ${0x7fffffff}, got ${seed}`);
-  return { file, json, seed, boot, covariance };
+  return { file, json, seed, boot, covariance, includeWithdrawn };
 };
 
 export const runAnalyze = async (args: string[]): Promise<number> => {
-  const { file, json, seed, boot, covariance } = parseAnalyzeArgs(args);
+  const { file, json, seed, boot, covariance, includeWithdrawn } = parseAnalyzeArgs(args);
   let text: string;
   try {
     text = await readFile(file, 'utf8');
@@ -69,7 +71,7 @@ export const runAnalyze = async (args: string[]): Promise<number> => {
   }
   let report;
   try {
-    report = analyzeReads(rows, { seed, boot, covariance });
+    report = analyzeReads(rows, { seed, boot, covariance, includeWithdrawn });
   } catch (error) {
     if (error instanceof RangeError) throw new CliError(`${file}: ${error.message}`);
     throw error;
@@ -101,7 +103,7 @@ const sectionLines = (s: Sections): string[] => {
     out.push(row('  specificity', prop(c.specificity)));
     out.push(row('  AUC (DeLong)', `${num(c.auc.estimate)}${range(c.auc.lower, c.auc.upper)}`));
     out.push(row('  Brier score', num(c.brier)));
-    out.push(row('  calibration error (ECE)', num(c.calibration.ece)));
+    out.push(row('  calibration error (ECE)', c.calibration === null ? '- (no probability on this scale)' : num(c.calibration.ece)));
     out.push(row('  median time (IQR)', `${ms(c.median_ms)} (${ms(c.time.q1_ms)} to ${ms(c.time.q3_ms)})`));
   }
   const a = s.aided;
@@ -173,10 +175,22 @@ const groupBlock = (g: GroupFinding, boot: number): string[] => {
   return out;
 };
 
+// Training and withdrawn exclusions and the log note, one line each, only when they apply.
+const exclusionLines = (report: AnalysisReport): string[] => {
+  const g = report.group;
+  const lines: string[] = [];
+  if (g.training_excluded > 0) lines.push(`${g.training_excluded} training reads (truth shown to the reader) left out.`);
+  if (g.withdrawn_excluded > 0) lines.push(`${g.withdrawn_excluded} reads of withdrawn readers left out (--include-withdrawn keeps them).`);
+  if (g.include_withdrawn) lines.push('Reads of withdrawn readers are included (--include-withdrawn).');
+  if (g.note !== null) lines.push(`Note: ${g.note}`);
+  return lines;
+};
+
 /** The readable table of `heed analyze` without --json, ending with the caution line. */
 export const formatText = (report: AnalysisReport): string => {
   const blocks = [
     `${report.group.reads} reads analysed; ${report.group.practice_excluded} practice reads left out. Intervals are 95%.`,
+    ...exclusionLines(report),
     ...report.readers.map((r) => readerBlock(r).join('\n')),
     ...report.group.findings.map((g) => groupBlock(g, report.group.boot).join('\n')),
     CAUTION,

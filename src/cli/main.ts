@@ -3,6 +3,7 @@ import { CliError } from './cli-error';
 
 const USAGE = `usage:
   heed analyze FILE [--json] [--seed N] [--boot N]   statistics of a reads.csv
+    [--include-withdrawn]                            keep the reads of withdrawn readers
   heed check-cases PATH                              validate a case set (folder or zip)
   heed demo [--out DIR]                              write the demo case set
 Heed is a research and training tool, not a medical device.`;

@@ -7,6 +7,7 @@
  * Example: parseDesign(defaultDesign(['nodule'])).ok === true.
  */
 import { z } from 'zod';
+import { ANSWER_SCALES, defaultAnswerScale } from './answer-scale';
 import { ASSISTANCE, type StudyDesign } from './design';
 
 const wholeAtLeast = (min: number, what: string) =>
@@ -28,6 +29,25 @@ const plantSpec = z
       ctx.addIssue({ code: 'custom', path: ['value'], message: `a rate of planted errors must be from 0 to 1, got ${spec.value}` });
     }
   });
+
+// A stored design or study.json from before answer scales existed reads as call-confidence.
+const answerScale = z
+  .object({
+    kind: z.enum(ANSWER_SCALES, { error: `the answer scale must be one of ${ANSWER_SCALES.join(', ')}` }),
+    labels: z
+      .array(z.string().trim().min(1, { error: 'a rating label cannot be empty' }), { error: 'the rating labels must be a list' })
+      .length(5, { error: 'the five-point scale needs exactly 5 labels' }),
+    presentFrom: z.number({ error: 'the rating threshold must be a number' }),
+  })
+  .superRefine((s, ctx) => {
+    if (s.kind === 'five-point' && !(Number.isInteger(s.presentFrom) && s.presentFrom >= 2 && s.presentFrom <= 5)) {
+      ctx.addIssue({ code: 'custom', path: ['presentFrom'], message: `on the five-point scale the "present" threshold must be a whole number 2 to 5, got ${s.presentFrom}` });
+    }
+    if (s.kind === 'percent' && !(s.presentFrom >= 1 && s.presentFrom <= 100)) {
+      ctx.addIssue({ code: 'custom', path: ['presentFrom'], message: `on the percent scale the "present" threshold must be 1 to 100, got ${s.presentFrom}` });
+    }
+  })
+  .default(defaultAnswerScale);
 
 const sequence = z.object({
   label: z.string({ error: 'a sequence needs a label' }).trim().min(1, { error: 'a sequence label cannot be empty' }),
@@ -66,6 +86,8 @@ export const studyDesignSchema = z
       .number({ error: 'the seed must be a number' })
       .int({ error: 'the seed must be a whole number' })
       .min(0, { error: 'the seed must be 0 or more' }),
+    answerScale,
+    training: z.boolean({ error: 'training must be true or false' }).default(false),
   })
   .superRefine((d, ctx) => {
     const seen = new Set<string>();

@@ -6,6 +6,7 @@
  *   { label: 'Findings', value: 'nodule' }.
  */
 import type { CaseSetManifest } from './case-set';
+import { thresholdWords } from './answer-scale';
 import type { PlantSpec, Sequence, StudyDesign } from './design';
 import type { SuggestionTable } from './suggestions';
 import { blockAssistance } from './case-blocks';
@@ -29,6 +30,12 @@ export const periodWords = (sequence: Sequence, period: number, blocks: number, 
 const plantWords = (spec: PlantSpec): string =>
   spec.mode === 'count' ? `${spec.value} per finding` : `${(spec.value * 100).toFixed(1).replace(/\.0$/, '')}% of eligible case-findings`;
 
+const SCALE_WORDS = {
+  'call-confidence': () => 'present or absent, with a confidence',
+  'five-point': (d: StudyDesign) => `five-point rating: ${d.answerScale.labels.map((l, i) => `${i + 1} ${l}`).join(', ')}`,
+  percent: () => 'likelihood present, 0 to 100%',
+} as const;
+
 const CAUTION_WORDS = { off: 'not shown', all: 'shown on every aided read', 'random-half': 'shown on a random half of each reader’s aided reads' } as const;
 
 export const designSummary = (
@@ -46,7 +53,16 @@ export const designSummary = (
     { label: 'Washout', value: `${design.washoutDays} day${design.washoutDays === 1 ? '' : 's'} between periods` },
     { label: 'Model threshold', value: `score ${design.threshold} or more counts as "present" when the case set gives no call` },
     { label: 'Suggestion shows', value: design.showScore ? 'call and score' : 'call only' },
-    { label: 'Confidence', value: design.askConfidence ? 'asked with every call (0-100)' : 'not asked' },
+    { label: 'Answer scale', value: SCALE_WORDS[design.answerScale.kind](design) },
+    ...(design.answerScale.kind === 'call-confidence'
+      ? [{ label: 'Confidence', value: design.askConfidence ? 'asked with every call (0-100)' : 'not asked' }]
+      : [{ label: 'Call from rating', value: thresholdWords(design.answerScale) }]),
+    {
+      label: 'Training',
+      value: design.training
+        ? 'yes: the truth is shown after each case (reads are marked training and kept out of measurement statistics)'
+        : 'no: readers see no truth during reading (practice cases excepted)',
+    },
     { label: 'Caution notice', value: design.caution.mode === 'off' ? CAUTION_WORDS.off : `${CAUTION_WORDS[design.caution.mode]}: "${design.caution.text}"` },
     { label: 'Planted false positives', value: plantWords(design.planted.falsePositive) },
     { label: 'Planted false negatives', value: plantWords(design.planted.falseNegative) },

@@ -3,6 +3,8 @@
  * Everything random in a study is derived from `seed`, so a saved design reproduces the study.
  */
 
+import { defaultAnswerScale, type AnswerScale } from './answer-scale';
+
 export const ASSISTANCE = ['none', 'concurrent', 'sequential'] as const;
 export type Assistance = (typeof ASSISTANCE)[number];
 
@@ -35,6 +37,10 @@ export type StudyDesign = {
   /** a rest screen every N cases; null for none */
   breakEvery: number | null;
   seed: number;
+  /** how readers answer: call + confidence, a five-point rating or a 0..100 likelihood (src/core/answer-scale.ts) */
+  answerScale: AnswerScale;
+  /** a training study: the truth is shown after each case (measurement studies stay blind) */
+  training: boolean;
 };
 
 export const defaultDesign = (findings: string[]): StudyDesign => ({
@@ -52,4 +58,16 @@ export const defaultDesign = (findings: string[]): StudyDesign => ({
   blocks: 1,
   breakEvery: null,
   seed: 20261201,
+  answerScale: defaultAnswerScale(),
+  training: false,
 });
+
+/**
+ * A design stored before answer scales and training existed reads as call-confidence and not
+ * training (the same defaults as the schema). Returns the design itself when nothing is missing.
+ */
+export const withDesignDefaults = (design: StudyDesign): StudyDesign => {
+  const partial: Partial<Pick<StudyDesign, 'answerScale' | 'training'>> = design;
+  if (partial.answerScale !== undefined && partial.training !== undefined) return design;
+  return { ...design, answerScale: partial.answerScale ?? defaultAnswerScale(), training: partial.training ?? false };
+};

@@ -2,6 +2,7 @@
  * The read log (docs/formats.md, "The read log"): one row per read. This is the one shape that the store
  * exports, the CLI parses and the analysis engine consumes.
  */
+import type { AnswerScaleKind } from './answer-scale';
 import type { Assistance } from './design';
 
 /** Required columns, in this order. Case attributes follow as `case_<name>`. */
@@ -13,6 +14,14 @@ export const READ_LOG_COLUMNS = [
 ] as const;
 
 export type ReadLogColumn = (typeof READ_LOG_COLUMNS)[number];
+
+/**
+ * Optional columns, written after `shown_at` in this order; a log without them stays valid
+ * (empty or missing: scale call-confidence, no ratings, training 0, withdrawn 0).
+ */
+export const READ_LOG_OPTIONAL_COLUMNS = ['scale', 'initial_rating', 'final_rating', 'training', 'withdrawn'] as const;
+
+export type ReadLogOptionalColumn = (typeof READ_LOG_OPTIONAL_COLUMNS)[number];
 
 export type Bit = 0 | 1;
 
@@ -41,8 +50,16 @@ export type ReadRow = {
   final_confidence: number | null;
   total_ms: number;
   shown_at: string;
+  /** the answer scale of the read (src/core/answer-scale.ts) */
+  scale: AnswerScaleKind;
+  /** sequential only: the rating before the suggestion (1..5 five-point, 0..100 percent); null on call-confidence */
+  initial_rating: number | null;
+  /** the final rating; null on call-confidence */
+  final_rating: number | null;
+  /** 1 when read in a training study that showed the truth after each case */
+  training: Bit;
+  /** 1 when the reader was withdrawn from the study (left out of statistics by default) */
+  withdrawn: Bit;
   /** case attributes, keyed without the `case_` prefix (e.g. { scanner: 'B' }) */
   case_attributes: Record<string, string>;
-  /** 1 when the reader was withdrawn from the study (their reads stay in the log) */
-  withdrawn?: Bit;
 };

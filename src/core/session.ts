@@ -5,6 +5,7 @@
  * resumes exactly at the first unanswered step after a crash, and there is no way back to a
  * committed answer (a step once answered is never the current step again).
  */
+import { ratingProblem, type AnswerScaleKind } from './answer-scale';
 import type { Assistance } from './design';
 import type { Bit } from './read-log';
 
@@ -24,8 +25,11 @@ export type Phase = 'initial' | 'final';
 /** A step is one question: one finding of one case, and for sequential reads its phase. */
 export type Step = { itemIndex: number; finding: string; phase: Phase };
 
-/** One committed call: the call, its confidence (null when none is asked) and ms since the case was shown. */
-export type AnswerPart = { call: Bit; confidence: number | null; ms: number };
+/**
+ * One committed call: the call, its confidence (null when none is asked), ms since the case was
+ * shown, and on a rating scale the rating the call came from (absent on reads stored before scales).
+ */
+export type AnswerPart = { call: Bit; confidence: number | null; ms: number; rating?: number | null };
 
 /** What has been committed for one finding of one case. */
 export type CommittedAnswer = {
@@ -80,10 +84,19 @@ export const currentPosition = (plan: SessionPlan, answers: readonly CommittedAn
 export const suggestionVisible = (assistance: Assistance, phase: Phase): boolean =>
   assistance === 'concurrent' || (assistance === 'sequential' && phase === 'final');
 
-export type AnswerInput = { call: Bit | null; confidence: number | null };
+export type AnswerInput = { call: Bit | null; confidence: number | null; rating?: number | null };
 
-/** Plain-language reason why an answer cannot be committed yet, or null when it can. */
-export const answerProblem = (input: AnswerInput, askConfidence: boolean): string | null => {
+/**
+ * Plain-language reason why an answer cannot be committed yet, or null when it can. On a rating
+ * scale the rating is what is asked (the call follows from it); an unset rating is refused.
+ */
+export const answerProblem = (input: AnswerInput, askConfidence: boolean, scale: AnswerScaleKind = 'call-confidence'): string | null => {
+  if (scale !== 'call-confidence') {
+    const rating = input.rating ?? null;
+    if (rating === null) return scale === 'five-point' ? 'Choose a rating first (keys 1-5).' : 'Set the likelihood first.';
+    const problem = ratingProblem(scale, rating);
+    return problem === null ? null : `${problem.charAt(0).toUpperCase()}${problem.slice(1)}.`;
+  }
   if (input.call === null) return 'Choose present or absent first.';
   if (askConfidence) {
     if (input.confidence === null) return 'Set your confidence first.';

@@ -1,5 +1,5 @@
 /** The data dictionary written beside reads.csv: one line per column, and the standing caution. */
-import { READ_LOG_COLUMNS, type ReadLogColumn } from '../core/read-log';
+import { READ_LOG_COLUMNS, READ_LOG_OPTIONAL_COLUMNS, type ReadLogColumn, type ReadLogOptionalColumn } from '../core/read-log';
 import { RESEARCH_CAUTION } from '../core/research-caution';
 
 const MEANING: Record<ReadLogColumn, string> = {
@@ -28,6 +28,14 @@ const MEANING: Record<ReadLogColumn, string> = {
   shown_at: 'ISO 8601 UTC: when the case was shown',
 };
 
+const OPTIONAL_MEANING: Record<ReadLogOptionalColumn, string> = {
+  scale: 'call-confidence / five-point / percent: the answer scale of the read; empty means call-confidence',
+  initial_rating: 'number: sequential only, the rating before the suggestion (1..5 on five-point, 0..100 on percent); empty on call-confidence',
+  final_rating: 'number: the final rating (1 definitely absent ... 5 definitely present on five-point; 0..100 likelihood present on percent); empty on call-confidence',
+  training: '0/1: 1 when read in a training study that showed the truth after each case (kept out of measurement statistics)',
+  withdrawn: '0/1: 1 when the reader was withdrawn from the study (left out of statistics by default)',
+};
+
 export const dataDictionary = (attributeNames: readonly string[]): string => [
   '# reads.csv: data dictionary',
   '',
@@ -37,7 +45,10 @@ export const dataDictionary = (attributeNames: readonly string[]): string => [
   'Derived score (0..100, likelihood the finding is present): final_call = 1 ? 50 + final_confidence/2 : 50 - final_confidence/2.',
   "Full description: docs/formats.md (this file's format) and docs/methods.md (the statistics) in Heed's repository.",
   '',
+  'On a rating scale the rating is the ROC score, and the call follows from the study threshold (call = 1 when rating >= threshold); see docs/scales-and-training.md.',
+  '',
   ...READ_LOG_COLUMNS.map((c) => `${c}: ${MEANING[c]}`),
+  ...READ_LOG_OPTIONAL_COLUMNS.map((c) => `${c}: ${OPTIONAL_MEANING[c]}`),
   ...attributeNames.map((a) => `case_${a}: text, case attribute "${a}" from the case set`),
   '',
 ].join('\n');

@@ -1,17 +1,18 @@
 /**
  * Writes the read log (docs/formats.md, "The read log"): UTF-8, comma-separated, header row, "\n" line ends,
- * RFC 4180 quoting (by papaparse), booleans 0/1, empty where a value does not apply, then one
- * `case_<name>` column per case attribute.
+ * RFC 4180 quoting (by papaparse), booleans 0/1, empty where a value does not apply, then the
+ * optional columns (scale, ratings, training, withdrawn), then one `case_<name>` column per case attribute.
  */
 import Papa from 'papaparse';
-import { READ_LOG_COLUMNS, type ReadRow } from '../core/read-log';
+import { READ_LOG_COLUMNS, READ_LOG_OPTIONAL_COLUMNS, type ReadRow } from '../core/read-log';
 
 const cell = (value: string | number | null): string => (value === null ? '' : String(value));
 
 export const readLogCsv = (rows: readonly ReadRow[], attributeNames: readonly string[]): string => {
-  const header = [...READ_LOG_COLUMNS, ...attributeNames.map((name) => `case_${name}`)];
+  const header = [...READ_LOG_COLUMNS, ...READ_LOG_OPTIONAL_COLUMNS, ...attributeNames.map((name) => `case_${name}`)];
   const data = rows.map((row) => [
     ...READ_LOG_COLUMNS.map((column) => cell(row[column])),
+    ...READ_LOG_OPTIONAL_COLUMNS.map((column) => cell(row[column])),
     ...attributeNames.map((name) => row.case_attributes[name] ?? ''),
   ]);
   return `${Papa.unparse({ fields: header, data }, { newline: '\n', quotes: false, quoteChar: '"', escapeChar: '"' })}\n`;

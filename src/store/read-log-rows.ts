@@ -49,8 +49,12 @@ export const studyReadRows = async (db: HeedDb, studyId: string): Promise<ReadRo
       final_confidence: read.final.confidence,
       total_ms: read.final.ms,
       shown_at: read.shownAt,
+      scale: study.design.answerScale.kind,
+      initial_rating: sequential ? read.initial?.rating ?? null : null,
+      final_rating: read.final.rating ?? null,
+      training: (study.design.training ? 1 : 0) satisfies Bit,
+      withdrawn: (reader.withdrawn ? 1 : 0) satisfies Bit,
       case_attributes: caseRecord.attributes,
-      withdrawn: reader.withdrawn ? 1 : 0,
     });
   }
   const findingOrder = new Map(study.design.findings.map((f, i) => [f, i]));

@@ -62,6 +62,8 @@ export type AnswerCommit = {
   step: { itemIndex: number; finding: string; phase: Phase };
   call: Bit;
   confidence: number | null;
+  /** the rating on a five-point or percent scale (the call came from it); null or absent on call-confidence */
+  rating?: number | null;
   ms: number;
   shownAt: string;
   suggestion: { call: Bit; score: number | null; planted: boolean } | null;
@@ -81,7 +83,9 @@ export const commitAnswerAndRead = (db: HeedDb, input: AnswerCommit): Promise<Co
     if (!item) throw new Error(`session ${session.id} has no item ${input.step.itemIndex}`);
     const id = readId(session.id, item.caseId, input.step.finding);
     const previous = reads.find((r) => r.id === id) ?? null;
-    const answer = applyCommit(position, input.step, previous ? toAnswer(previous) : null, { call: input.call, confidence: input.confidence, ms: input.ms });
+    const answer = applyCommit(position, input.step, previous ? toAnswer(previous) : null, {
+      call: input.call, confidence: input.confidence, ms: input.ms, ...(input.rating == null ? {} : { rating: input.rating }),
+    });
     const read: StoredRead = {
       id, sessionId: session.id, studyId: session.studyId, readerId: session.readerId, period: session.period,
       caseId: item.caseId, finding: input.step.finding, initial: answer.initial, final: answer.final,
@@ -92,6 +96,7 @@ export const commitAnswerAndRead = (db: HeedDb, input: AnswerCommit): Promise<Co
     await db.reads.put(read);
     await appendEvent(db, session.studyId, input.step.phase === 'initial' ? 'initial-committed' : 'final-committed', {
       sessionId: session.id, caseId: item.caseId, finding: input.step.finding, call: input.call, confidence: input.confidence, ms: input.ms,
+      ...(input.rating == null ? {} : { rating: input.rating }),
     });
     const next = currentPosition(plan, [...reads.filter((r) => r.id !== id), read].map(toAnswer));
     if (next.done) {
@@ -105,6 +110,6 @@ export const commitAnswerAndRead = (db: HeedDb, input: AnswerCommit): Promise<Co
 export const commitAnswer = async (db: HeedDb, input: AnswerCommit): Promise<SessionPosition> =>
   (await commitAnswerAndRead(db, input)).position;
 
-/** Records a moment of a session that is not an answer (pause, resume, break, reopened after a stop). */
-export const logSessionMoment = (db: HeedDb, session: StoredSession, type: 'paused' | 'resumed' | 'break-taken' | 'session-reopened', detail: Record<string, unknown>): Promise<unknown> =>
+/** Records a moment of a session that is not an answer (pause, resume, break, practice over, truth shown, reopened after a stop). */
+export const logSessionMoment = (db: HeedDb, session: StoredSession, type: 'paused' | 'resumed' | 'break-taken' | 'practice-over-shown' | 'truth-shown' | 'session-reopened', detail: Record<string, unknown>): Promise<unknown> =>
   db.transaction('rw', db.events, () => appendEvent(db, session.studyId, type, { sessionId: session.id, ...detail }));

@@ -1,5 +1,5 @@
 /** Studies: a design over a case set, with the suggestions it shows. Locked once reading starts. */
-import type { StudyDesign } from '../core/design';
+import { withDesignDefaults, type StudyDesign } from '../core/design';
 import type { HeedDb } from './db';
 import { appendEvent } from './events';
 import { InputError } from './input-error';
@@ -46,7 +46,14 @@ export const updateStudyDesign = async (
 export const getStudy = async (db: HeedDb, id: string): Promise<StoredStudy> => {
   const found = await db.studies.get(id);
   if (!found) throw new Error(`no study with id ${id}`);
-  return found;
+  return withStudyDefaults(found);
 };
 
-export const listStudies = (db: HeedDb): Promise<StoredStudy[]> => db.studies.orderBy('createdAt').toArray();
+export const listStudies = async (db: HeedDb): Promise<StoredStudy[]> => (await db.studies.orderBy('createdAt').toArray()).map(withStudyDefaults);
+
+// Studies stored before a design field existed read with its default (no schema version needed:
+// the field is not indexed).
+const withStudyDefaults = (study: StoredStudy): StoredStudy => {
+  const design = withDesignDefaults(study.design);
+  return design === study.design ? study : { ...study, design };
+};

@@ -64,7 +64,7 @@ describe('spine: a crossover study on the demo set, durably, exported as a read 
     const painted = await study.startPeriod(aidedFirst, 1);
     await readingPage(page).waitForCase(painted);
     const first = await readingPage(page).state();
-    expect(first).toMatchObject({ assistance: 'sequential', phase: 'initial', progress: 'Case 1 of 125' });
+    expect(first).toMatchObject({ assistance: 'sequential', phase: 'initial', progress: 'Practice 1 of 5' });
     expect(await readingPage(page).suggestionText()).toBeNull(); // hidden until the first call is locked
     await readSteps(chrome, aidedFirst, pressed, 1);
     expect((await readingPage(page).state()).phase).toBe('final');
@@ -93,7 +93,7 @@ describe('spine: a crossover study on the demo set, durably, exported as a read 
     await page.screenshot({ path: join(SHOTS, 'reading-concurrent.png') });
     await readSteps(chrome, 'C01', pressed, 7);
     const beforeKill = await readingPage(page).state();
-    expect(beforeKill.progress).toBe('Case 8 of 125');
+    expect(beforeKill.progress).toBe('Case 3 of 120'); // practice (5) counted apart
     await chrome.kill(); // SIGKILL: a crash, not a close
 
     chrome = await browser.launch();
@@ -102,7 +102,7 @@ describe('spine: a crossover study on the demo set, durably, exported as a read 
     await homePage(page).resume(/Resume C01, period 1/);
     await readingPage(page).waitForCase(0);
     const resumed = await readingPage(page).state();
-    expect(resumed).toMatchObject({ caseId: beforeKill.caseId, progress: 'Case 8 of 125', assistance: 'concurrent' });
+    expect(resumed).toMatchObject({ caseId: beforeKill.caseId, progress: 'Case 3 of 120', assistance: 'concurrent' });
     await readSteps(chrome, 'C01', pressed, 3);
 
     // Export the concurrent study and check both logs against what was pressed.

@@ -1,6 +1,7 @@
 // Cell parsers for the read log: each takes the raw cell, its line and column, and returns the
 // typed value or throws a ReadLogError naming the cell. They run on every cell of logs of
 // 100,000 rows, so the common cases are checked character by character before any regex.
+import { ANSWER_SCALES, ratingProblem, ratingRange, type AnswerScaleKind } from '../../core/answer-scale';
 import { ASSISTANCE, type Assistance } from '../../core/design';
 import type { Bit } from '../../core/read-log';
 import { ReadLogError } from './read-log-error';
@@ -85,4 +86,28 @@ const ISO_UTC = /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}(:\d{2}(\.\d+)?)?Z$/;
 export const isoUtc = (raw: string, line: number, column: string): string => {
   if (!ISO_UTC.test(raw) || Number.isNaN(Date.parse(raw))) fail(raw, line, column, 'must be an ISO 8601 UTC time such as 2026-01-31T09:15:00Z');
   return raw;
+};
+
+/** The answer scale of a read; an empty cell (or no column) is call-confidence. */
+export const scale = (raw: string, line: number, column: string): AnswerScaleKind => {
+  if (raw === '') return 'call-confidence';
+  const found = ANSWER_SCALES.find((s) => s === raw);
+  if (found === undefined) return fail(raw, line, column, `must be one of ${ANSWER_SCALES.join(', ')} (or empty for call-confidence)`);
+  return found;
+};
+
+/**
+ * A rating cell of a read on `kind`: empty on call-confidence; on a rating scale required when
+ * `needed` (final always, initial on sequential reads), else empty; five-point whole 1..5, percent 0..100.
+ */
+export const rating = (raw: string, line: number, column: string, kind: AnswerScaleKind, needed: boolean): number | null => {
+  if (kind === 'call-confidence' || !needed) {
+    if (!blank(raw)) fail(raw, line, column, kind === 'call-confidence' ? 'must be empty when the scale is call-confidence' : 'must be empty when the read is not sequential');
+    return null;
+  }
+  if (blank(raw)) return fail(raw, line, column, `must hold the rating when the scale is ${kind}`);
+  const value = number(raw, line, column, -Infinity, Infinity, 'a number');
+  if (ratingProblem(kind, value) === null) return value;
+  const range = ratingRange(kind);
+  return fail(raw, line, column, `must be ${range?.integer ? 'a whole number' : 'a number'} ${range?.min} to ${range?.max} on the ${kind} scale`);
 };

@@ -1,6 +1,6 @@
 // One data row of a reads.csv into a typed read. Cells are checked in a fixed order, so a row
 // with several problems always reports the same (first) one.
-import { READ_LOG_COLUMNS, type ReadLogColumn, type ReadRow } from '../../core/read-log';
+import { READ_LOG_COLUMNS, READ_LOG_OPTIONAL_COLUMNS, type ReadLogColumn, type ReadLogOptionalColumn, type ReadRow } from '../../core/read-log';
 import * as f from './fields';
 import { ReadLogError } from './read-log-error';
 
@@ -14,7 +14,7 @@ export type RowLayout = { at: Readonly<Record<string, number>>; attrs: { name: s
 
 /** The layout of a header whose required columns are known to be present. */
 export const rowLayout = (header: readonly string[]): RowLayout => {
-  const at = Object.fromEntries(READ_LOG_COLUMNS.map((col) => [col, header.indexOf(col)]));
+  const at = Object.fromEntries([...READ_LOG_COLUMNS, ...READ_LOG_OPTIONAL_COLUMNS].map((col) => [col, header.indexOf(col)]));
   const attrs = header.flatMap((name, i) => (name.startsWith('case_') && name !== 'case_id' ? [{ name: name.slice(5), i }] : []));
   const shared = new Map<string, string>();
   const same = (text: string): string => {
@@ -32,13 +32,15 @@ export const rowLayout = (header: readonly string[]): RowLayout => {
  */
 export const parseRow = (cells: readonly string[], line: number, layout: RowLayout): ReadRow => {
   const { at, same } = layout;
-  const cell = (column: ReadLogColumn): string => cells[at[column] ?? -1] ?? '';
+  // an optional column missing from the header reads as empty
+  const cell = (column: ReadLogColumn | ReadLogOptionalColumn): string => cells[at[column] ?? -1] ?? '';
   const assistance = f.assistance(cell('assistance'), line, 'assistance');
   const aiCall = f.optionalBit(cell('ai_call'), line, 'ai_call');
   if (assistance === 'none' && aiCall !== null) throw new ReadLogError(line, 'ai_call', 'must be empty when assistance is none');
   if (assistance !== 'none' && aiCall === null) throw new ReadLogError(line, 'ai_call', `must be 0 or 1 when assistance is ${assistance}`);
   const initialCall = f.optionalBit(cell('initial_call'), line, 'initial_call');
   if (assistance === 'sequential' && initialCall === null) throw new ReadLogError(line, 'initial_call', 'must be 0 or 1 when assistance is sequential');
+  const scale = f.scale(cell('scale'), line, 'scale');
   const case_attributes: Record<string, string> = {};
   for (const a of layout.attrs) case_attributes[a.name] = same(cells[a.i] ?? '');
   // the property order below is the order cells are checked in (and the ReadRow field order)
@@ -66,6 +68,11 @@ export const parseRow = (cells: readonly string[], line: number, layout: RowLayo
     final_confidence: f.optionalNumber(cell('final_confidence'), line, 'final_confidence', 0, 100, 'a confidence in 0..100'),
     total_ms: f.number(cell('total_ms'), line, 'total_ms', 0, Infinity, 'a time in ms >= 0'),
     shown_at: f.isoUtc(cell('shown_at'), line, 'shown_at'),
+    scale,
+    initial_rating: f.rating(cell('initial_rating'), line, 'initial_rating', scale, assistance === 'sequential'),
+    final_rating: f.rating(cell('final_rating'), line, 'final_rating', scale, true),
+    training: f.optionalBit(cell('training'), line, 'training') ?? 0,
+    withdrawn: f.optionalBit(cell('withdrawn'), line, 'withdrawn') ?? 0,
     case_attributes,
   };
 };

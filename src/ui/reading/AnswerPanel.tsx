@@ -1,5 +1,6 @@
 /** Call and confidence for one question; every control has a key and works by mouse too. */
 import type { Bit } from '../../core/read-log';
+import { ScaleSlider } from './ScaleSlider';
 
 type Props = {
   question: string;
@@ -27,13 +28,8 @@ export const AnswerPanel = (p: Props) => (
     </div>
     {p.askConfidence && (
       <label className="answer-confidence">
-        <span>Confidence in this call: <output>{p.confidence === null ? '—' : p.confidence}</output> <small>(0 guessing, 100 certain)</small></span>
-        <input
-          type="range" min={0} max={100} step={5} value={p.confidence ?? 50} disabled={p.busy}
-          aria-label="Confidence" aria-valuetext={p.confidence === null ? 'not set' : String(p.confidence)}
-          className={p.confidence === null ? 'unset' : ''}
-          onChange={(e) => p.onConfidence(Number(e.target.value))}
-        />
+        <span>Confidence in this call: <output>{p.confidence === null ? 'not set' : p.confidence}</output> <small>(0 guessing, 100 certain)</small></span>
+        <ScaleSlider label="Confidence" value={p.confidence} min={0} max={100} step={5} disabled={p.busy} valueText={String} onChange={p.onConfidence} />
         <small className="keys">keys: 1-9 set 10-90, 0 sets 100, ↑ ↓ step 5</small>
       </label>
     )}

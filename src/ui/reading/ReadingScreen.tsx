@@ -5,6 +5,7 @@
  */
 import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import { elapsedMs, pauseClock, resumeClock, startClock, type ActiveClock } from '../../core/active-clock';
+import { callFromRating, defaultAnswerScale } from '../../core/answer-scale';
 import type { Bit } from '../../core/read-log';
 import { RESEARCH_CAUTION } from '../../core/research-caution';
 import { answerProblem, suggestionVisible } from '../../core/session';
@@ -17,9 +18,14 @@ import { AnswerPanel } from './AnswerPanel';
 import { createImageCache } from './image-cache';
 import { DEFAULT_VIEW, ImageViewport, type View } from './ImageViewport';
 import type { GrayImage } from './gray-image';
-import { ReadingDone, ReadingOverlay } from './ReadingOverlay';
+import { progressLabel } from './progress-label';
+import { RatingPanel } from './RatingPanel';
+import { ReadingDone, ReadingOverlay, type Interlude } from './ReadingOverlay';
 import { SuggestionPanel } from './SuggestionPanel';
 import { readingKeyAction } from './reading-keys';
+import { shouldShowTruth, truthLines, type TruthLine } from './truth-feedback';
+import { TruthPanel } from './TruthPanel';
+import { useFullscreenPause } from './use-fullscreen-pause';
 import { useReadingSession } from './use-reading-session';
 
 type Props = { studyId: string; sessionId: string; notice: Notice | null };
@@ -27,12 +33,6 @@ type Props = { studyId: string; sessionId: string; notice: Notice | null };
 /** Logs a session moment; a failed log line must not interrupt reading, so it is reported, not thrown. */
 const logMoment = (...args: Parameters<typeof logSessionMoment>): void => {
   logSessionMoment(...args).catch((e: unknown) => actions.notify({ kind: 'error', text: `Could not log ${args[2]}: ${String(e)}` }));
-};
-
-/** The reading view fills the screen on request (F); leaving it is always one key away. */
-const toggleFullscreen = (): void => {
-  if (document.fullscreenElement) void document.exitFullscreen();
-  else void document.documentElement.requestFullscreen().catch(() => undefined);
 };
 
 export const ReadingScreen = ({ studyId, sessionId, notice }: Props) => {
@@ -45,9 +45,14 @@ export const ReadingScreen = ({ studyId, sessionId, notice }: Props) => {
   const [viewOf, setViewOf] = useState<{ caseId: string; view: View; imageIndex: number } | null>(null);
   const [call, setCall] = useState<Bit | null>(null);
   const [confidence, setConfidence] = useState<number | null>(null);
+  const [rating, setRating] = useState<number | null>(null);
   const [busy, setBusy] = useState(false);
   const [paused, setPaused] = useState(false);
-  const [breaksTaken, setBreaksTaken] = useState<ReadonlySet<string>>(new Set());
+  const pausedNow = useRef(false);
+  // interludes already continued from, keyed `${kind}/${caseId}`
+  const [interludesTaken, setInterludesTaken] = useState<ReadonlySet<string>>(new Set());
+  // the truth after a finished case (training study, or a practice case): shown until the reader continues
+  const [feedback, setFeedback] = useState<{ caseId: string; practice: boolean; lines: TruthLine[] } | null>(null);
   const [clockStarted, setClockStarted] = useState(false);
   const clock = useRef<ActiveClock | null>(null);
   const clockCase = useRef<string | null>(null);
@@ -72,8 +77,13 @@ export const ReadingScreen = ({ studyId, sessionId, notice }: Props) => {
     });
   }, [item]);
   const caseRecord = item ? loaded?.cases.get(item.caseId) : undefined;
-  // A rest screen before this case, until the reader continues: derived, so it holds from the case's first render.
-  const breakFor = item && item.breakBefore && !breaksTaken.has(item.caseId) ? item.caseId : null;
+  const progress = loaded && position && !position.done ? progressLabel(loaded.session.items, position.step.itemIndex) : null;
+  // A cover before this case until the reader continues (the practice-over announcement, then a
+  // rest break): derived, so it holds from the case's first render.
+  const interlude: Interlude | null = !item || feedback ? null
+    : progress?.firstMainAfterPractice && !interludesTaken.has(`practice-over/${item.caseId}`) ? 'practice-over'
+      : item.breakBefore && !interludesTaken.has(`break/${item.caseId}`) ? 'break' : null;
+  const breakFor = interlude === null ? null : item?.caseId ?? null;
   const currentRead = item && position && !position.done
     ? reads.find((r) => r.caseId === item.caseId && r.finding === position.step.finding) : undefined;
 
@@ -101,7 +111,7 @@ export const ReadingScreen = ({ studyId, sessionId, notice }: Props) => {
 
   // The clock of a case starts when its pixels are drawn (and not during a break).
   const onDrawn = useCallback(() => {
-    if (!item || breakFor || clockCase.current === item.caseId) return;
+    if (!item || breakFor || feedback || clockCase.current === item.caseId) return;
     clockCase.current = item.caseId;
     const now = performance.now();
     const resumedInitial = currentRead?.initial?.ms ?? 0;
@@ -111,59 +121,81 @@ export const ReadingScreen = ({ studyId, sessionId, notice }: Props) => {
     setClockStarted(true);
     shownAt.current = currentRead?.shownAt ?? new Date().toISOString();
     requestAnimationFrame(() => signal('case-painted', { caseId: item.caseId }));
-  }, [item, breakFor, currentRead, paused]);
+  }, [item, breakFor, feedback, currentRead, paused]);
 
   useEffect(() => {
-    if (position?.done) signal('ready', { screen: 'reading-done' });
-  }, [position]);
+    if (position?.done && !feedback) signal('ready', { screen: 'reading-done' });
+  }, [position, feedback]);
 
-  const askConfidence = loaded?.study.design.askConfidence ?? true;
-  const problem = answerProblem({ call, confidence }, askConfidence);
+  const design = loaded?.study.design;
+  const scale = design?.answerScale ?? defaultAnswerScale();
+  const ratingScale = scale.kind !== 'call-confidence';
+  const askConfidence = !ratingScale && (design?.askConfidence ?? true);
+  const problem = answerProblem({ call, confidence, rating }, askConfidence, scale.kind);
 
   const doCommit = useCallback(async () => {
-    if (busy || paused || breakFor || problem !== null || call === null || !clock.current) return;
+    if (busy || paused || breakFor || feedback || problem !== null || !clock.current || !item || !loaded) return;
+    const committedCall = ratingScale && rating !== null ? callFromRating(scale, rating) : call;
+    if (committedCall === null) return;
     const ms = elapsedMs(clock.current, performance.now());
     setBusy(true);
     try {
-      const next = await commit({ call, confidence: askConfidence ? confidence : null, ms, shownAt: shownAt.current });
+      const result = await commit({
+        call: committedCall, confidence: askConfidence ? confidence : null, rating: ratingScale ? rating : null, ms, shownAt: shownAt.current,
+      });
+      const next = result?.next;
+      const caseFinished = !next || next.done || next.item.caseId !== item.caseId;
       if (!next || next.done || next.item.caseId !== clockCase.current) {
         // a new case: no answer is taken until its own image is drawn and its clock starts
         clock.current = null;
         setClockStarted(false);
       }
+      // the answer is committed before the truth shows: after a crash, reading resumes at the next question
+      if (result && caseFinished && caseRecord && shouldShowTruth(loaded.study.design.training, item.practice)) {
+        setFeedback({ caseId: item.caseId, practice: item.practice, lines: truthLines(caseRecord, result.reads, loaded.study.design.findings) });
+        logMoment(db, loaded.session, 'truth-shown', { caseId: item.caseId, practice: item.practice, training: loaded.study.design.training });
+      }
       setCall(null);
       setConfidence(null);
+      setRating(null);
       signal('saved');
     } catch (e) {
       actions.notify({ kind: 'error', text: `Not saved: ${e instanceof Error ? e.message : String(e)}` });
     } finally {
       setBusy(false);
     }
-  }, [busy, paused, breakFor, problem, call, confidence, askConfidence, commit]);
+  }, [busy, paused, breakFor, feedback, problem, call, confidence, rating, ratingScale, scale, askConfidence, commit, item, loaded, caseRecord, db]);
 
-  const togglePause = useCallback(() => {
-    if (!clock.current) return;
+  // Pausing works at any moment of a case: before its image is drawn (the clock then starts
+  // paused) and while a save finishes (that answer's time was already taken).
+  const setPause = useCallback((next: boolean, why: string) => {
+    if (pausedNow.current === next) return;
     const now = performance.now();
-    clock.current = paused ? resumeClock(clock.current, now) : pauseClock(clock.current, now);
-    setPaused(!paused);
-    if (loaded) logMoment(db, loaded.session, paused ? 'resumed' : 'paused', { caseId: clockCase.current });
-  }, [paused, db, loaded]);
+    if (clock.current) clock.current = next ? pauseClock(clock.current, now) : resumeClock(clock.current, now);
+    pausedNow.current = next;
+    setPaused(next);
+    if (loaded) logMoment(db, loaded.session, next ? 'paused' : 'resumed', { caseId: clockCase.current, by: why });
+  }, [db, loaded]);
+  const togglePause = useCallback(() => setPause(!pausedNow.current, 'reader'), [setPause]);
+  const toggleFullscreen = useFullscreenPause(useCallback(() => setPause(true, 'left full screen'), [setPause]));
 
   const endBreak = useCallback(() => {
-    if (!breakFor) return;
-    setBreaksTaken((taken) => new Set([...taken, breakFor]));
-    if (loaded) logMoment(db, loaded.session, 'break-taken', { beforeCase: breakFor });
-  }, [breakFor, db, loaded]);
+    if (!breakFor || !interlude) return;
+    setInterludesTaken((taken) => new Set([...taken, `${interlude}/${breakFor}`]));
+    if (loaded) logMoment(db, loaded.session, interlude === 'break' ? 'break-taken' : 'practice-over-shown', { beforeCase: breakFor });
+  }, [breakFor, interlude, db, loaded]);
+
+  const endFeedback = useCallback(() => setFeedback(null), []);
 
   useEffect(() => {
     const onKey = (event: KeyboardEvent) => {
-      const action = readingKeyAction(event);
+      const action = readingKeyAction(event, scale.kind);
       if (!action) return;
       event.preventDefault();
       if (action.kind === 'fullscreen') { toggleFullscreen(); return; }
+      if (feedback) { if (action.kind === 'commit') endFeedback(); return; }
       if (action.kind === 'pause') {
-        if (busy) return; // a save is finishing; pausing now would split its clock from the next case's
-        if (breakFor) endBreak(); else togglePause();
+        if (breakFor && !pausedNow.current) endBreak(); else togglePause();
         return;
       }
       if (paused || busy) return;
@@ -172,6 +204,8 @@ export const ReadingScreen = ({ studyId, sessionId, notice }: Props) => {
         case 'call': setCall(action.call); break;
         case 'confidence': setConfidence(action.value); break;
         case 'confidence-step': setConfidence((c) => Math.min(100, Math.max(0, (c ?? 50) + action.step))); break;
+        case 'rating': setRating(action.value); break;
+        case 'rating-step': setRating((r) => Math.min(100, Math.max(0, (r ?? 50) + action.step))); break;
         case 'commit': void doCommit(); break;
         case 'zoom': setView((v) => ({ ...v, zoom: Math.min(8, Math.max(0.5, v.zoom * action.factor)) })); break;
         case 'reset-view': setView(DEFAULT_VIEW); break;
@@ -180,10 +214,11 @@ export const ReadingScreen = ({ studyId, sessionId, notice }: Props) => {
     };
     window.addEventListener('keydown', onKey);
     return () => window.removeEventListener('keydown', onKey);
-  }, [paused, busy, breakFor, doCommit, togglePause, endBreak, caseRecord, setView, setImageIndex]);
+  }, [paused, busy, breakFor, feedback, scale.kind, doCommit, togglePause, toggleFullscreen, endBreak, endFeedback, caseRecord, setView, setImageIndex]);
 
   if (error) return <main className="reading"><p role="alert">Cannot open this session: {error}</p></main>;
   if (!loaded || !position) return <main className="reading" aria-busy="true"><p>Opening the session…</p></main>;
+  if (position.done && feedback) return <main className="reading"><TruthPanel lines={feedback.lines} practice={feedback.practice} onContinue={endFeedback} /></main>;
   if (position.done) return <ReadingDone readerCode={loaded.readerCode} period={loaded.session.period} onBack={() => actions.handOver(studyId)} />;
 
   const { step } = position;
@@ -191,23 +226,25 @@ export const ReadingScreen = ({ studyId, sessionId, notice }: Props) => {
   const shown = loaded.suggestions.get(suggestionKey(current.caseId, step.finding));
   const visible = suggestionVisible(current.assistance, step.phase) && shown !== undefined;
   const sequential = current.assistance === 'sequential';
-  const phaseLabel = sequential ? (step.phase === 'initial' ? 'first call' : 'final call') : 'call';
+  const answerWord = ratingScale ? 'rating' : 'call';
+  const phaseLabel = sequential ? (step.phase === 'initial' ? `first ${answerWord}` : `final ${answerWord}`) : answerWord;
   const findingCount = loaded.study.design.findings.length;
 
   return (
     <main className="reading" data-case={current.caseId} data-phase={step.phase} data-assistance={current.assistance}>
       <header className="reading-bar">
-        <span className="reading-progress" role="status" aria-label="Progress">Case {position.caseNumber} of {position.caseCount}</span>
+        <span className="reading-progress" role="status" aria-label="Progress">{progress?.text}</span>
         {current.practice && <span className="badge badge-practice">Practice case</span>}
+        {loaded.study.design.training && <span className="badge badge-practice">Training: the truth follows each case</span>}
         {findingCount > 1 && <span>Question {loaded.study.design.findings.indexOf(step.finding) + 1} of {findingCount}</span>}
         <span className="reading-reader">Reader {loaded.readerCode} · period {loaded.session.period}</span>
         <span className="reading-caution" title={RESEARCH_CAUTION}>Research and training tool, not a medical device</span>
         <button type="button" onClick={toggleFullscreen}>Full screen <kbd>F</kbd></button>
-        <button type="button" onClick={togglePause} disabled={!clockStarted}>{paused ? 'Resume' : 'Pause'} <kbd>Esc</kbd></button>
+        <button type="button" onClick={togglePause} disabled={!clockStarted && !paused}>{paused ? 'Resume' : 'Pause'} <kbd>Esc</kbd></button>
       </header>
       <div className="reading-body">
         <div className="reading-image">
-          <ImageViewport image={image} view={view} onView={setView} hidden={paused || breakFor !== null || image === null} onDrawn={onDrawn} />
+          <ImageViewport image={image} view={view} onView={setView} hidden={paused || breakFor !== null || feedback !== null || image === null} onDrawn={onDrawn} />
           <div className="view-controls" role="group" aria-label="Image controls">
             {caseRecord && caseRecord.images.length > 1 && (
               <span>Image {imageIndex + 1} of {caseRecord.images.length} <kbd>[</kbd> <kbd>]</kbd></span>
@@ -221,21 +258,30 @@ export const ReadingScreen = ({ studyId, sessionId, notice }: Props) => {
         <aside className="reading-side">
           {sequential && step.phase === 'final' && currentRead?.initial && (
             <p className="locked-initial">
-              Your first call (locked): {currentRead.initial.call === 1 ? 'present' : 'absent'}
-              {currentRead.initial.confidence !== null ? `, confidence ${currentRead.initial.confidence}` : ''}
+              {currentRead.initial.rating != null
+                ? `Your first rating (locked): ${scale.kind === 'percent' ? `${currentRead.initial.rating}%` : `${currentRead.initial.rating} ${scale.labels[currentRead.initial.rating - 1] ?? ''}`}`
+                : `Your first call (locked): ${currentRead.initial.call === 1 ? 'present' : 'absent'}${currentRead.initial.confidence !== null ? `, confidence ${currentRead.initial.confidence}` : ''}`}
             </p>
           )}
           {visible && shown && (
             <SuggestionPanel call={shown.call} score={loaded.study.design.showScore ? shown.score : null} caution={current.caution ? loaded.study.design.caution.text : null} />
           )}
-          <AnswerPanel
-            question={`Finding “${step.finding}”: present or absent?`}
-            call={call} confidence={confidence} askConfidence={askConfidence} problem={problem} busy={busy}
-            phaseLabel={phaseLabel} onCall={setCall} onConfidence={setConfidence} onCommit={() => void doCommit()}
-          />
+          {ratingScale ? (
+            <RatingPanel
+              question={`Finding “${step.finding}”: how likely is it present?`} scale={scale} rating={rating} problem={problem} busy={busy}
+              phaseLabel={phaseLabel} onRating={setRating} onCommit={() => void doCommit()}
+            />
+          ) : (
+            <AnswerPanel
+              question={`Finding “${step.finding}”: present or absent?`}
+              call={call} confidence={confidence} askConfidence={askConfidence} problem={problem} busy={busy}
+              phaseLabel={phaseLabel} onCall={setCall} onConfidence={setConfidence} onCommit={() => void doCommit()}
+            />
+          )}
         </aside>
       </div>
-      <ReadingOverlay paused={paused} onBreak={breakFor !== null} onContinue={paused ? togglePause : endBreak} onLeave={() => actions.handOver(studyId)} />
+      <ReadingOverlay paused={paused} interlude={interlude} onContinue={paused ? togglePause : endBreak} onLeave={() => actions.handOver(studyId)} />
+      {feedback && !paused && <TruthPanel lines={feedback.lines} practice={feedback.practice} onContinue={endFeedback} />}
       {notice?.kind === 'error' && <p className="reading-error" role="alert">{notice.text} <button type="button" onClick={actions.clearNotice}>OK</button></p>}
     </main>
   );

@@ -2,7 +2,7 @@
  * Loads a reading session and commits its answers. The position always comes back from the
  * store after a commit, so what the screen shows next is what the database holds.
  */
-import { useCallback, useEffect, useState } from 'react';
+import { useCallback, useEffect, useRef, useState } from 'react';
 import type { CaseRecord } from '../../core/case-set';
 import type { Bit } from '../../core/read-log';
 import type { SessionPosition } from '../../core/session';
@@ -23,10 +23,14 @@ export type LoadedSession = {
   readerCode: string;
 };
 
+export type CommitResult = { next: SessionPosition; reads: StoredRead[] };
+
 export const useReadingSession = (db: HeedDb, studyId: string, sessionId: string) => {
   const [loaded, setLoaded] = useState<LoadedSession | null>(null);
   const [position, setPosition] = useState<SessionPosition | null>(null);
-  const [reads, setReads] = useState<StoredRead[]>([]);
+  const [reads, setReadsState] = useState<StoredRead[]>([]);
+  // the latest reads, also outside renders: the truth after a case is built from them right after a commit
+  const readsNow = useRef<StoredRead[]>([]);
   const [error, setError] = useState<string | null>(null);
 
   useEffect(() => {
@@ -45,7 +49,8 @@ export const useReadingSession = (db: HeedDb, studyId: string, sessionId: string
         cases: new Map(caseSet.manifest.cases.map((c) => [c.caseId, c])),
         suggestions: indexSuggestions(study.suggestions),
       });
-      setReads(committed);
+      readsNow.current = committed;
+      setReadsState(committed);
       setPosition(next);
       if (committed.length > 0 && !next.done) {
         void logSessionMoment(db, session, 'session-reopened', { atCase: next.item.caseId, phase: next.step.phase });
@@ -54,21 +59,23 @@ export const useReadingSession = (db: HeedDb, studyId: string, sessionId: string
     return () => { live = false; };
   }, [db, studyId, sessionId]);
 
-  const commit = useCallback(async (answer: { call: Bit; confidence: number | null; ms: number; shownAt: string }): Promise<SessionPosition | null> => {
+  const commit = useCallback(async (answer: { call: Bit; confidence: number | null; rating: number | null; ms: number; shownAt: string }): Promise<CommitResult | null> => {
     if (!loaded || !position || position.done) return null;
     const { step, item } = position;
     const shown = loaded.suggestions.get(suggestionKey(item.caseId, step.finding));
     const aided = item.assistance !== 'none';
     const { position: next, read } = await commitAnswerAndRead(db, {
       session: loaded.session, findings: loaded.study.design.findings, step,
-      call: answer.call, confidence: answer.confidence, ms: answer.ms, shownAt: answer.shownAt,
+      call: answer.call, confidence: answer.confidence, rating: answer.rating, ms: answer.ms, shownAt: answer.shownAt,
       suggestion: aided && shown ? { call: shown.call, score: loaded.study.design.showScore ? shown.score : null, planted: shown.planted } : null,
       cautionShown: aided && item.caution,
     });
     // the stored read comes back from the transaction: no second query before the next case
-    setReads((current) => [...current.filter((r) => r.id !== read.id), read]);
+    const updated = [...readsNow.current.filter((r) => r.id !== read.id), read];
+    readsNow.current = updated;
+    setReadsState(updated);
     setPosition(next);
-    return next;
+    return { next, reads: updated };
   }, [db, loaded, position]);
 
   return { loaded, position, reads, error, commit };

@@ -1,4 +1,5 @@
 /** The fields of a study design: conditions, crossover, suggestion display, planted errors, notice. */
+import { defaultAnswerScale } from '../../core/answer-scale';
 import type { StoredCaseSet } from '../../store/records';
 import type { DesignFormValues } from './design-form-state';
 import { problemsOf, type FieldProblem, type FormField } from './design-form-problems';
@@ -57,7 +58,24 @@ export const DesignFields = ({ values: v, caseSet, onChange, problems = [] }: Pr
         <label>Threshold for a “present” call <input inputMode="decimal" value={v.threshold} onChange={(e) => set('threshold', e.target.value)} /></label>
         {show('threshold')}
         <label className="inline"><input type="checkbox" checked={v.showScore} onChange={(e) => set('showScore', e.target.checked)} /> Show the score beside the call</label>
-        <label className="inline"><input type="checkbox" checked={v.askConfidence} onChange={(e) => set('askConfidence', e.target.checked)} /> Ask readers for their confidence</label>
+        {v.scaleKind === 'call-confidence' && <label className="inline"><input type="checkbox" checked={v.askConfidence} onChange={(e) => set('askConfidence', e.target.checked)} /> Ask readers for their confidence</label>}
+      </fieldset>
+      <fieldset>
+        <legend>Answers and feedback</legend>
+        <label>Answer scale <select value={v.scaleKind} onChange={(e) => set('scaleKind', e.target.value === 'five-point' ? 'five-point' : e.target.value === 'percent' ? 'percent' : 'call-confidence')}>
+          <option value="call-confidence">present or absent, with a confidence</option>
+          <option value="five-point">five-point rating (1 definitely absent … 5 definitely present)</option>
+          <option value="percent">likelihood present, 0 to 100%</option>
+        </select></label>
+        {v.scaleKind === 'five-point' && v.scaleLabels.map((label, i) => (
+          <label key={i}>Label of rating {i + 1} <input value={label} onChange={(e) => set('scaleLabels', v.scaleLabels.map((l, j) => (j === i ? e.target.value : l)))} /></label>
+        ))}
+        {v.scaleKind !== 'call-confidence' && (
+          <label>Rating counted as present from <input inputMode="decimal" value={v.presentFrom} placeholder={String(defaultAnswerScale(v.scaleKind).presentFrom)} onChange={(e) => set('presentFrom', e.target.value)} />
+            <small>the call is “present” when the rating is at or above this value ({v.scaleKind === 'five-point' ? '2 to 5; default 4' : '1 to 100; default 50'})</small></label>
+        )}
+        <label className="inline"><input type="checkbox" checked={v.training} onChange={(e) => set('training', e.target.checked)} /> Training: show the truth after each case</label>
+        <small>A training study shows each reader the truth, whether the suggestion was right and whether they followed it; its reads are marked and kept out of measurement statistics. Practice cases always show the truth.</small>
       </fieldset>
       <fieldset>
         <legend>Planted errors</legend>

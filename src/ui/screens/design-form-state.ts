@@ -1,4 +1,5 @@
 /** The new-study form's values, and how they become a StudyDesign. */
+import { DEFAULT_FIVE_POINT_LABELS, defaultAnswerScale, type AnswerScaleKind } from '../../core/answer-scale';
 import { defaultDesign, type Assistance, type CautionMode, type Sequence, type StudyDesign } from '../../core/design';
 
 export type DesignFormValues = {
@@ -21,6 +22,12 @@ export type DesignFormValues = {
   blocks: string;
   breakEvery: string;
   seed: string;
+  /** answer scale, its five-point labels and the rating from which the call is "present" */
+  scaleKind: AnswerScaleKind;
+  scaleLabels: string[];
+  presentFrom: string;
+  /** a training study: the truth is shown after each case */
+  training: boolean;
 };
 
 export const initialFormValues = (caseSetId: string, findings: string[]): DesignFormValues => {
@@ -29,6 +36,7 @@ export const initialFormValues = (caseSetId: string, findings: string[]): Design
     name: '', caseSetId, findings, aidedMode: 'sequential', customSequences: '', washoutDays: String(d.washoutDays), threshold: String(d.threshold),
     showScore: d.showScore, askConfidence: d.askConfidence, plantedFalsePositive: '0', plantedFalseNegative: '0', plantMode: 'count',
     stratifyBy: '', cautionMode: d.caution.mode, cautionText: d.caution.text, blocks: '1', breakEvery: '', seed: String(d.seed),
+    scaleKind: 'call-confidence', scaleLabels: [...DEFAULT_FIVE_POINT_LABELS], presentFrom: '', training: false,
   };
 };
 
@@ -44,6 +52,8 @@ export const formValuesFromDesign = (name: string, caseSetId: string, d: StudyDe
     plantedFalsePositive: String(d.planted.falsePositive.value), plantedFalseNegative: String(d.planted.falseNegative.value),
     plantMode: d.planted.falsePositive.mode, stratifyBy: d.planted.stratifyBy ?? '', cautionMode: d.caution.mode, cautionText: d.caution.text,
     blocks: String(d.blocks), breakEvery: d.breakEvery === null ? '' : String(d.breakEvery), seed: String(d.seed),
+    scaleKind: d.answerScale.kind, scaleLabels: [...d.answerScale.labels],
+    presentFrom: d.answerScale.kind === 'call-confidence' ? '' : String(d.answerScale.presentFrom), training: d.training,
   };
 };
 
@@ -88,6 +98,9 @@ export const designFromForm = (v: DesignFormValues): FormOutcome => {
   const sequenceProblems: string[] = [];
   const custom = parseSequences(v.customSequences, sequenceProblems);
   for (const message of sequenceProblems) problems.push({ field: 'customSequences', message });
+  const scale = defaultAnswerScale(v.scaleKind);
+  // an empty threshold takes the scale's default (4 of 5, 50%)
+  const presentFrom = v.scaleKind === 'call-confidence' || v.presentFrom.trim() === '' ? scale.presentFrom : numberField('presentFrom', 'Rating counted as present from', v.presentFrom, problems);
   const design: StudyDesign = {
     ...defaultDesign(v.findings),
     sequences: custom.length > 0 ? custom : [
@@ -102,6 +115,8 @@ export const designFromForm = (v: DesignFormValues): FormOutcome => {
       stratifyBy: v.stratifyBy === '' ? null : v.stratifyBy,
     },
     blocks, breakEvery, seed,
+    answerScale: { kind: v.scaleKind, labels: v.scaleLabels.map((l) => l.trim()), presentFrom },
+    training: v.training,
   };
   if (problems.length > 0) return { problems: problems.map((p) => p.message), fieldProblems: problems, partial: design };
   return { design };

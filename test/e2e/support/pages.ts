@@ -15,6 +15,8 @@ export type DesignChoices = {
   findings?: string[];
   caseSet?: string;
   breakEvery?: number;
+  scale?: 'call-confidence' | 'five-point' | 'percent';
+  training?: boolean;
 };
 
 export const homePage = (page: Page) => ({
@@ -35,6 +37,8 @@ export const homePage = (page: Page) => ({
     if (d.plantedFalseNegative !== undefined) await page.getByLabel('False-negative suggestions').fill(String(d.plantedFalseNegative));
     if (d.breakEvery !== undefined) await page.getByLabel('Break every N cases').fill(String(d.breakEvery));
     if (d.caution) await page.getByLabel('Show the notice').selectOption({ label: d.caution });
+    if (d.scale) await page.getByLabel('Answer scale').selectOption(d.scale);
+    if (d.training) await page.getByLabel('Training: show the truth after each case').check();
     await page.getByRole('button', { name: 'Create study' }).click();
     await page.getByRole('heading', { name: d.name, level: 1 }).waitFor();
   },
@@ -86,6 +90,35 @@ export const readingPage = (page: Page) => {
       progress: (await page.getByLabel('Progress').textContent()) ?? '',
     };
   };
+  const commitWithKeys = async (keys: string[]): Promise<string[]> => {
+    const saved = await signalCount(page, 'saved');
+    const painted = await signalCount(page, 'case-painted');
+    const before = (await state()).caseId;
+    for (const k of keys) await page.keyboard.press(k);
+    await page.keyboard.press('Enter');
+    await waitForSignal(page, 'saved', saved);
+    const truths: string[] = [];
+    for (;;) {
+      // a new case is answerable once its image is painted (the clock starts then), or once a
+      // rest break is up; a cover in between (the truth, practice over) is continued with Enter
+      const next = await page.waitForFunction(([min, was]) => {
+        const dialog = document.querySelector('[role=dialog]')?.getAttribute('aria-label');
+        if (dialog === 'The truth' || dialog === 'Practice over' || dialog === 'Break') return dialog;
+        const main = document.querySelector('main.reading[data-case]');
+        if (main === null || main.getAttribute('data-case') === was) return 'answerable';
+        return Number(document.body.getAttribute('data-heed-case-painted') ?? 0) > Number(min) ? 'answerable' : false;
+      }, [painted, before] as const, { timeout: 60_000 });
+      const what = await next.jsonValue();
+      if (what === 'The truth') {
+        truths.push((await page.getByRole('dialog', { name: 'The truth' }).textContent()) ?? '');
+        await page.keyboard.press('Enter');
+        await page.getByRole('dialog', { name: 'The truth' }).waitFor({ state: 'detached' });
+      } else if (what === 'Practice over') {
+        await page.keyboard.press('Enter');
+        await page.getByRole('dialog', { name: 'Practice over' }).waitFor({ state: 'detached' });
+      } else return truths;
+    }
+  };
   return {
     state,
     /** Waits until the current case's image has been painted `after` + 1 times in total. */
@@ -93,22 +126,13 @@ export const readingPage = (page: Page) => {
     suggestionText: async () => (await page.getByRole('region', { name: 'Model suggestion' }).count()) > 0
       ? (await page.getByRole('region', { name: 'Model suggestion' }).textContent()) ?? '' : null,
     /** Answers the current question with the keyboard only: P or A, a digit for confidence, Enter. */
-    answerByKeys: async (call: 0 | 1, confidenceDigit: number) => {
-      const saved = await signalCount(page, 'saved');
-      const painted = await signalCount(page, 'case-painted');
-      const before = (await state()).caseId;
-      await page.keyboard.press(call === 1 ? 'p' : 'a');
-      await page.keyboard.press(String(confidenceDigit));
-      await page.keyboard.press('Enter');
-      await waitForSignal(page, 'saved', saved);
-      // a new case is answerable once its image is painted (the clock starts then)
-      const main = page.locator('main.reading[data-case]');
-      // (or, before a planned rest break, once the break screen is up)
-      if ((await main.count()) > 0 && (await main.getAttribute('data-case')) !== before) {
-        await page.waitForFunction((min) => Number(document.body.getAttribute('data-heed-case-painted') ?? 0) > min
-          || document.querySelector('[role=dialog][aria-label=Break]') !== null, painted, { timeout: 60_000 });
-      }
-    },
+    answerByKeys: async (call: 0 | 1, confidenceDigit: number) => commitWithKeys([call === 1 ? 'p' : 'a', String(confidenceDigit)]),
+    /**
+     * Presses the answer keys, then Enter, and waits until the next question can be answered.
+     * The truth shown after a case (training study, practice case) and the practice-over
+     * announcement are continued from with Enter; the truth texts seen are returned.
+     */
+    commitWithKeys,
     isDone: async () => (await page.getByRole('heading', { name: /Period \d+ complete/ }).count()) > 0,
   };
 };

@@ -6,7 +6,8 @@ export const makeRead = (over: Partial<ReadRow> = {}): ReadRow => ({
   assistance: 'none', case_id: 'C1', finding: 'target', practice: 0, order: 1, truth: 1,
   ai_call: null, ai_score: null, ai_planted: 0, caution_shown: 0,
   initial_call: null, initial_confidence: null, initial_ms: null,
-  final_call: 1, final_confidence: 80, total_ms: 3000, shown_at: '2026-01-12T08:00:00Z', case_attributes: {},
+  final_call: 1, final_confidence: 80, total_ms: 3000, shown_at: '2026-01-12T08:00:00Z',
+  scale: 'call-confidence', initial_rating: null, final_rating: null, training: 0, withdrawn: 0, case_attributes: {},
   ...over,
 });
 

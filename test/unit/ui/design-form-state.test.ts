@@ -33,10 +33,29 @@ describe('the new-study form', () => {
 describe('editing a stored design', () => {
   it('gives back form values that make the same design (standard and custom sequences)', () => {
     for (const custom of ['', 'USC: none, sequential, concurrent\nCUS: concurrent, none, sequential']) {
-      const made = designFromForm({ ...initialFormValues('set', ['nodule']), name: 'S', customSequences: custom, plantedFalsePositive: '2', breakEvery: '10', washoutDays: '7' });
+      for (const scale of [{}, { scaleKind: 'five-point' as const, presentFrom: '3', training: true }]) {
+      const made = designFromForm({ ...initialFormValues('set', ['nodule']), ...scale, name: 'S', customSequences: custom, plantedFalsePositive: '2', breakEvery: '10', washoutDays: '7' });
       if (!('design' in made)) throw new Error(made.problems.join('; '));
       const again = designFromForm(formValuesFromDesign('S', 'set', made.design));
       expect(again).toEqual(made);
     }
+    }
+  });
+});
+
+describe('the answer scale and training fields', () => {
+  it('makes a five-point training design with edited labels and the default threshold', () => {
+    const labels = ['No', 'Unlikely', 'Unsure', 'Likely', 'Yes'];
+    const result = designFromForm({ ...initialFormValues('set', ['nodule']), name: 'S', scaleKind: 'five-point', scaleLabels: labels, training: true });
+    if (!('design' in result)) throw new Error(result.problems.join('; '));
+    expect(result.design.answerScale).toEqual({ kind: 'five-point', labels, presentFrom: 4 });
+    expect(result.design.training).toBe(true);
+    expect(parseDesign(result.design).ok).toBe(true);
+  });
+  it('takes a stated percent threshold and names a bad one', () => {
+    const ok = designFromForm({ ...initialFormValues('set', ['nodule']), name: 'S', scaleKind: 'percent', presentFrom: '30' });
+    expect('design' in ok && ok.design.answerScale.presentFrom).toBe(30);
+    const bad = designFromForm({ ...initialFormValues('set', ['nodule']), name: 'S', scaleKind: 'percent', presentFrom: 'half' });
+    expect('problems' in bad && bad.problems).toEqual(['Rating counted as present from: "half" is not a number.']);
   });
 });
