@@ -68,6 +68,8 @@ describe('design: own case set, planted errors, caution notice, crossover with w
     for (const code of ['H1', 'H2']) {
       // Start is disabled with the reason; the coordinator opens the period early instead
       expect(await page.getByRole('button', { name: `Start ${code} period 2` }).isDisabled()).toBe(true);
+      const row = page.getByRole('row').filter({ has: page.getByRole('cell', { name: code, exact: true }) });
+      expect(await row.textContent()).toMatch(/opens \d{4}-\d\d-\d\d \d\d:\d\d UTC \(washout\)/);
       await page.getByRole('button', { name: `Open ${code} period 2 early` }).click();
       await page.getByRole('group', { name: 'Washout not over' }).waitFor();
       expect(await page.getByRole('group', { name: 'Washout not over' }).textContent()).toMatch(new RegExp(`Period 2 of ${code} is not open yet.*14-day washout`));

@@ -172,7 +172,11 @@ describe('a study’s whole life', () => {
     await saved(() => page.getByRole('button', { name: 'Delete without a bundle' }).click());
     await home.waitUntilReady();
     expect(await page.getByRole('button', { name: 'Lifecycle pilot (closed)' }).count()).toBe(0);
-    await page.getByRole('status').filter({ hasText: 'deleted' }).waitFor();
+    // the notice sits in the page flow (it covered content when it stuck to the top) and fades by itself
+    const notice = page.getByRole('status').filter({ hasText: 'deleted' });
+    await notice.waitFor();
+    expect(await notice.evaluate((el) => getComputedStyle(el).position)).toBe('static');
+    await notice.waitFor({ state: 'detached', timeout: 20_000 });
 
     // the set is free now
     await page.getByRole('button', { name: 'Delete case set Harbour March' }).click();

@@ -41,12 +41,15 @@ export const designFormProblems = (values: DesignFormValues, manifest: CaseSetMa
   const problems: FieldProblem[] = 'problems' in built ? built.fieldProblems : [];
   const design = 'design' in built ? built.design : built.partial;
   const taken = new Set(problems.map((p) => p.field));
-  for (const issue of designIssues(design)) {
+  const issues = designIssues(design);
+  for (const issue of issues) {
     const field = fieldOfPath(issue.path);
     if (taken.has(field)) continue; // already said in the form's own words (e.g. not a number)
     problems.push({ field, message: sentence(issue.message) });
   }
-  if (problems.length === 0 && manifest !== null) {
+  // the case-set checks need a design that reads whole; a missing study name does not stop them
+  const readable = issues.length === 0 && problems.every((p) => p.field === 'name');
+  if (readable && manifest !== null) {
     for (const message of validateDesign(design, manifest)) problems.push({ field: fieldOfCaseSetProblem(message), message: sentence(message) });
   }
   return problems;

@@ -16,5 +16,7 @@ describe('design form problems', () => {
     const tooMany = { ...base(), plantedFalsePositive: '50' };
     expect(designFormProblems(tooMany, tinyManifest(6)).map((p) => p.field)).toEqual(['plantedFalsePositive']);
     expect(designFormProblems({ ...tooMany, plantedFalsePositive: '0' }, tinyManifest(6))).toEqual([]);
+    // not in rounds: a missing name and a case-set problem are both said at once
+    expect(designFormProblems({ ...tooMany, name: '' }, tinyManifest(6)).map((p) => p.field)).toEqual(['name', 'plantedFalsePositive']);
   });
 });
