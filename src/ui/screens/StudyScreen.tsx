@@ -27,7 +27,10 @@ export const StudyScreen = ({ studyId }: { studyId: string }) => {
     <main className="page">
       <header className="page-head">
         <button type="button" className="link" onClick={actions.goHome}>← Heed</button>
-        <h1>{study.name}</h1>
+        <div className="head-row">
+          <h1>{study.name}</h1>
+          <button type="button" className="primary" onClick={() => actions.openResults(study.id)}>Results</button>
+        </div>
         <p className="muted">on {caseSet.name} · {study.lockedAt ? `design locked since ${study.lockedAt.slice(0, 16).replace('T', ' ')} UTC (reading started)` : 'draft: the design locks when the first reader starts'}</p>
         <CautionLine />
       </header>
