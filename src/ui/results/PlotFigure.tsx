@@ -18,6 +18,8 @@ export const PlotFigure = ({ title, file, options, children, wide }: Props) => {
   useEffect(() => {
     const node = renderPlot({ ...options, ariaLabel: title }, document);
     node.setAttribute('role', 'img');
+    // the whole figure is one image named by its title; Plot's labels on inner groups (no role) are not allowed there
+    for (const inner of node.querySelectorAll('[aria-label]')) if (inner !== node) inner.removeAttribute('aria-label');
     holder.current?.replaceChildren(node);
     return () => { node.remove(); };
   }, [options, title]);

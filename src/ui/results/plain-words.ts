@@ -33,7 +33,7 @@ export const headline = (g: GroupFinding, readers: readonly IndexedReader[]): st
   const ra = g.reader_averaged;
   const out: string[] = [`${g.readers} reader${g.readers === 1 ? '' : 's'} read ${g.cases} case${g.cases === 1 ? '' : 's'} for “${g.finding}”.`];
   if (ra.unaided_accuracy.estimate !== null && ra.aided_accuracy.estimate !== null && ra.accuracy_difference.estimate !== null) {
-    out.push(`On average a reader was right in ${pct(ra.unaided_accuracy.estimate)} of reads without the suggestion and ${pct(ra.aided_accuracy.estimate)} with it: ${points(ra.accuracy_difference.estimate)}${averaged(ra.accuracy_difference, true)}; ${sureness(ra.accuracy_difference.lower, ra.accuracy_difference.upper)}.`);
+    out.push(`On average a reader was right in ${pct(ra.unaided_accuracy.estimate)} of reads without the suggestion and ${pct(ra.aided_accuracy.estimate)} with it: a change of ${points(ra.accuracy_difference.estimate)}${averaged(ra.accuracy_difference, true)}; ${sureness(ra.accuracy_difference.lower, ra.accuracy_difference.upper)}.`);
   } else if (ra.aided_accuracy.estimate !== null) {
     out.push(`On average a reader was right in ${pct(ra.aided_accuracy.estimate)} of reads with the suggestion (no reads without it to compare).`);
   }

@@ -45,3 +45,17 @@ export const compareWithCli = (shown: readonly ShownFigure[], cli: unknown): { p
   }
   return { problems, compared };
 };
+
+/** Numbers of the JSON that no shown figure covers (a shown figure covers its path and everything under it). */
+export const missingFromPage = (cli: unknown, shown: readonly ShownFigure[]): string[] => {
+  const paths = new Set(shown.map((f) => f.path));
+  const missing: string[] = [];
+  const walk = (node: unknown, path: string): void => {
+    if (path && paths.has(path)) return;
+    if (Array.isArray(node)) node.forEach((x, i) => walk(x, `${path}.${i}`));
+    else if (node !== null && typeof node === 'object') for (const [k, v] of Object.entries(node)) walk(v, path ? `${path}.${k}` : k);
+    else if (typeof node === 'number') missing.push(path);
+  };
+  walk(cli, '');
+  return missing;
+};
