@@ -35,16 +35,7 @@ try {
   await page.waitForFunction(() => window.heedBench, null, { timeout: 600_000 });
   const r = await page.evaluate(() => window.heedBench);
   if (!r) throw new Error('the harness reported nothing');
-  const openMs = await page.evaluate(async () => {
-    const details = document.querySelector('[aria-labelledby^="reliance-"] details.numbers') as HTMLDetailsElement;
-    const t0 = performance.now();
-    details.open = true;
-    await new Promise<void>((resolve) => {
-      const wait = () => (details.querySelector('table') ? requestAnimationFrame(() => resolve()) : requestAnimationFrame(wait));
-      wait();
-    });
-    return performance.now() - t0;
-  });
+  const openMs = await page.evaluate(() => window.heedOpenNumbers?.() ?? Promise.reject(new Error('no probe')));
   notes.push(`${readers} readers x ${cases} cases, ${r.plots} plots drawn, ${r.longTasks} long tasks after the analysis`, machineNote('after'));
   printResult({
     bench: 'results-page',

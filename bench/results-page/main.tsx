@@ -15,7 +15,7 @@ import { simulateReadRows } from '../simulate-log';
 type BenchResult = { analysisMs: number; renderMs: number; paintedMs: number; idleMs: number; longTasks: number; plots: number };
 declare global {
   // oxlint-disable-next-line typescript/consistent-type-definitions
-  interface Window { heedBench?: BenchResult }
+  interface Window { heedBench?: BenchResult; heedOpenNumbers?: () => Promise<number> }
 }
 
 const params = new URLSearchParams(location.search);
@@ -43,3 +43,16 @@ requestAnimationFrame(() => setTimeout(() => {
   };
   check();
 }, 0));
+
+// Click-to-shown time of the reliance numbers table (one row per reader), run by the benchmark after the page is idle.
+window.heedOpenNumbers = async () => {
+  const details = document.querySelector('[aria-labelledby^="reliance-"] details.numbers');
+  if (!(details instanceof HTMLDetailsElement)) throw new Error('no reliance numbers on the page');
+  const t0 = performance.now();
+  details.open = true;
+  await new Promise<void>((resolve) => {
+    const wait = (): void => { if (details.querySelector('table')) requestAnimationFrame(() => resolve()); else requestAnimationFrame(wait); };
+    wait();
+  });
+  return performance.now() - t0;
+};

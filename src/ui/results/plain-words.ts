@@ -7,7 +7,10 @@ import type { GroupFinding } from '../../analysis/report-types';
 import { dec, pct } from './format';
 import { MIN_READERS_FOR_RANDOM, type IndexedReader } from './figure-data';
 
-const points = (x: number): string => `${x >= 0 ? '+' : '−'}${Math.abs(x * 100).toFixed(0)} points`;
+const points = (x: number): string => {
+  const whole = Math.round(x * 100);
+  return whole === 0 ? '0 points' : `${whole > 0 ? '+' : '−'}${Math.abs(whole)} points`;
+};
 
 /** How sure: an interval that excludes 0 points to a real change; one that includes 0 does not rule out none. */
 export const sureness = (lower: number | null, upper: number | null): string => {

@@ -7,6 +7,7 @@ import { getStudy } from '../../store/studies';
 import { CautionLine } from '../components/CautionLine';
 import { useDb } from '../db-context';
 import { AnalysisOptions } from '../results/AnalysisOptions';
+import { drawAllPlotsThen } from '../results/PlotFigure';
 import { ResultsPage } from '../results/ResultsPage';
 import { runAnalysis } from '../results/run-analysis';
 import { signal } from '../signals';
@@ -30,7 +31,7 @@ export const ResultsScreen = ({ studyId }: { studyId: string }) => {
         <button type="button" className="link" onClick={() => actions.openStudy(studyId)}>← Study</button>
         <div className="head-row">
           <h1>Results{value ? `: ${value.study.name}` : ''}</h1>
-          <button type="button" onClick={() => void getHost().printToPdf(`${value?.study.name ?? 'results'}-results.pdf`)}>Print or save as PDF</button>
+          <button type="button" onClick={() => drawAllPlotsThen(() => void getHost().printToPdf(`${value?.study.name ?? 'results'}-results.pdf`))}>Print or save as PDF</button>
         </div>
         <CautionLine />
         <p className="muted">Figures describe this study’s readers and cases, for research and training; they are not an appraisal of any reader.</p>
