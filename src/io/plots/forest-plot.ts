@@ -58,7 +58,7 @@ export const forestPlot = (input: ForestInput): PlotOptions => {
     style: { fontFamily: FONT, fontSize: '12px' },
     x: { domain: input.domain, label: input.xLabel, grid: true, tickFormat: input.percent ? (d: number) => `${Math.round(d * 100)}%` : undefined, ticks: measures.length > 2 ? 3 : 5 },
     y: { domain: labels, label: null, tickFormat: (d: string) => d },
-    fx: { domain: measures, label: null, padding: 0.08 },
+    fx: { domain: measures, label: null, padding: measures.length > 2 ? 0.18 : 0.08 },
     marks: [
       ...(ref === null ? [] : [Plot.ruleX([ref], { stroke: '#777', strokeDasharray: '3,3' })]),
       ...series.flatMap((s, i) => {
