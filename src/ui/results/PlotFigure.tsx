@@ -11,9 +11,10 @@ import { svgMarkup, svgToPng } from './plot-export';
 /** Window event that makes every plot on the page draw now (before printing). */
 export const DRAW_ALL_PLOTS = 'heed:draw-all-plots';
 
-/** Draws every plot, waits two frames for them to land, then runs `then` (e.g. the print dialog). */
+/** Draws every plot and opens the glossary, waits two frames for them to land, then runs `then` (e.g. the print dialog). */
 export const drawAllPlotsThen = (then: () => void): void => {
   window.dispatchEvent(new Event(DRAW_ALL_PLOTS));
+  for (const glossary of document.querySelectorAll('details.glossary')) glossary.setAttribute('open', '');
   requestAnimationFrame(() => requestAnimationFrame(then));
 };
 
