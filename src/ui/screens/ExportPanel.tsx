@@ -46,7 +46,6 @@ export const ExportPanel = ({ study, caseSet, caution }: Props) => {
         }), 'application/json')}>
           Save design record (study.json)
         </button>
-        <button type="button" onClick={() => actions.openResults(study.id)}>Results</button>
       </div>
       <p className="muted" aria-live="polite">{status}</p>
       <p className="muted">{caution}</p>

@@ -28,7 +28,10 @@ export const StudyScreen = ({ studyId }: { studyId: string }) => {
     <main className="page">
       <header className="page-head">
         <button type="button" className="link" onClick={actions.goHome}>← Heed</button>
-        <h1>{study.name}</h1>
+        <div className="head-row">
+          <h1>{study.name}</h1>
+          <button type="button" className="primary" onClick={() => actions.openResults(study.id)}>Results</button>
+        </div>
         <p className="muted">on {caseSet.name} · <span aria-label="Study status">{status === 'finished' ? 'finished: every period of every reader is complete'
           : status === 'reading' ? `reading under way (design locked since ${study.lockedAt?.slice(0, 16).replace('T', ' ') ?? ''} UTC)` : 'draft: the design can be edited until the first reader starts'}</span></p>
         <CautionLine />
