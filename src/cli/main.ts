@@ -5,6 +5,8 @@ const USAGE = `usage:
   heed analyze FILE [--json] [--seed N] [--boot N]   statistics of a reads.csv
   heed check-cases PATH                              validate a case set (folder or zip)
   heed demo [--out DIR]                              write the demo case set
+  heed report FILE --reader ID [--out F.html] [--pdf F.pdf]
+                                                     one reader's private feedback report
 Heed is a research and training tool, not a medical device.`;
 
 type Verb = (args: string[]) => Promise<number>;
@@ -13,6 +15,7 @@ const verbs: Record<string, () => Promise<Verb>> = {
   analyze: async () => (await import('./analyze')).runAnalyze,
   'check-cases': async () => (await import('./check-cases')).runCheckCases,
   demo: async () => (await import('./demo')).runDemo,
+  report: async () => (await import('./report')).runReport,
 };
 
 const main = async (argv: string[]): Promise<number> => {
