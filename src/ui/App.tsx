@@ -4,6 +4,7 @@ import { StudyScreen } from './screens/StudyScreen';
 import { ReadingScreen } from './reading/ReadingScreen';
 import { ResultsScreen } from './screens/ResultsScreen';
 import { HandoverScreen } from './screens/HandoverScreen';
+import { ReaderReportScreen } from './report/ReaderReportScreen';
 import { actions, useAppState } from './state/app-state';
 
 export const App = () => {
@@ -21,7 +22,8 @@ export const App = () => {
       {screen.name === 'study' && <StudyScreen studyId={screen.studyId} />}
       {screen.name === 'results' && <ResultsScreen studyId={screen.studyId} />}
       {screen.name === 'read' && <ReadingScreen studyId={screen.studyId} sessionId={screen.sessionId} notice={notice} />}
-      {screen.name === 'handover' && <HandoverScreen studyId={screen.studyId} />}
+      {screen.name === 'handover' && <HandoverScreen studyId={screen.studyId} readerId={screen.readerId} />}
+      {screen.name === 'reader-report' && <ReaderReportScreen studyId={screen.studyId} readerId={screen.readerId} />}
     </>
   );
 };

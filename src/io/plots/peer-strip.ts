@@ -9,10 +9,11 @@ import { PALETTE, SIZE } from './theme';
  */
 export const peerStripPlot = (peers: readonly number[], own: number, label: string): PlotOptions => ({
   width: SIZE.width,
-  height: 130,
+  height: 140,
   marginLeft: 20,
   marginRight: 30,
   marginTop: 24,
+  marginBottom: 42,
   x: { domain: [0, 1], tickFormat: '.0%', label, labelAnchor: 'center', labelArrow: 'none' },
   marks: [
     Plot.ruleX([own], { stroke: PALETTE.reader, strokeWidth: 3 }),

@@ -11,6 +11,9 @@ export const inlinePlot = (options: PlotOptions, document: Document, label: stri
     svg.removeAttribute('xmlns');
     svg.removeAttribute('xmlns:xlink');
   }
+  // Plot labels its mark groups with aria-label on plain <g> elements, which ARIA does not
+  // allow there; the whole figure is labelled once instead (role img, below).
+  for (const el of Array.from(node.querySelectorAll('[aria-label]'))) el.removeAttribute('aria-label');
   const main = svgs[svgs.length - 1];
   if (main) {
     main.setAttribute('role', 'img');

@@ -14,6 +14,8 @@ export type RenderOptions = {
   images?: CaseImages | null;
   /** when the report was made, ISO; shown in the footer */
   madeAt?: string;
+  /** the study's name where known (the app); a read log alone gives only its id */
+  studyName?: string;
 };
 
 export const LEARNING_CAUTION =
@@ -25,7 +27,7 @@ export const reportBody = (report: ReaderReport, options: RenderOptions): string
   const role = report.reader_role ? ` (${esc(report.reader_role)})` : '';
   return `<article class="heed-report" aria-labelledby="report-title"><style>${REPORT_CSS}</style>
 <header><h1 id="report-title">Your reading report</h1>
-<p class="meta">Reader ${esc(report.reader_id)}${role} · study ${esc(report.study_id)} · private: for you and the study coordinator only</p>
+<p class="meta">Reader ${esc(report.reader_id)}${role} · study ${esc(options.studyName ?? report.study_id)} · private: for you and the study coordinator only</p>
 <p class="caution" role="note">${esc(RESEARCH_CAUTION)}</p>
 <p class="caution" role="note">${esc(LEARNING_CAUTION)}</p></header>
 <section class="rule" aria-label="How to read this report"><p><strong>How to read this report.</strong> Each figure comes with a sentence saying what it means. The range after a percentage (95% CI) is where the true value probably lies; the narrower it is, the surer the figure. ${esc(report.small_count_rule)} Other readers of this study appear only as unnamed dots and a range, and only when there are at least 3 of them.</p></section>
