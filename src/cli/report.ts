@@ -52,8 +52,8 @@ export const reportFromLog = (file: string, text: string, readerId: string, made
     throw new CliError(`${file}: no reader ${JSON.stringify(readerId)} with reads outside practice in this log`);
   }
   try {
-    // The bootstrap touches only group figures, never a reader's: leave it out for speed.
-    const analysis = analyzeReads(rows, { boot: 0 });
+    // Group figures (bootstrap, multi-reader analysis) never enter a reader's report: skip them.
+    const analysis = analyzeReads(rows, { boot: 0, readersOnly: true });
     const report = readerReport({ analysis, rows, readerId, complete: readerComplete(rows, readerId) });
     return reportPage(report, { document: plotDocument(), madeAt });
   } catch (error) {

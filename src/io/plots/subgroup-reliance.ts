@@ -13,8 +13,8 @@ export const subgroupPlot = (points: readonly SubgroupPoint[]): PlotOptions => (
   height: 60 + 44 * new Set(points.map((p) => p.value)).size,
   marginLeft: 110,
   x: { domain: [0, 1], tickFormat: '.0%', grid: true, label: null },
-  fy: { label: null, domain: [...new Set(points.map((p) => p.value))] },
-  y: { label: null, domain: ['suggestion right', 'you followed it when wrong'] },
+  fy: { axis: 'left', label: null, domain: [...new Set(points.map((p) => p.value))] },
+  y: { axis: null, domain: ['suggestion right', 'you followed it when wrong'] },
   color: { domain: ['suggestion right', 'you followed it when wrong'], range: [PALETTE.model, PALETTE.reader], legend: true },
   symbol: { domain: ['suggestion right', 'you followed it when wrong'], range: ['square', 'triangle'] },
   marks: [

@@ -8,10 +8,10 @@ export type ConditionPoint = { measure: string; condition: 'unaided' | 'aided'; 
 export const unaidedAidedPlot = (points: readonly ConditionPoint[]): PlotOptions => ({
   width: SIZE.width,
   height: 60 + 44 * new Set(points.map((p) => p.measure)).size,
-  marginLeft: 100,
+  marginLeft: 130,
   x: { domain: [0, 1], grid: true, label: 'estimate with 95% interval', labelAnchor: 'center', labelArrow: 'none' },
-  y: { label: null, domain: ['unaided', 'aided'] },
-  fy: { label: null, domain: [...new Set(points.map((p) => p.measure))] },
+  y: { axis: null, domain: ['unaided', 'aided'] },
+  fy: { axis: 'left', label: null, domain: [...new Set(points.map((p) => p.measure))] },
   color: { domain: ['unaided', 'aided'], range: [PALETTE.unaided, PALETTE.aided], legend: true },
   symbol: { domain: ['unaided', 'aided'], range: [SYMBOL.unaided, SYMBOL.aided] },
   marks: [

@@ -28,8 +28,7 @@ export const reportBody = (report: ReaderReport, options: RenderOptions): string
   return `<article class="heed-report" aria-labelledby="report-title"><style>${REPORT_CSS}</style>
 <header><h1 id="report-title">Your reading report</h1>
 <p class="meta">Reader ${esc(report.reader_id)}${role} · study ${esc(options.studyName ?? report.study_id)} · private: for you and the study coordinator only</p>
-<p class="caution" role="note">${esc(RESEARCH_CAUTION)}</p>
-<p class="caution" role="note">${esc(LEARNING_CAUTION)}</p></header>
+<p class="caution" role="note">${esc(RESEARCH_CAUTION)} ${esc(LEARNING_CAUTION)}</p></header>
 <section class="rule" aria-label="How to read this report"><p><strong>How to read this report.</strong> Each figure comes with a sentence saying what it means. The range after a percentage (95% CI) is where the true value probably lies; the narrower it is, the surer the figure. ${esc(report.small_count_rule)} Other readers of this study appear only as unnamed dots and a range, and only when there are at least 3 of them.</p></section>
 ${report.findings.map((f) => findingHtml(f, options.document, showFinding)).join('\n')}
 ${caseReviewHtml(report, options.images ?? null)}

@@ -15,7 +15,7 @@ export const REPORT_CSS = `
 .heed-report th, .heed-report td { border-bottom: 1px solid #ddd; padding: 6px 12px 6px 0; text-align: left; vertical-align: top; }
 .heed-report th[scope=col] { font-weight: 600; color: #333; }
 .heed-report td.num { font-variant-numeric: tabular-nums; }
-.heed-report .ci { color: #555; }
+.heed-report .ci { color: #555; white-space: nowrap; }
 .heed-report .sub { display: block; color: #666; font-size: 0.82rem; }
 .heed-report .few { display: block; color: #8a4b00; font-size: 0.82rem; font-weight: 600; }
 .heed-report .plot { margin: 6px 0 4px; max-width: 100%; overflow: hidden; }
@@ -29,8 +29,8 @@ export const REPORT_CSS = `
   @page { size: A4; margin: 14mm; }
   .no-print { display: none !important; }
   .heed-report { max-width: none; padding: 0; font-size: 11pt; }
-  .heed-report h2 { break-after: avoid; }
-  .heed-report section, .heed-report .plot, .heed-report table, .heed-report tr { break-inside: avoid; }
+  .heed-report .plot, .heed-report tr, .heed-report .lead { break-inside: avoid; }
+  .heed-report h2, .heed-report h3 { break-after: avoid; }
   .heed-report .caution, .heed-report .rule { -webkit-print-color-adjust: exact; print-color-adjust: exact; }
 }
 `;
