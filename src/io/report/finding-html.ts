@@ -37,7 +37,7 @@ const glance = (f: FindingReport, document: Document, title: string): string => 
     ? `<tr><th scope="row">Other readers (${f.peers.count}, not named)</th><td class="num" data-figure="peers.median" data-value="${f.peers.median}">median ${pctText(f.peers.median)}</td><td class="num" data-figure="peers.range" data-lower="${f.peers.min}" data-upper="${f.peers.max}">range ${pctText(f.peers.min)}–${pctText(f.peers.max)}</td></tr>`
     : '';
   return `<section aria-labelledby="glance-${esc(f.finding)}"><h2 id="glance-${esc(f.finding)}">Following the suggestion${title}</h2>
-${p(f.headline, 'lead')}${p(f.headline_sure, 'sure')}${strip}${f.peers.note ? p(f.peers.note, 'note') : ''}${p(f.under_text)}
+${p(f.headline, 'lead')}${p(f.headline_sure, 'sure')}${strip}${strip ? p('Each grey dot is one other reader of this study (not named); the orange line is you.', 'note') : ''}${f.peers.note ? p(f.peers.note, 'note') : ''}${p(f.under_text)}
 ${a === null ? '' : `<table><caption class="sr">Reliance on the suggestion</caption><thead><tr><th scope="col">With the suggestion shown</th><th scope="col">You</th><th scope="col"></th></tr></thead><tbody>
 <tr><th scope="row">Followed it when it was wrong (over-reliance)</th>${shareCell('aided.overreliance', a.overreliance, tooFew)}<td></td></tr>
 <tr><th scope="row">Went against it when it was right (under-reliance)</th>${shareCell('aided.underreliance', a.underreliance, tooFew)}<td></td></tr>
