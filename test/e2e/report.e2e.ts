@@ -100,6 +100,7 @@ describe('reader report: private, same numbers as heed analyze, case review only
     await page.getByRole('region', { name: 'Your report' }).getByRole('heading', { name: 'Your reading report' }).waitFor();
     expect(await page.locator('[data-review-case]').count()).toBeGreaterThan(0);
     expect(await page.content()).not.toMatch(otherCodes);
+    await page.screenshot({ path: join(SHOTS, 'report-handover.png') });
     await page.getByRole('button', { name: 'Coordinator: back to the study' }).click();
 
     // The coordinator's report after the last period: the case review is there.

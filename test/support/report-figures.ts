@@ -31,8 +31,9 @@ const expected = (key: string, entry: Json, others: Json[]): Record<string, numb
     const vals = others.map((o) => at(o, ['aided', 'overreliance', 'estimate'])).filter((v): v is number => typeof v === 'number');
     return key === 'peers.median' ? { value: median7(vals) } : { lower: Math.min(...vals), upper: Math.max(...vals) };
   }
-  if (key.startsWith('subgroups.')) {
-    const [, attribute, value, measure] = key.split('.');
+  if (key.startsWith('subgroups|')) {
+    // subgroups|attribute|value|measure: '|' because attribute values may hold dots
+    const [, attribute, value, measure] = key.split('|');
     const groups = at(entry, ['subgroups']);
     const g = Array.isArray(groups) ? groups.find((x: unknown) => isObject(x) && x.attribute === attribute && x.value === value) : undefined;
     const p = isObject(g) && measure !== undefined ? g[measure] : undefined;

@@ -133,7 +133,7 @@ const subgroups = (f: FindingReport, document: Document, title: string): string 
       if (r.ai_accuracy.estimate !== null) points.push({ value: r.value || '(blank)', measure: 'suggestion right', estimate: r.ai_accuracy.estimate, lower: r.ai_accuracy.lower, upper: r.ai_accuracy.upper });
       if (r.overreliance.estimate !== null) points.push({ value: r.value || '(blank)', measure: 'you followed it when wrong', estimate: r.overreliance.estimate, lower: r.overreliance.lower, upper: r.overreliance.upper });
     }
-    const rows = g.rows.map((r) => `<tr><th scope="row">${esc(r.value || '(blank)')}</th>${shareCell(`subgroups.${g.attribute}.${r.value}.ai_accuracy`, r.ai_accuracy, () => false)}${shareCell(`subgroups.${g.attribute}.${r.value}.overreliance`, r.overreliance, tooFew)}</tr>`).join('');
+    const rows = g.rows.map((r) => `<tr><th scope="row">${esc(r.value || '(blank)')}</th>${shareCell(`subgroups|${g.attribute}|${r.value}|ai_accuracy`, r.ai_accuracy, () => false)}${shareCell(`subgroups|${g.attribute}|${r.value}|overreliance`, r.overreliance, tooFew)}</tr>`).join('');
     return `<h3>By ${esc(g.attribute)}</h3>${p(g.text)}
 ${points.length > 0 ? inlinePlot(subgroupPlot(points), document, `The suggestion's accuracy (squares) and your over-reliance (triangles) for each ${g.attribute}`) : ''}
 <table><thead><tr><th scope="col">${esc(g.attribute)}</th><th scope="col">Suggestion right</th><th scope="col">You followed it when wrong</th></tr></thead><tbody>${rows}</tbody></table>`;
