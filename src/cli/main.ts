@@ -6,6 +6,8 @@ const USAGE = `usage:
     [--include-withdrawn]                            keep the reads of withdrawn readers
   heed check-cases PATH                              validate a case set (folder or zip)
   heed demo [--out DIR]                              write the demo case set
+  heed report FILE --reader ID [--out F.html] [--pdf F.pdf]
+                                                     one reader's private feedback report
 Heed is a research and training tool, not a medical device.`;
 
 type Verb = (args: string[]) => Promise<number>;
@@ -14,6 +16,7 @@ const verbs: Record<string, () => Promise<Verb>> = {
   analyze: async () => (await import('./analyze')).runAnalyze,
   'check-cases': async () => (await import('./check-cases')).runCheckCases,
   demo: async () => (await import('./demo')).runDemo,
+  report: async () => (await import('./report')).runReport,
 };
 
 const main = async (argv: string[]): Promise<number> => {

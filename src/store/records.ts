@@ -31,6 +31,8 @@ export type StoredStudy = {
   createdAt: string;
   /** set when the first reading session starts; the design cannot change after it */
   lockedAt: string | null;
+  /** show each reader their own report on the handover screen after their last period (absent: no) */
+  showReportToReader?: boolean;
 };
 
 export type StoredReader = {

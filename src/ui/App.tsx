@@ -6,6 +6,7 @@ import { ResultsScreen } from './screens/ResultsScreen';
 import { HandoverScreen } from './screens/HandoverScreen';
 import { EditStudyScreen } from './screens/EditStudyScreen';
 import { AuditLogScreen } from './screens/AuditLogScreen';
+import { ReaderReportScreen } from './report/ReaderReportScreen';
 import { actions, useAppState } from './state/app-state';
 
 export const App = () => {
@@ -23,9 +24,10 @@ export const App = () => {
       {screen.name === 'study' && <StudyScreen studyId={screen.studyId} />}
       {screen.name === 'results' && <ResultsScreen studyId={screen.studyId} />}
       {screen.name === 'read' && <ReadingScreen studyId={screen.studyId} sessionId={screen.sessionId} notice={notice} />}
-      {screen.name === 'handover' && <HandoverScreen studyId={screen.studyId} />}
+      {screen.name === 'handover' && <HandoverScreen studyId={screen.studyId} readerId={screen.readerId} />}
       {screen.name === 'edit-study' && <EditStudyScreen studyId={screen.studyId} />}
       {screen.name === 'audit' && <AuditLogScreen studyId={screen.studyId} />}
+      {screen.name === 'reader-report' && <ReaderReportScreen studyId={screen.studyId} readerId={screen.readerId} />}
     </>
   );
 };

@@ -219,7 +219,7 @@ export const ReadingScreen = ({ studyId, sessionId, notice }: Props) => {
   if (error) return <main className="reading"><p role="alert">Cannot open this session: {error}</p></main>;
   if (!loaded || !position) return <main className="reading" aria-busy="true"><p>Opening the session…</p></main>;
   if (position.done && feedback) return <main className="reading"><TruthPanel lines={feedback.lines} practice={feedback.practice} onContinue={endFeedback} /></main>;
-  if (position.done) return <ReadingDone readerCode={loaded.readerCode} period={loaded.session.period} onBack={() => actions.handOver(studyId)} />;
+  if (position.done) return <ReadingDone readerCode={loaded.readerCode} period={loaded.session.period} onBack={() => actions.handOver(studyId, loaded.session.readerId)} />;
 
   const { step } = position;
   const current = position.item;

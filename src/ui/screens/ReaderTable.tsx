@@ -14,6 +14,17 @@ type Props = { study: StoredStudy; progress: ReaderProgress[]; onChanged: () => 
 
 type EarlyRequest = { readerId: string; period: number; message: string };
 
+/** The reader's private report opens once a period is done; it says itself when it is interim. */
+const reportCell = (studyId: string, row: ReaderProgress) => {
+  const done = row.periods.filter((p) => p.session?.completedAt).length;
+  if (done === 0) return <span className="muted">after a period</span>;
+  return (
+    <button type="button" onClick={() => actions.openReaderReport(studyId, row.reader.id)} aria-label={`Report for ${row.reader.code}`}>
+      {done === row.periods.length ? 'Report' : 'Interim report'}
+    </button>
+  );
+};
+
 export const ReaderTable = ({ study, progress, onChanged }: Props) => {
   const db = useDb();
   const [early, setEarly] = useState<EarlyRequest | null>(null);
@@ -73,13 +84,14 @@ export const ReaderTable = ({ study, progress, onChanged }: Props) => {
         <table className="grid">
           <thead>
             <tr><th scope="col">Code</th><th scope="col">Role</th><th scope="col">Years</th><th scope="col">Sequence</th>
-              {Array.from({ length: periodCount }, (_, i) => <th scope="col" key={i}>Period {i + 1}</th>)}<th scope="col">Changes</th></tr>
+              {Array.from({ length: periodCount }, (_, i) => <th scope="col" key={i}>Period {i + 1}</th>)}<th scope="col">Report</th><th scope="col">Changes</th></tr>
           </thead>
           <tbody>
             {progress.map((row) => (
               <tr key={row.reader.id}>
                 <td>{row.reader.code}</td><td>{row.reader.role}</td><td>{row.reader.years ?? '—'}</td><td>{row.sequenceLabel}</td>
                 {row.periods.map((p) => <td key={p.period}>{cell(row, p)}</td>)}
+                <td>{reportCell(study.id, row)}</td>
                 <td><ReaderActions reader={row.reader} started={row.periods.some((p) => p.session !== null)} onChanged={onChanged} /></td>
               </tr>
             ))}

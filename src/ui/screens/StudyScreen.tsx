@@ -10,6 +10,7 @@ import { DesignSummary } from './DesignSummary';
 import { EnrolForm } from './EnrolForm';
 import { ExportPanel } from './ExportPanel';
 import { ReaderTable } from './ReaderTable';
+import { ReportSetting } from '../report/ReportSetting';
 import { loadStudyProgress } from './study-progress';
 import { StudyActions } from './StudyActions';
 
@@ -39,6 +40,7 @@ export const StudyScreen = ({ studyId }: { studyId: string }) => {
       <StudyActions study={study} onChanged={refresh} />
       <ReaderTable study={study} progress={progress} onChanged={refresh} />
       <EnrolForm study={study} onEnrolled={refresh} />
+      <ReportSetting study={study} onChanged={refresh} />
       <ExportPanel study={study} caseSet={caseSet} caution={RESEARCH_CAUTION} />
       <DesignSummary study={study} caseSet={caseSet} />
     </main>

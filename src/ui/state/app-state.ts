@@ -11,11 +11,13 @@ export type Screen =
   | { name: 'results'; studyId: string }
   | { name: 'read'; sessionId: string; studyId: string }
   /** between a reader and the coordinator: nothing of the study is on screen */
-  | { name: 'handover'; studyId: string }
+  | { name: 'handover'; studyId: string; readerId?: string }
   /** editing a draft study's design (refused once it is locked) */
   | { name: 'edit-study'; studyId: string }
   /** the study's event log, in time order */
-  | { name: 'audit'; studyId: string };
+  | { name: 'audit'; studyId: string }
+  /** one reader's private report, opened by the coordinator */
+  | { name: 'reader-report'; studyId: string; readerId: string };
 
 export type Notice = { kind: 'info' | 'error'; text: string };
 
@@ -44,7 +46,8 @@ export const actions = {
   openStudy: (studyId: string, notice: Notice | null = null): void => set({ screen: { name: 'study', studyId }, notice }),
   openResults: (studyId: string): void => set({ screen: { name: 'results', studyId }, notice: null }),
   startReading: (studyId: string, sessionId: string): void => set({ screen: { name: 'read', studyId, sessionId }, notice: null }),
-  handOver: (studyId: string): void => set({ screen: { name: 'handover', studyId }, notice: null }),
+  handOver: (studyId: string, readerId?: string): void => set({ screen: readerId === undefined ? { name: 'handover', studyId } : { name: 'handover', studyId, readerId }, notice: null }),
+  openReaderReport: (studyId: string, readerId: string): void => set({ screen: { name: 'reader-report', studyId, readerId }, notice: null }),
   editStudy: (studyId: string): void => set({ screen: { name: 'edit-study', studyId }, notice: null }),
   openAuditLog: (studyId: string): void => set({ screen: { name: 'audit', studyId }, notice: null }),
   notify: (notice: Notice): void => set({ ...state, notice }),
