@@ -193,11 +193,12 @@ export const ReadingScreen = ({ studyId, sessionId, notice }: Props) => {
       if (!action) return;
       event.preventDefault();
       if (action.kind === 'fullscreen') { toggleFullscreen(); return; }
-      if (feedback) { if (action.kind === 'commit') endFeedback(); return; }
       if (action.kind === 'pause') {
         if (breakFor && !pausedNow.current) endBreak(); else togglePause();
         return;
       }
+      // the truth on screen: Enter continues (once not paused); other keys wait
+      if (feedback) { if (action.kind === 'commit' && !pausedNow.current) endFeedback(); return; }
       if (paused || busy) return;
       if (breakFor) { if (action.kind === 'commit') endBreak(); return; }
       switch (action.kind) {
