@@ -3,7 +3,7 @@
  * to the database before the next question appears; the clock (performance.now, pausable) starts
  * when the case's pixels are drawn.
  */
-import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
+import { useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState } from 'react';
 import { elapsedMs, pauseClock, resumeClock, startClock, type ActiveClock } from '../../core/active-clock';
 import { callFromRating, defaultAnswerScale } from '../../core/answer-scale';
 import type { Bit } from '../../core/read-log';
@@ -187,7 +187,8 @@ export const ReadingScreen = ({ studyId, sessionId, notice }: Props) => {
 
   const endFeedback = useCallback(() => setFeedback(null), []);
 
-  useEffect(() => {
+  // a layout effect: the handler with this render's answer is in place before the next key can arrive
+  useLayoutEffect(() => {
     const onKey = (event: KeyboardEvent) => {
       const action = readingKeyAction(event, scale.kind);
       if (!action) return;
