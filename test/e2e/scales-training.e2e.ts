@@ -13,7 +13,7 @@ import { decode } from 'fast-png';
 import Papa from 'papaparse';
 import type { Page } from 'playwright-core';
 import { inject } from 'vitest';
-import { useChromiumProfile } from './support/chromium';
+import { signalCount, useChromiumProfile, waitForSignal } from './support/chromium';
 import { writeCaseFolder } from './support/case-folder';
 import { homePage, readingPage, studyPage, type DesignChoices } from './support/pages';
 
@@ -198,6 +198,18 @@ describe('reading view: counter, practice truth, unset slider, dark sliders, pau
     // measurement cases stay blind: no truth after a main case
     expect(await reading.commitWithKeys(['p', '9'])).toEqual([]);
 
+    // Esc straight after a commit, while the save finishes and before the next image is drawn, still pauses
+    const saved = await signalCount(page, 'saved');
+    await page.keyboard.press('a');
+    await page.keyboard.press('4');
+    await page.keyboard.press('Enter');
+    await page.keyboard.press('Escape');
+    await page.getByRole('dialog', { name: 'Paused' }).waitFor();
+    await waitForSignal(page, 'saved', saved); // the answer given before Esc is saved
+    await page.keyboard.press('Escape');
+    await page.getByRole('dialog', { name: 'Paused' }).waitFor({ state: 'detached' });
+    expect((await reading.state()).progress).toBe('Case 3 of 12');
+
     // full screen: leaving it by the browser's own Esc (which the page never sees) pauses
     await page.keyboard.press('f');
     await page.waitForFunction(() => document.fullscreenElement !== null);
@@ -218,5 +230,44 @@ describe('reading view: counter, practice truth, unset slider, dark sliders, pau
     await page.waitForFunction(() => document.fullscreenElement === null);
     expect(await page.getByRole('dialog', { name: 'Paused' }).count()).toBe(0);
     await page.screenshot({ path: join(SHOTS, 'reading-main.png') });
+  });
+});
+
+describe('percent scale: keys and slider to the export; Brier of rating/100', () => {
+  const browser = useChromiumProfile(inject('appUrl'));
+  it('exports the likelihoods set, calls from 50%, and a Brier score equal to one worked by hand', async () => {
+    const chrome = await browser.launch();
+    const { page } = chrome;
+    await setUp(page, { name: 'Percent harbour', aidedMode: 'concurrent', scale: 'percent' }, ['P1']);
+    const painted = await studyPage(page).startPeriod('P1', 1);
+    const reading = readingPage(page);
+    await reading.waitForCase(painted);
+    const slider = page.getByRole('slider', { name: 'Likelihood present' });
+    expect(await slider.getAttribute('aria-valuetext')).toBe('not set');
+    const plans: [string[], number][] = [[['7'], 70], [['End'], 100], [['0'], 0], [['3', 'ArrowUp'], 35], [['9', 'ArrowDown', 'ArrowDown'], 80]];
+    const pressed = new Map<string, number>();
+    for (let i = 0; !(await reading.isDone()); i++) {
+      const s = await reading.state();
+      const [keys, value] = plans[i % plans.length] as [string[], number];
+      await reading.commitWithKeys(keys);
+      pressed.set(s.caseId, value);
+    }
+    await backToStudy(page);
+    const log = await studyPage(page).exportText(/Save read log/);
+    const rows = Papa.parse<Record<string, string>>(log, { header: true, skipEmptyLines: true }).data;
+    for (const r of rows) {
+      expect(r.scale).toBe('percent');
+      expect(Number(r.final_rating)).toBe(pressed.get(r.case_id ?? ''));
+      expect(r.final_call).toBe(Number(r.final_rating) >= 50 ? '1' : '0');
+    }
+    const dir = mkdtempSync(join(tmpdir(), 'heed-percent-'));
+    writeFileSync(join(dir, 'reads.csv'), log);
+    const report = JSON.parse(execFileSync(process.execPath, ['bin/heed.js', 'analyze', join(dir, 'reads.csv'), '--json', '--boot', '0'], { encoding: 'utf8' }));
+    const main = rows.filter((r) => r.practice === '0');
+    // Brier (1950): mean of (forecast − outcome)², the forecast being rating/100, by hand here
+    const brier = main.reduce((s, r) => s + (Number(r.final_rating) / 100 - Number(r.truth)) ** 2, 0) / main.length;
+    const section = report.readers[0].unaided ?? report.readers[0].aided;
+    expect(section.brier).toBeCloseTo(brier, 12);
+    expect(section.calibration).not.toBeNull();
   });
 });

@@ -3,7 +3,7 @@
  * to the database before the next question appears; the clock (performance.now, pausable) starts
  * when the case's pixels are drawn.
  */
-import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
+import { useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState } from 'react';
 import { elapsedMs, pauseClock, resumeClock, startClock, type ActiveClock } from '../../core/active-clock';
 import { callFromRating, defaultAnswerScale } from '../../core/answer-scale';
 import type { Bit } from '../../core/read-log';
@@ -187,17 +187,19 @@ export const ReadingScreen = ({ studyId, sessionId, notice }: Props) => {
 
   const endFeedback = useCallback(() => setFeedback(null), []);
 
-  useEffect(() => {
+  // a layout effect: the handler with this render's answer is in place before the next key can arrive
+  useLayoutEffect(() => {
     const onKey = (event: KeyboardEvent) => {
       const action = readingKeyAction(event, scale.kind);
       if (!action) return;
       event.preventDefault();
       if (action.kind === 'fullscreen') { toggleFullscreen(); return; }
-      if (feedback) { if (action.kind === 'commit') endFeedback(); return; }
       if (action.kind === 'pause') {
         if (breakFor && !pausedNow.current) endBreak(); else togglePause();
         return;
       }
+      // the truth on screen: Enter continues (once not paused); other keys wait
+      if (feedback) { if (action.kind === 'commit' && !pausedNow.current) endFeedback(); return; }
       if (paused || busy) return;
       if (breakFor) { if (action.kind === 'commit') endBreak(); return; }
       switch (action.kind) {
