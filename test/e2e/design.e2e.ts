@@ -75,7 +75,7 @@ describe('design: own case set, planted errors, caution notice, crossover with w
       steps.push(await readWholePeriod(chrome));
     }
     expect(steps).toEqual(Array(4).fill((CASES + PRACTICE) * 2));
-    await page.getByRole('heading', { name: 'Readers' }).waitFor();
+    await page.getByRole('heading', { name: 'Readers', exact: true }).waitFor();
     await page.screenshot({ path: join(SHOTS, 'study-done.png'), fullPage: true });
     expect(await page.getByText('opened early by QO-1: training block ends this week').count()).toBe(2);
     await page.screenshot({ path: join(SHOTS, 'study-done.png'), fullPage: true });
@@ -120,7 +120,7 @@ describe('design: own case set, planted errors, caution notice, crossover with w
     expect(problems).toEqual([]);
     expect(compared).toBeGreaterThan(400);
     await page.getByRole('button', { name: '← Study' }).click();
-    await page.getByRole('heading', { name: 'Readers' }).waitFor();
+    await page.getByRole('heading', { name: 'Readers', exact: true }).waitFor();
 
     const studyFile = JSON.parse(await study.exportText(/Save design record/)) as { design: { seed: number; planted: unknown }; planted: unknown[] };
     expect(studyFile.planted).toHaveLength(10);

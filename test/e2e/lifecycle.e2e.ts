@@ -125,7 +125,7 @@ describe('a study’s whole life', () => {
       const painted = await study.startPeriod('R01', period);
       await readingPage(page).waitForCase(painted);
       await readWholePeriod(chrome);
-      await page.getByRole('heading', { name: 'Readers' }).waitFor();
+      await page.getByRole('heading', { name: 'Readers', exact: true }).waitFor();
     }
     expect(await page.getByRole('button', { name: 'Edit design' }).isDisabled()).toBe(true);
     expect(await page.getByRole('region', { name: 'Study actions' }).textContent()).toContain('The design is locked');

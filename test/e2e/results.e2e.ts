@@ -75,7 +75,7 @@ describe('results page: pictures and plain words, the same numbers as heed analy
         offset += 5;
       }
     }
-    await page.getByRole('heading', { name: 'Readers' }).waitFor();
+    await page.getByRole('heading', { name: 'Readers', exact: true }).waitFor();
     const logFile = join(mkdtempSync(join(tmpdir(), 'heed-e2e-results-')), 'reads.csv');
     writeFileSync(logFile, await study.exportText(/Save read log/));
 
