@@ -91,7 +91,13 @@ const splitRecords = (text: string, take: (cells: string[], line: number) => voi
   if (problem !== null) throw problem;
 };
 
+/** A read log needs about 25 columns plus case_<name> ones; a wider header is refused at once. */
+export const MAX_READ_LOG_COLUMNS = 1000;
+
 const checkHeader = (cells: string[], line: number): void => {
+  if (cells.length > MAX_READ_LOG_COLUMNS) {
+    throw new ReadLogError(line, null, `the header has ${cells.length.toLocaleString('en')} columns; the limit is ${MAX_READ_LOG_COLUMNS.toLocaleString('en')}`);
+  }
   const pos = new Set<string>();
   for (const name of cells) {
     if (pos.has(name)) throw new ReadLogError(line, name, 'appears twice in the header');
