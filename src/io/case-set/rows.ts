@@ -79,7 +79,8 @@ export const readRows = (file: string, columns: Columns, rows: CsvRow[], problem
       if (checked.ok) images.push(checked.path);
       else problems.add(file, line, 'image', checked.message);
     }
-    const attributes: Record<string, string> = {};
+    // null prototype: a case___proto__ or case_constructor column is an ordinary key, not the prototype
+    const attributes: Record<string, string> = Object.create(null);
     for (const { name, index } of columns.attributes) attributes[name] = (cells[index] ?? '').trim();
     if (problems.count > before || truth === null) continue;
 

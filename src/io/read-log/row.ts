@@ -39,7 +39,8 @@ export const parseRow = (cells: readonly string[], line: number, layout: RowLayo
   if (assistance !== 'none' && aiCall === null) throw new ReadLogError(line, 'ai_call', `must be 0 or 1 when assistance is ${assistance}`);
   const initialCall = f.optionalBit(cell('initial_call'), line, 'initial_call');
   if (assistance === 'sequential' && initialCall === null) throw new ReadLogError(line, 'initial_call', 'must be 0 or 1 when assistance is sequential');
-  const case_attributes: Record<string, string> = {};
+  // null prototype: a case___proto__ or case_constructor column is an ordinary key, not the prototype
+  const case_attributes: Record<string, string> = Object.create(null);
   for (const a of layout.attrs) case_attributes[a.name] = same(cells[a.i] ?? '');
   // the property order below is the order cells are checked in (and the ReadRow field order)
   return {
