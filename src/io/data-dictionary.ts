@@ -35,6 +35,7 @@ export const dataDictionary = (attributeNames: readonly string[]): string => [
   '',
   'UTF-8, comma-separated, header row, \\n line ends, RFC 4180 quoting. Booleans are 0/1; a value that does not apply is empty.',
   'Derived score (0..100, likelihood the finding is present): final_call = 1 ? 50 + final_confidence/2 : 50 - final_confidence/2.',
+  "Spreadsheet safety: a text cell that starts with =, +, -, @, a tab or a carriage return (and is not a plain number) is written with a single quote (') before it, so a spreadsheet shows it as text instead of running it as a formula (OWASP CSV Injection guidance). Numbers are never quoted. Heed's own reader (heed analyze, import) takes that one quote off again; in other tools, remove a leading ' from such text cells.",
   '',
   ...READ_LOG_COLUMNS.map((c) => `${c}: ${MEANING[c]}`),
   ...attributeNames.map((a) => `case_${a}: text, case attribute "${a}" from the case set`),

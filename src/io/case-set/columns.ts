@@ -1,4 +1,5 @@
 // The header of cases.csv: which column is which (SPEC Contract 4).
+import { formulaProblem } from '../../core/formula-text';
 import type { Problems } from './problems';
 
 export const REQUIRED = ['case_id', 'finding', 'truth', 'image'] as const;
@@ -47,8 +48,12 @@ export const readColumns = (file: string, cells: string[], problems: Problems): 
     if (KNOWN.includes(name)) index[name] = i;
     else if (name.startsWith(ATTRIBUTE_PREFIX) && name !== 'case_id') {
       const attribute = name.slice(ATTRIBUTE_PREFIX.length);
+      const formula = formulaProblem(attribute);
       if (attribute === '') {
         problems.add(file, 1, name, `column ${name} needs a name after "${ATTRIBUTE_PREFIX}", e.g. case_site`);
+        usable = false;
+      } else if (formula) {
+        problems.add(file, 1, name, `the name of column ${name} after "${ATTRIBUTE_PREFIX}" ${formula}`);
         usable = false;
       } else {
         attributes.push({ name: attribute, index: i });

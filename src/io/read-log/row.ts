@@ -1,6 +1,7 @@
 // One data row of a reads.csv into a typed read. Cells are checked in a fixed order, so a row
 // with several problems always reports the same (first) one.
 import { READ_LOG_COLUMNS, type ReadLogColumn, type ReadRow } from '../../core/read-log';
+import { restoreCell } from '../../core/formula-text';
 import * as f from './fields';
 import { ReadLogError } from './read-log-error';
 
@@ -32,7 +33,8 @@ export const rowLayout = (header: readonly string[]): RowLayout => {
  */
 export const parseRow = (cells: readonly string[], line: number, layout: RowLayout): ReadRow => {
   const { at, same } = layout;
-  const cell = (column: ReadLogColumn): string => cells[at[column] ?? -1] ?? '';
+  // restoreCell: takes off the quote that Heed's export puts before formula-looking text
+  const cell = (column: ReadLogColumn): string => restoreCell(cells[at[column] ?? -1] ?? '');
   const assistance = f.assistance(cell('assistance'), line, 'assistance');
   const aiCall = f.optionalBit(cell('ai_call'), line, 'ai_call');
   if (assistance === 'none' && aiCall !== null) throw new ReadLogError(line, 'ai_call', 'must be empty when assistance is none');
@@ -41,7 +43,7 @@ export const parseRow = (cells: readonly string[], line: number, layout: RowLayo
   if (assistance === 'sequential' && initialCall === null) throw new ReadLogError(line, 'initial_call', 'must be 0 or 1 when assistance is sequential');
   // null prototype: a case___proto__ or case_constructor column is an ordinary key, not the prototype
   const case_attributes: Record<string, string> = Object.create(null);
-  for (const a of layout.attrs) case_attributes[a.name] = same(cells[a.i] ?? '');
+  for (const a of layout.attrs) case_attributes[a.name] = same(restoreCell(cells[a.i] ?? ''));
   // the property order below is the order cells are checked in (and the ReadRow field order)
   return {
     study_id: same(f.text(cell('study_id'), line, 'study_id')),
