@@ -45,7 +45,7 @@ export const parseRow = (cells: readonly string[], line: number, layout: RowLayo
   const case_attributes: Record<string, string> = Object.create(null);
   for (const a of layout.attrs) case_attributes[a.name] = same(restoreCell(cells[a.i] ?? ''));
   // the property order below is the order cells are checked in (and the ReadRow field order)
-  return {
+  const read: ReadRow = {
     study_id: same(f.text(cell('study_id'), line, 'study_id')),
     reader_id: same(f.text(cell('reader_id'), line, 'reader_id')),
     reader_role: same(cell('reader_role')),
@@ -71,6 +71,10 @@ export const parseRow = (cells: readonly string[], line: number, layout: RowLayo
     shown_at: f.isoUtc(cell('shown_at'), line, 'shown_at'),
     case_attributes,
   };
+  if (read.initial_ms !== null && read.initial_ms > read.total_ms) {
+    throw new ReadLogError(line, 'initial_ms', `must be at most total_ms (${read.total_ms}), got ${read.initial_ms}`);
+  }
+  return read;
 };
 
 /**
