@@ -35,7 +35,7 @@ export const startApp = ({ distRoot, preload }: AppPaths, env: Record<string, st
     applySessionPolicy(session.defaultSession);
     protocol.handle(APP_SCHEME, (request) => appResponse(distRoot, request.url));
     registerIpc(ipcMain);
-    const window = createMainWindow(preload);
+    const window = createMainWindow(preload, app.isPackaged);
     app.on('second-instance', () => {
       if (window.isMinimized()) window.restore();
       window.focus();

@@ -12,19 +12,10 @@ import {
   DEFAULT_PORT, appUrl, chooseMode, chromiumArgs, chromiumProfileDir, electronBinary, findChromium, hasDisplay, parsePort,
 } from './lib/launch-plan.mjs';
 import { ELECTRON, RENDERER, targetIsStale } from './lib/freshness.mjs';
+import { profileToken, provesHeed } from './lib/launch-token.mjs';
 import { startStaticServer } from './lib/static-server.mjs';
 
 const HANDOFF_MS = 3000;
-
-/** Whether `url` answers with Heed's own page (another launcher of ours is serving there). */
-const servesHeed = async (url) => {
-  try {
-    const response = await fetch(url, { signal: AbortSignal.timeout(2000) });
-    return response.ok && /<title>Heed<\/title>/.test(await response.text());
-  } catch {
-    return false;
-  }
-};
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 const env = process.env;
 const say = (line) => console.log(`heed: ${line}`);
@@ -88,21 +79,25 @@ if (choice.mode === 'electron') {
   const child = spawn(electron, [root], { cwd: root, stdio: 'inherit', env });
   forward(child, (code) => process.exit(code));
 } else {
+  // The profile's secret token: a server holding it proves it is this Heed (a page title proves
+  // nothing: a squatter on the port would otherwise be handed the whole profile).
+  const profileDir = chromiumProfileDir(env, homedir());
+  const token = profileToken(profileDir);
   const listen = async () => {
     const dist = path.join(root, 'dist');
-    if (port.port !== null) return startStaticServer({ root: dist, port: port.port });
+    if (port.port !== null) return startStaticServer({ root: dist, port: port.port, token });
     try {
-      return await startStaticServer({ root: dist, port: DEFAULT_PORT });
+      return await startStaticServer({ root: dist, port: DEFAULT_PORT, token });
     } catch (error) {
       if (error?.code !== 'EADDRINUSE') throw error;
       // IndexedDB is kept per origin: another port would open another, empty database. So reuse a
       // Heed already serving on the usual port, and otherwise stop rather than hide the data.
       const url = `http://127.0.0.1:${DEFAULT_PORT}/`;
-      if (await servesHeed(url)) {
+      if (await provesHeed(url, token)) {
         say(`Heed is already being served at ${url}; using it`);
         return { url, port: DEFAULT_PORT, reused: true, close: async () => undefined };
       }
-      fail(`port ${DEFAULT_PORT} is taken by another program. Heed keeps its data per address, so stop that program, or choose HEED_PORT=<port> knowing that address starts with an empty database.`);
+      fail(`port ${DEFAULT_PORT} is taken by a program that cannot prove it is this Heed (it does not hold this profile's token). Heed keeps its data per address, so stop that program, or choose HEED_PORT=<port> knowing that address starts with an empty database.`);
     }
   };
   let server;
@@ -122,7 +117,6 @@ if (choice.mode === 'electron') {
     process.on('SIGINT', () => shutdown(0));
     process.on('SIGTERM', () => shutdown(0));
   } else {
-    const profileDir = chromiumProfileDir(env, homedir());
     mkdirSync(profileDir, { recursive: true });
     const isRoot = typeof process.getuid === 'function' && process.getuid() === 0;
     const args = chromiumArgs({ url: appUrl(server.url, 'chromium', profileDir), profileDir, isRoot, debugPort: debugPort.port });

@@ -4,6 +4,7 @@ import { createServer } from 'node:http';
 import { createReadStream } from 'node:fs';
 import { realpath, stat } from 'node:fs/promises';
 import path from 'node:path';
+import { PROOF_PATH, proofFor } from './launch-token.mjs';
 import { contentTypeFor, resolveInside, securityHeaders } from './web-policy.mjs';
 
 const HOST = '127.0.0.1';
@@ -19,7 +20,7 @@ const hostAllowed = (hostHeader, port) =>
 
 const isInside = (root, file) => file === root || file.startsWith(root + path.sep);
 
-const handler = (root, realRoot, getPort) => async (req, res) => {
+const handler = (root, realRoot, getPort, token) => async (req, res) => {
   if (!hostAllowed(req.headers.host, getPort())) return send(res, 421, 'wrong host\n');
   if (req.method !== 'GET' && req.method !== 'HEAD') return send(res, 405, 'method not allowed\n', { Allow: 'GET, HEAD' });
   let pathname;
@@ -27,6 +28,11 @@ const handler = (root, realRoot, getPort) => async (req, res) => {
     pathname = new URL(req.url ?? '/', `http://${HOST}`).pathname;
   } catch {
     return send(res, 400, 'bad request\n');
+  }
+  if (pathname === PROOF_PATH) {
+    // the launcher's challenge (launch-token.mjs); only a server given the profile's token answers
+    const answer = token ? proofFor(token, new URL(req.url ?? '/', `http://${HOST}`).searchParams.get('nonce') ?? '') : null;
+    return answer === null ? send(res, 404, 'not found\n') : send(res, 200, `${answer}\n`, { 'Cache-Control': 'no-store' });
   }
   const file = resolveInside(root, pathname);
   if (file === null) return send(res, 404, 'not found\n');
@@ -51,15 +57,16 @@ const handler = (root, realRoot, getPort) => async (req, res) => {
 
 /**
  * Serves `root` on http://127.0.0.1:PORT/. `port` 0 (the default) picks a free port; a busy
- * fixed port rejects with the listen error (code EADDRINUSE) so the caller can decide.
- * @param {{ root: string; port?: number }} options
+ * fixed port rejects with the listen error (code EADDRINUSE) so the caller can decide. With
+ * `token`, it answers the launcher's proof challenge at PROOF_PATH (launch-token.mjs).
+ * @param {{ root: string; port?: number; token?: string }} options
  * @returns {Promise<{ url: string; port: number; close(): Promise<void> }>}
  */
-export const startStaticServer = async ({ root, port = 0 }) => {
+export const startStaticServer = async ({ root, port = 0, token }) => {
   const absRoot = path.resolve(root);
   const realRoot = await realpath(absRoot);
   let boundPort = port;
-  const server = createServer(handler(absRoot, realRoot, () => boundPort));
+  const server = createServer(handler(absRoot, realRoot, () => boundPort, token));
   await new Promise((resolve, reject) => {
     server.once('error', reject);
     server.listen(port, HOST, () => {

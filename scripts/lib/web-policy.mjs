@@ -2,7 +2,14 @@
 // Chromium launcher's static server so both serve the same headers and MIME types.
 import path from 'node:path';
 
-/** Content Security Policy for every document Heed serves: own files only, no remote content. */
+/**
+ * Content Security Policy for every document Heed serves: own files only, no remote content, no
+ * form ever submitted anywhere (forms are handled in script). Styles keep 'unsafe-inline' on
+ * purpose: Observable Plot puts a <style> element inside every chart's SVG (plot.js,
+ * `svg.append("style")`), which a style-src without it blocks. React's style attributes are
+ * set through the CSSOM (element.style) and would not need it. Scripts stay 'self' only, which
+ * is what stops injected markup from running.
+ */
 export const CONTENT_SECURITY_POLICY = [
   "default-src 'self'",
   "img-src 'self' blob: data:",
@@ -10,6 +17,7 @@ export const CONTENT_SECURITY_POLICY = [
   "style-src 'self' 'unsafe-inline'",
   "object-src 'none'",
   "base-uri 'none'",
+  "form-action 'none'",
   "frame-ancestors 'none'",
 ].join('; ');
 

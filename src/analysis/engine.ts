@@ -80,7 +80,7 @@ export const analyzeReads = (rows: readonly ReadRow[], options: AnalyzeOptions =
     const all: ReadRow[] = [];
     for (const id of ids) {
       const rs = perReader.get(id) ?? [];
-      all.push(...rs);
+      for (const r of rs) all.push(r);
       readers.push({ reader_id: id, reader_role: rs[0]?.reader_role ?? '', finding, ...sections(rs), subgroups: subgroups(rs, attributes) });
     }
     if (options.readersOnly === true) continue;

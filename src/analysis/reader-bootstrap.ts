@@ -150,7 +150,8 @@ export const readerAveraged = (reads: readonly ReadRow[], options: { seed: numbe
   const readers: ReaderConds[] = [...grouped.values()].map((g) => ({ unaided: toCond(g.u, caseIndex), aided: toCond(g.a, caseIndex) }));
   const R = readers.length;
   const C = caseIndex.size;
-  const maxLevels = Math.max(1, ...readers.flatMap((r) => [r.unaided?.levels ?? 0, r.aided?.levels ?? 0]));
+  let maxLevels = 1;
+  for (const r of readers) maxLevels = Math.max(maxLevels, r.unaided?.levels ?? 0, r.aided?.levels ?? 0);
   const pos = new Float64Array(maxLevels);
   const neg = new Float64Array(maxLevels);
   const one = new Float64Array(F);

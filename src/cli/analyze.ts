@@ -9,7 +9,7 @@ import type { AnalysisReport, GroupFinding, ReaderEntry } from '../analysis/repo
 import type { Sections } from '../analysis/sections';
 import type { WeightOfAdvice } from '../analysis/weight-of-advice';
 import type { Proportion } from '../analysis/wilson';
-import { parseReadLog, ReadLogError } from '../io/read-log-parse';
+import { parseReadLogBytes, ReadLogError } from '../io/read-log-parse';
 import { CliError } from './cli-error';
 
 type AnalyzeArgs = { file: string; json: boolean; seed: number; boot: number; covariance: CovarianceMethod; includeWithdrawn: boolean };
@@ -20,6 +20,9 @@ const covarianceMethod = (value: string | undefined): CovarianceMethod => {
   if (value === 'jackknife' || value === 'delong') return value;
   throw new CliError(`--covariance needs jackknife or delong, got ${value === undefined ? 'nothing' : JSON.stringify(value)}`);
 };
+
+/** More resamples than any interval needs; a larger --boot would only keep the machine busy. */
+export const MAX_BOOT = 100_000;
 
 const wholeNumber = (flag: string, value: string | undefined, min: number): number => {
   if (value === undefined || !/^\d+$/.test(value) || Number(value) < min || !Number.isSafeInteger(Number(value))) {
@@ -48,21 +51,22 @@ export const parseAnalyzeArgs = (args: string[]): AnalyzeArgs => {
   }
   if (file === undefined) throw new CliError(USAGE);
   if (seed > 0x7fffffff) throw new CliError(`--seed must be at most ${0x7fffffff}, got ${seed}`);
+  if (boot > MAX_BOOT) throw new CliError(`--boot must be at most ${MAX_BOOT.toLocaleString('en')}, got ${boot}`);
   return { file, json, seed, boot, covariance, includeWithdrawn };
 };
 
 export const runAnalyze = async (args: string[]): Promise<number> => {
   const { file, json, seed, boot, covariance, includeWithdrawn } = parseAnalyzeArgs(args);
-  let text: string;
+  let bytes: Uint8Array;
   try {
-    text = await readFile(file, 'utf8');
+    bytes = new Uint8Array(await readFile(file));
   } catch (error) {
     const code = error instanceof Error && 'code' in error ? String(error.code) : 'unreadable';
     throw new CliError(`${file}: cannot read the file (${code === 'ENOENT' ? 'no such file' : code})`);
   }
   let rows;
   try {
-    rows = parseReadLog(text);
+    rows = parseReadLogBytes(bytes);
   } catch (error) {
     if (error instanceof ReadLogError) {
       throw new CliError(`${file}:${error.line}: ${error.column === null ? '' : `column ${error.column}: `}${error.problem}`);

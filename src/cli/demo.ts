@@ -40,7 +40,7 @@ export const runDemo = async (args: string[]): Promise<number> => {
   try {
     await mkdir(join(options.out, 'images'), { recursive: true });
     for (const image of set.images) {
-      const target = join(options.out, ...image.path.split('/'));
+      const target = join(options.out, image.path);
       await mkdir(dirname(target), { recursive: true });
       await writeFile(target, image.bytes);
     }

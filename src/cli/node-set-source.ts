@@ -10,7 +10,7 @@ import { zipSource } from '../io/case-set/zip-source';
  */
 export const folderSource = (root: string): SetSource => {
   const within = (path: string): string => {
-    const full = join(root, ...path.split('/'));
+    const full = join(root, path);
     if (relative(root, full).startsWith('..')) throw new Error(`${path} is outside the set`);
     return full;
   };

@@ -34,7 +34,7 @@ const caseSetProblems = (design: StudyDesign, manifest: CaseSetManifest): string
   if (main === 0) problems.push('the case set has no main (non-practice) cases to read');
   else if (design.blocks > main) problems.push(`${design.blocks} blocks need at least ${design.blocks} main cases; the case set has ${main}`);
   const suggestion = suggestionProblems(manifest, design);
-  problems.push(...capped(suggestion));
+  for (const p of capped(suggestion)) problems.push(p);
   if (suggestion.length > 0) return problems;
   const table = naturalSuggestions(manifest, design);
   for (const finding of design.findings) {

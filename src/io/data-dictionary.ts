@@ -46,6 +46,7 @@ export const dataDictionary = (attributeNames: readonly string[]): string => [
   "Full description: docs/formats.md (this file's format) and docs/methods.md (the statistics) in Heed's repository.",
   '',
   'On a rating scale the rating is the ROC score, and the call follows from the study threshold (call = 1 when rating >= threshold); see docs/scales-and-training.md.',
+  "Spreadsheet safety: a text cell that starts with =, +, -, @, a tab or a carriage return (and is not a plain number) is written with a single quote (') before it, so a spreadsheet shows it as text instead of running it as a formula (OWASP CSV Injection guidance). Numbers are never quoted. Heed's own reader (heed analyze, import) takes that one quote off again; in other tools, remove a leading ' from such text cells.",
   '',
   ...READ_LOG_COLUMNS.map((c) => `${c}: ${MEANING[c]}`),
   ...READ_LOG_OPTIONAL_COLUMNS.map((c) => `${c}: ${OPTIONAL_MEANING[c]}`),

@@ -1,5 +1,6 @@
 import Papa from 'papaparse';
 import { READ_LOG_COLUMNS, type ReadRow } from '../core/read-log';
+import { decodeUtf8 } from './case-set/text';
 import { ReadLogError } from './read-log/read-log-error';
 import { parseRow, repeatedReads, rowLayout, type RowLayout } from './read-log/row';
 
@@ -91,7 +92,24 @@ const splitRecords = (text: string, take: (cells: string[], line: number) => voi
   if (problem !== null) throw problem;
 };
 
+/** A read log needs about 25 columns plus case_<name> ones; a wider header is refused at once. */
+export const MAX_READ_LOG_COLUMNS = 1000;
+
+/**
+ * parseReadLog on a file's bytes, decoded as strict UTF-8: a file in another encoding (e.g.
+ * Latin-1) is refused, naming the line of the first bad byte, instead of its letters silently
+ * becoming U+FFFD. A leading byte-order mark is dropped.
+ */
+export const parseReadLogBytes = (bytes: Uint8Array): ReadRow[] => {
+  const decoded = decodeUtf8(bytes);
+  if (!decoded.ok) throw new ReadLogError(decoded.line, null, 'the file is not UTF-8 text (first bad byte on this line); save it as UTF-8 CSV');
+  return parseReadLog(decoded.text);
+};
+
 const checkHeader = (cells: string[], line: number): void => {
+  if (cells.length > MAX_READ_LOG_COLUMNS) {
+    throw new ReadLogError(line, null, `the header has ${cells.length.toLocaleString('en')} columns; the limit is ${MAX_READ_LOG_COLUMNS.toLocaleString('en')}`);
+  }
   const pos = new Set<string>();
   for (const name of cells) {
     if (pos.has(name)) throw new ReadLogError(line, name, 'appears twice in the header');

@@ -1,5 +1,6 @@
 /** Enrolling readers in a study: pseudonymous codes, unique per study, assigned to sequences. */
 import type { HeedDb } from './db';
+import { formulaProblem } from '../core/formula-text';
 import { appendEvent } from './events';
 import { InputError } from './input-error';
 import type { StoredReader } from './records';
@@ -12,6 +13,8 @@ const CODE_PATTERN = /^[A-Za-z0-9._-]{1,32}$/;
 export const readerCodeProblem = (code: string): string | null => {
   const trimmed = code.trim();
   if (trimmed === '') return 'Reader code is empty: give a pseudonymous code such as R01.';
+  const formula = formulaProblem(code) ?? formulaProblem(trimmed);
+  if (formula) return `Reader code "${trimmed}" ${formula}.`;
   if (!CODE_PATTERN.test(trimmed)) return `Reader code "${trimmed}" must be 1-32 letters, digits, ".", "_" or "-" (no names: codes are pseudonymous).`;
   return null;
 };

@@ -1,5 +1,6 @@
 /** Studies: a design over a case set, with the suggestions it shows. Locked once reading starts. */
 import { withDesignDefaults, type StudyDesign } from '../core/design';
+import { formulaProblem } from '../core/formula-text';
 import type { HeedDb } from './db';
 import { appendEvent } from './events';
 import { InputError } from './input-error';
@@ -11,6 +12,8 @@ export type NewStudy = { name: string; caseSetId: string; design: StudyDesign; s
 export const createStudy = async (db: HeedDb, input: NewStudy): Promise<StoredStudy> => {
   const name = input.name.trim();
   if (name === '') throw new InputError('Study name is empty.');
+  const formula = formulaProblem(input.name) ?? formulaProblem(name);
+  if (formula) throw new InputError(`Study name "${name}" ${formula}.`);
   const study: StoredStudy = {
     id: crypto.randomUUID(),
     name,

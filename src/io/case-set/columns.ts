@@ -1,10 +1,13 @@
 // The header of cases.csv: which column is which (docs/formats.md, "The case set").
+import { formulaProblem } from '../../core/formula-text';
 import type { Problems } from './problems';
 
 export const REQUIRED = ['case_id', 'finding', 'truth', 'image'] as const;
 export const OPTIONAL = ['model_score', 'model_call', 'practice'] as const;
 const KNOWN: readonly string[] = [...REQUIRED, ...OPTIONAL];
 export const ATTRIBUTE_PREFIX = 'case_';
+/** More columns than any real case set needs; a wider header is refused before it is read. */
+export const MAX_COLUMNS = 1000;
 
 export type Columns = {
   /** index of each known column present */
@@ -45,6 +48,12 @@ export const readColumns = (file: string, cells: string[], problems: Problems): 
   const index: Record<string, number> = {};
   const attributes: Columns['attributes'] = [];
   const ignored: string[] = [];
+  if (cells.length > MAX_COLUMNS) {
+    problems.add(file, 1, null, `the header has ${cells.length.toLocaleString('en')} columns; the limit is ${MAX_COLUMNS.toLocaleString('en')}`);
+    return null;
+  }
+  // first column of each name: one pass, so a wide header costs linear time
+  const firstOf = new Map<string, number>();
   let usable = true;
   cells.forEach((cell, i) => {
     const name = cell.trim();
@@ -53,8 +62,9 @@ export const readColumns = (file: string, cells: string[], problems: Problems): 
       usable = false;
       return;
     }
-    const first = cells.findIndex((c) => c.trim() === name);
-    if (first !== i) {
+    const first = firstOf.get(name);
+    if (first === undefined) firstOf.set(name, i);
+    else {
       problems.add(file, 1, name, `column ${name} appears twice (columns ${first + 1} and ${i + 1})`);
       usable = false;
       return;
@@ -62,8 +72,12 @@ export const readColumns = (file: string, cells: string[], problems: Problems): 
     if (KNOWN.includes(name)) index[name] = i;
     else if (name.startsWith(ATTRIBUTE_PREFIX) && name !== 'case_id') {
       const attribute = name.slice(ATTRIBUTE_PREFIX.length);
+      const formula = formulaProblem(attribute);
       if (attribute === '') {
         problems.add(file, 1, name, `column ${name} needs a name after "${ATTRIBUTE_PREFIX}", e.g. case_site`);
+        usable = false;
+      } else if (formula) {
+        problems.add(file, 1, name, `the name of column ${name} after "${ATTRIBUTE_PREFIX}" ${formula}`);
         usable = false;
       } else {
         attributes.push({ name: attribute, index: i });

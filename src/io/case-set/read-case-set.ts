@@ -5,13 +5,14 @@
  * first is the one to show in a one-line message) and their total count. It never throws for bad
  * input and has no side effects, so a refused set leaves nothing behind.
  * Limits (DEFAULT_LIMITS): cases.csv <= 20 MB and 20,000 data rows; each image <= 25 MB; at most
- * 20,000 images and 4 GB in all.
+ * 20,000 images and 4 GB in all; each image's structure and size are checked (image-header.ts).
  * Example: await readCaseSet(memorySource({ 'cases.csv': csv, 'a.png': png }, 'demo'))
  *   -> { ok: true, manifest: { name: 'demo', cases: [...] }, images: [...], summary: {...} }.
  */
 import type { CaseImage, CaseSetManifest } from '../../core/case-set';
 import { readColumns } from './columns';
 import { parseCsvRows } from './csv-rows';
+import { imageHeader } from './image-header';
 import { describeBytes, sniffImage } from './magic';
 import { collectProblems } from './problems';
 import type { Problems } from './problems';
@@ -140,6 +141,12 @@ export const readCaseSet = async (source: SetSource, limits: Partial<CaseSetLimi
     const mime = sniffImage(data);
     if (!mime) {
       problems.add(file, line, 'image', `image ${path} is not really a PNG or JPEG (its bytes are ${describeBytes(data)})`);
+      return null;
+    }
+    // read the structure and size now, so an image that cannot be shown never reaches a reader
+    const header = imageHeader(data, mime);
+    if (!header.ok) {
+      problems.add(file, line, 'image', `image ${path} cannot be shown: ${header.reason}`);
       return null;
     }
     return { path, mime, bytes: data };

@@ -1,5 +1,7 @@
 // Data rows of cases.csv to case records, checking every value (docs/formats.md, "The case set").
 import type { CaseFinding, CaseRecord } from '../../core/case-set';
+import { formulaProblem } from '../../core/formula-text';
+import { ATTRIBUTE_PREFIX } from './columns';
 import type { Columns } from './columns';
 import type { CsvRow } from './csv-rows';
 import { checkImagePath } from './paths';
@@ -50,14 +52,25 @@ export const readRows = (file: string, columns: Columns, rows: CsvRow[], problem
       return null;
     };
 
+    // Text a spreadsheet could run as a formula never enters (checked before trimming too, as a
+    // leading tab or CR is one of the signs).
+    const formula = (name: string, raw: string): boolean => {
+      const problem = formulaProblem(raw) ?? formulaProblem(raw.trim());
+      if (problem) problems.add(file, line, name, `${name} ${show(raw.trim())} ${problem}`);
+      return problem !== null;
+    };
     const caseId = textOf('case_id');
-    if (!CASE_ID.test(caseId)) {
+    if (formula('case_id', caseId)) {
+      // reported
+    } else if (!CASE_ID.test(caseId)) {
       problems.add(file, line, 'case_id', caseId === ''
         ? 'case_id is empty'
         : `case_id ${show(caseId)} must be 1-64 characters of letters, digits, '.', '_' or '-'`);
     }
     const finding = textOf('finding').trim();
-    if (finding === '') problems.add(file, line, 'finding', 'finding is empty');
+    if (formula('finding', textOf('finding'))) {
+      // reported
+    } else if (finding === '') problems.add(file, line, 'finding', 'finding is empty');
     else if (finding.length > MAX_FINDING || [...finding].some((ch) => ch.charCodeAt(0) < 0x20)) {
       problems.add(file, line, 'finding', `finding ${show(finding)} must be at most ${MAX_FINDING} characters with no control characters`);
     }
@@ -79,8 +92,12 @@ export const readRows = (file: string, columns: Columns, rows: CsvRow[], problem
       if (checked.ok) images.push(checked.path);
       else problems.add(file, line, 'image', checked.message);
     }
-    const attributes: Record<string, string> = {};
-    for (const { name, index } of columns.attributes) attributes[name] = (cells[index] ?? '').trim();
+    // null prototype: a case___proto__ or case_constructor column is an ordinary key, not the prototype
+    const attributes: Record<string, string> = Object.create(null);
+    for (const { name, index } of columns.attributes) {
+      const raw = cells[index] ?? '';
+      if (!formula(`${ATTRIBUTE_PREFIX}${name}`, raw)) attributes[name] = raw.trim();
+    }
     if (problems.count > before || truth === null) continue;
 
     const pairKey = `${caseId}\u0000${finding}`;

@@ -8,6 +8,7 @@
  */
 import Papa from 'papaparse';
 import type { CaseSetManifest } from '../../core/case-set';
+import { neutraliseCell } from '../../core/formula-text';
 
 export const casesCsv = (manifest: CaseSetManifest): string => {
   const all = manifest.cases.flatMap((c) => c.findings);
@@ -29,5 +30,7 @@ export const casesCsv = (manifest: CaseSetManifest): string => {
       ...manifest.attributeNames.map((name) => c.attributes[name] ?? ''),
     ]),
   );
-  return `${Papa.unparse({ fields, data }, { newline: '\n' })}\n`;
+  // a formula-looking cell never leaves Heed unquoted (core/formula-text), even if one got in
+  const safe = data.map((row) => row.map(neutraliseCell));
+  return `${Papa.unparse({ fields: fields.map(neutraliseCell), data: safe }, { newline: '\n' })}\n`;
 };

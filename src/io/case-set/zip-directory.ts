@@ -9,6 +9,8 @@ export type ZipEntry = {
   compressedSize: number;
   size: number;
   localOffset: number;
+  /** where the entry's compressed bytes start (after its local header) */
+  dataOffset: number;
   /** unix host and the mode says symbolic link */
   symlink: boolean;
 };
@@ -17,6 +19,7 @@ export type ZipDirectory = { ok: true; entries: ZipEntry[] } | { ok: false; mess
 
 const EOCD = 0x06054b50;
 const CENTRAL = 0x02014b50;
+const LOCAL = 0x04034b50;
 const UNIX = 3;
 const S_IFMT = 0o170000;
 const S_IFLNK = 0o120000;
@@ -55,17 +58,44 @@ export const readZipDirectory = (bytes: Uint8Array): ZipDirectory => {
     if (size === 0xffffffff || compressedSize === 0xffffffff || localOffset === 0xffffffff) {
       return { ok: false, message: 'this zip uses the ZIP64 format, which Heed does not read; make a zip under 4 GB' };
     }
+    const name = decoder.decode(bytes.subarray(at + 46, at + 46 + nameLength));
+    if (localOffset + 30 > dirOffset || view.getUint32(localOffset, true) !== LOCAL) {
+      return { ok: false, message: `the zip is damaged (entry ${name} has no local header where its directory says)` };
+    }
+    const dataOffset = localOffset + 30 + view.getUint16(localOffset + 26, true) + view.getUint16(localOffset + 28, true);
+    if (dataOffset + compressedSize > dirOffset) return { ok: false, message: `the zip is damaged (entry ${name} runs into the directory)` };
     entries.push({
-      name: decoder.decode(bytes.subarray(at + 46, at + 46 + nameLength)),
+      name,
       flags: view.getUint16(at + 8, true),
       method: view.getUint16(at + 10, true),
       crc: view.getUint32(at + 16, true),
       compressedSize,
       size,
       localOffset,
+      dataOffset,
       symlink: madeBy >> 8 === UNIX && ((external >>> 16) & S_IFMT) === S_IFLNK,
     });
     at += 46 + nameLength + extraLength + commentLength;
   }
+  const shared = sharedEntries(entries);
+  if (shared) {
+    return { ok: false, message: `zip entries ${shared[0]} and ${shared[1]} overlap (share compressed bytes), the mark of a zip bomb; refusing the whole zip` };
+  }
   return { ok: true, entries };
+};
+
+/**
+ * Two entries whose stored ranges (local header through compressed data) overlap or share a
+ * local header, or null. A real zip stores each entry once; a bomb points many directory entries
+ * at one highly compressed entry, so its declared sizes each look small. Sorting keeps it
+ * O(n log n) for 65,535 entries.
+ */
+const sharedEntries = (entries: readonly ZipEntry[]): [string, string] | null => {
+  const byStart = entries.slice().sort((a, b) => a.localOffset - b.localOffset);
+  for (let i = 1; i < byStart.length; i += 1) {
+    const before = byStart[i - 1] as ZipEntry;
+    const entry = byStart[i] as ZipEntry;
+    if (entry.localOffset < before.dataOffset + before.compressedSize) return [before.name, entry.name];
+  }
+  return null;
 };

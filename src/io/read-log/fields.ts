@@ -61,6 +61,8 @@ export const number = (raw: string, line: number, column: string, min: number, m
     const t = raw.trim();
     if (!NUMBER.test(t)) fail(raw, line, column, 'must be a number');
     v = Number(t);
+    // 1e999 matches the pattern but is Infinity; a log only ever holds finite numbers
+    if (!Number.isFinite(v)) fail(raw, line, column, 'must be a finite number');
   }
   if (!(v >= min && v <= max)) fail(raw, line, column, `must be ${range}`);
   return v;
@@ -81,10 +83,26 @@ export const assistance = (raw: string, line: number, column: string): Assistanc
   return found;
 };
 
-const ISO_UTC = /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}(:\d{2}(\.\d+)?)?Z$/;
+const ISO_UTC = /^(\d{4})-(\d{2})-(\d{2})T(\d{2}):(\d{2})(?::(\d{2})(\.\d+)?)?Z$/;
+
+/**
+ * A real calendar time: Date.parse rolls 2026-02-30 over to March 2 instead of refusing it, so
+ * the fields are checked against the date they make (hours 0-23, minutes and seconds 0-59).
+ */
+const realTime = (raw: string): boolean => {
+  const m = ISO_UTC.exec(raw);
+  if (m === null) return false;
+  const part = (i: number): number => Number(m[i] ?? '0');
+  const year = part(1);
+  const month = part(2);
+  const day = part(3);
+  if (part(4) > 23 || part(5) > 59 || part(6) > 59) return false;
+  const date = new Date(Date.UTC(year, month - 1, day));
+  return date.getUTCFullYear() === year && date.getUTCMonth() === month - 1 && date.getUTCDate() === day;
+};
 
 export const isoUtc = (raw: string, line: number, column: string): string => {
-  if (!ISO_UTC.test(raw) || Number.isNaN(Date.parse(raw))) fail(raw, line, column, 'must be an ISO 8601 UTC time such as 2026-01-31T09:15:00Z');
+  if (!realTime(raw)) fail(raw, line, column, 'must be a real ISO 8601 UTC time such as 2026-01-31T09:15:00Z');
   return raw;
 };
 

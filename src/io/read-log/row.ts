@@ -1,6 +1,7 @@
 // One data row of a reads.csv into a typed read. Cells are checked in a fixed order, so a row
 // with several problems always reports the same (first) one.
 import { READ_LOG_COLUMNS, READ_LOG_OPTIONAL_COLUMNS, type ReadLogColumn, type ReadLogOptionalColumn, type ReadRow } from '../../core/read-log';
+import { restoreCell } from '../../core/formula-text';
 import * as f from './fields';
 import { ReadLogError } from './read-log-error';
 
@@ -32,8 +33,9 @@ export const rowLayout = (header: readonly string[]): RowLayout => {
  */
 export const parseRow = (cells: readonly string[], line: number, layout: RowLayout): ReadRow => {
   const { at, same } = layout;
-  // an optional column missing from the header reads as empty
-  const cell = (column: ReadLogColumn | ReadLogOptionalColumn): string => cells[at[column] ?? -1] ?? '';
+  // an optional column missing from the header reads as empty; restoreCell takes off the quote
+  // that Heed's export puts before formula-looking text
+  const cell = (column: ReadLogColumn | ReadLogOptionalColumn): string => restoreCell(cells[at[column] ?? -1] ?? '');
   const assistance = f.assistance(cell('assistance'), line, 'assistance');
   const aiCall = f.optionalBit(cell('ai_call'), line, 'ai_call');
   if (assistance === 'none' && aiCall !== null) throw new ReadLogError(line, 'ai_call', 'must be empty when assistance is none');
@@ -41,10 +43,11 @@ export const parseRow = (cells: readonly string[], line: number, layout: RowLayo
   const initialCall = f.optionalBit(cell('initial_call'), line, 'initial_call');
   if (assistance === 'sequential' && initialCall === null) throw new ReadLogError(line, 'initial_call', 'must be 0 or 1 when assistance is sequential');
   const scale = f.scale(cell('scale'), line, 'scale');
-  const case_attributes: Record<string, string> = {};
-  for (const a of layout.attrs) case_attributes[a.name] = same(cells[a.i] ?? '');
+  // null prototype: a case___proto__ or case_constructor column is an ordinary key, not the prototype
+  const case_attributes: Record<string, string> = Object.create(null);
+  for (const a of layout.attrs) case_attributes[a.name] = same(restoreCell(cells[a.i] ?? ''));
   // the property order below is the order cells are checked in (and the ReadRow field order)
-  return {
+  const read: ReadRow = {
     study_id: same(f.text(cell('study_id'), line, 'study_id')),
     reader_id: same(f.text(cell('reader_id'), line, 'reader_id')),
     reader_role: same(cell('reader_role')),
@@ -75,6 +78,10 @@ export const parseRow = (cells: readonly string[], line: number, layout: RowLayo
     withdrawn: f.optionalBit(cell('withdrawn'), line, 'withdrawn') ?? 0,
     case_attributes,
   };
+  if (read.initial_ms !== null && read.initial_ms > read.total_ms) {
+    throw new ReadLogError(line, 'initial_ms', `must be at most total_ms (${read.total_ms}), got ${read.initial_ms}`);
+  }
+  return read;
 };
 
 /**

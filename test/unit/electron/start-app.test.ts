@@ -12,6 +12,7 @@ const electron = vi.hoisted(() => {
       on: vi.fn((name: string, fn: (...args: unknown[]) => void) => { listeners.set(name, fn); }),
       whenReady: vi.fn(() => ready),
       commandLine: { appendSwitch: vi.fn() },
+      isPackaged: false,
     },
     protocol: { registerSchemesAsPrivileged: vi.fn(), handle: vi.fn() },
     ipcMain: { handle: vi.fn() },
@@ -47,7 +48,7 @@ describe('startApp', () => {
     expect(window.guardContents).toHaveBeenCalledWith(contents);
 
     electron.fireReady();
-    await vi.waitFor(() => expect(window.createMainWindow).toHaveBeenCalledWith('/app/dist-electron/preload.cjs'));
+    await vi.waitFor(() => expect(window.createMainWindow).toHaveBeenCalledWith('/app/dist-electron/preload.cjs', false));
     expect(window.applySessionPolicy).toHaveBeenCalledWith(electron.session.defaultSession);
     expect(electron.protocol.handle).toHaveBeenCalledWith('heed', expect.any(Function));
     expect(electron.ipcMain.handle.mock.calls.map((c) => c[0]).sort()).toEqual(Object.values(CHANNELS).sort());

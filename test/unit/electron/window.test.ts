@@ -1,7 +1,7 @@
 import { EventEmitter } from 'node:events';
 
 const electron = vi.hoisted(() => {
-  const created: { options: unknown; loaded: string[]; once: Map<string, () => void>; shown: number }[] = [];
+  const created: { options: unknown; loaded: string[]; once: Map<string, () => void>; shown: number; menuRemoved?: boolean }[] = [];
   class BrowserWindow {
     webContents = {};
     record: (typeof created)[number];
@@ -12,6 +12,7 @@ const electron = vi.hoisted(() => {
     loadURL(url: string) { this.record.loaded.push(url); return Promise.resolve(); }
     once(event: string, fn: () => void) { this.record.once.set(event, fn); }
     show() { this.record.shown += 1; }
+    removeMenu() { this.record.menuRemoved = true; }
   }
   return { created, BrowserWindow };
 });
@@ -19,7 +20,7 @@ vi.mock('electron', () => ({ BrowserWindow: electron.BrowserWindow }));
 
 import type { Session, WebContents } from 'electron';
 import { CONTENT_SECURITY_POLICY } from '../../../scripts/lib/web-policy.mjs';
-import { applySessionPolicy, createMainWindow, guardContents, webPreferencesFor } from '../../../electron/window';
+import { applySessionPolicy, createMainWindow, guardContents } from '../../../electron/window';
 
 describe('createMainWindow', () => {
   it('builds the one window sandboxed, isolated, without Node, on heed://app', () => {
@@ -38,8 +39,18 @@ describe('createMainWindow', () => {
     expect(record?.shown).toBe(1);
   });
 
-  it('never turns the sandbox or isolation off', () => {
-    expect(webPreferencesFor('/p')).toMatchObject({ sandbox: true, contextIsolation: true, nodeIntegration: false });
+  it('keeps DevTools and the menu in a development run', () => {
+    createMainWindow('/p');
+    const record = electron.created.at(-1);
+    expect(record?.options).toMatchObject({ webPreferences: { devTools: true, sandbox: true } });
+    expect(record?.menuRemoved).toBeUndefined();
+  });
+
+  it('takes DevTools and the menu (Reload, Toggle Developer Tools) away in a packaged build', () => {
+    createMainWindow('/p', true);
+    const record = electron.created.at(-1);
+    expect(record?.options).toMatchObject({ webPreferences: { devTools: false, sandbox: true, contextIsolation: true, nodeIntegration: false } });
+    expect(record?.menuRemoved).toBe(true);
   });
 });
 

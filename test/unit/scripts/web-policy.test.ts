@@ -1,3 +1,4 @@
+import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import { CONTENT_SECURITY_POLICY, contentTypeFor, resolveInside, securityHeaders } from '../../../scripts/lib/web-policy.mjs';
 
@@ -13,8 +14,15 @@ describe('CONTENT_SECURITY_POLICY', () => {
       "style-src 'self' 'unsafe-inline'",
       "object-src 'none'",
       "base-uri 'none'",
+      "form-action 'none'",
       "frame-ancestors 'none'",
     ]);
+  });
+
+  it('is repeated in index.html, less frame-ancestors (which a meta tag cannot carry)', () => {
+    const meta = /http-equiv="Content-Security-Policy" content="([^"]+)"/.exec(readFileSync('index.html', 'utf8'))?.[1] ?? '';
+    const expected = CONTENT_SECURITY_POLICY.split('; ').filter((d) => !d.startsWith('frame-ancestors'));
+    expect(meta.split('; ')).toEqual(expected);
   });
 
   it('is sent with the security headers, and no CORS header is', () => {

@@ -1,9 +1,11 @@
 import 'fake-indexeddb/auto';
+import { encode } from 'fast-png';
 import { memorySource } from '../../../src/io/case-set/memory-source';
 import { openHeedDb } from '../../../src/store/db';
 import { importCaseSet, problemLine } from '../../../src/store/import-case-set';
 
-const PNG = new Uint8Array([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 13, 0x49, 0x48, 0x44, 0x52]);
+// a whole PNG: validation reads every image's structure, so a bare signature is refused
+const PNG = encode({ width: 2, height: 2, data: new Uint8Array([0, 80, 160, 255]), depth: 8, channels: 1 });
 const csv = (rows: string[]) => ['case_id,finding,truth,image,model_score,case_site', ...rows].join('\n');
 
 /** Everything the database holds, to compare before and after a refused import. */

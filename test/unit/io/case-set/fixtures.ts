@@ -6,8 +6,16 @@ import type { ReadCaseSetResult } from '../../../../src/io/case-set/read-case-se
 import type { CaseSetLimits } from '../../../../src/io/case-set/types';
 
 export const png = (): Uint8Array => encode({ width: 2, height: 2, data: new Uint8Array([0, 80, 160, 255]), depth: 8, channels: 1 });
-// A JPEG is recognised by its start-of-image marker and first segment; the tests need no more.
-export const jpeg = (): Uint8Array => new Uint8Array([0xff, 0xd8, 0xff, 0xe0, 0x00, 0x10, 0x4a, 0x46, 0x49, 0x46, 0x00]);
+// A JPEG's structure as validation reads it (ITU-T T.81 B.2): start of image, a JFIF APP0
+// segment, a start-of-frame giving 2 x 2 pixels and one component, a start of scan, two scan
+// bytes, end of image. (No tables, so a real decoder would refuse it; the tests need no more.)
+export const jpeg = (): Uint8Array => new Uint8Array([
+  0xff, 0xd8,
+  0xff, 0xe0, 0x00, 0x10, 0x4a, 0x46, 0x49, 0x46, 0x00, 0x01, 0x01, 0x00, 0x00, 0x01, 0x00, 0x01, 0x00, 0x00,
+  0xff, 0xc0, 0x00, 0x0b, 0x08, 0x00, 0x02, 0x00, 0x02, 0x01, 0x01, 0x11, 0x00,
+  0xff, 0xda, 0x00, 0x08, 0x01, 0x01, 0x00, 0x00, 0x3f, 0x00, 0x12, 0x34,
+  0xff, 0xd9,
+]);
 
 export const HEADER = 'case_id,finding,truth,image,model_score,model_call,practice,case_site';
 export const GOOD_ROWS = [
