@@ -33,9 +33,10 @@ export const rocPlot = (input: { lines: readonly RocLine[]; auc: Record<Conditio
   };
 };
 
-// AUC labels stacked in the bottom-right corner, one text mark per row (Plot offsets are per mark).
+// AUC labels stacked in the bottom-right corner, one text mark per row (Plot offsets are per mark;
+// Plot takes a nested array of marks as marks).
 const labelRows = (labels: { text: string; condition: Condition; row: number }[]) =>
-  Plot.marks(...labels.map((l) => Plot.text([l], { text: 'text', frameAnchor: 'bottom-right', dx: -6, dy: -6 - 16 * (labels.length - 1 - l.row), fill: l.condition === 'unaided' ? PALETTE.unaided : '#8a5a00', fontWeight: 600 })));
+  (labels.map((l) => Plot.text([l], { text: 'text', frameAnchor: 'bottom-right', dx: -6, dy: -6 - 16 * (labels.length - 1 - l.row), fill: l.condition === 'unaided' ? PALETTE.unaided : '#8a5a00', fontWeight: 600 })));
 
 /** Small multiples: one ROC square per reader, both conditions in each, `columns` squares a row. */
 export const rocSmallMultiples = (input: { readers: readonly { reader: string; lines: readonly RocLine[] }[]; columns: number; cell?: number }): PlotOptions => {

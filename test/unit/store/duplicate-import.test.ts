@@ -1,4 +1,5 @@
 import 'fake-indexeddb/auto';
+import { encode } from 'fast-png';
 import { memorySource } from '../../../src/io/case-set/memory-source';
 import { readCaseSet } from '../../../src/io/case-set/read-case-set';
 import { saveCaseSet } from '../../../src/store/case-sets';
@@ -6,7 +7,8 @@ import { renameCaseSet } from '../../../src/store/case-set-lifecycle';
 import { openHeedDb } from '../../../src/store/db';
 import { importCaseSet } from '../../../src/store/import-case-set';
 
-const PNG = (k: number) => new Uint8Array([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 13, 0x49, 0x48, 0x44, 0x52, k]);
+// whole PNGs (validation reads every image's structure); k changes one pixel byte
+const PNG = (k: number) => encode({ width: 2, height: 2, data: new Uint8Array([0, 80, 160, k]), depth: 8, channels: 1 });
 const files = (k = 1): Record<string, Uint8Array | string> => ({
   'cases.csv': 'case_id,finding,truth,image,model_score\na1,mass,1,i/a1.png,0.9\na2,mass,0,i/a2.png,0.2\n', 'i/a1.png': PNG(k), 'i/a2.png': PNG(2),
 });
