@@ -1,6 +1,5 @@
 // `heed analyze FILE [--json] [--seed N] [--boot N]`: statistics of a reads.csv (SPEC Contract 3),
 // as JSON or as a readable table per reader and finding, then the group.
-import { readFile } from 'node:fs/promises';
 import { analyzeReads, DEFAULT_BOOT, DEFAULT_SEED } from '../analysis/engine';
 import type { AveragedValue } from '../analysis/reader-bootstrap';
 import type { AnalysisReport, GroupFinding, ReaderEntry } from '../analysis/report-types';
@@ -8,6 +7,7 @@ import type { Sections } from '../analysis/sections';
 import type { Proportion } from '../analysis/wilson';
 import { parseReadLog, ReadLogError } from '../io/read-log-parse';
 import { CliError } from './cli-error';
+import { readAnalyzeInput } from './analyze-input';
 
 type AnalyzeArgs = { file: string; json: boolean; seed: number; boot: number };
 
@@ -39,13 +39,7 @@ export const parseAnalyzeArgs = (args: string[]): AnalyzeArgs => {
 
 export const runAnalyze = async (args: string[]): Promise<number> => {
   const { file, json, seed, boot } = parseAnalyzeArgs(args);
-  let text: string;
-  try {
-    text = await readFile(file, 'utf8');
-  } catch (error) {
-    const code = error instanceof Error && 'code' in error ? String(error.code) : 'unreadable';
-    throw new CliError(`${file}: cannot read the file (${code === 'ENOENT' ? 'no such file' : code})`);
-  }
+  const text = await readAnalyzeInput(file);
   let rows;
   try {
     rows = parseReadLog(text);

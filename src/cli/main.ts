@@ -5,6 +5,9 @@ const USAGE = `usage:
   heed analyze FILE [--json] [--seed N] [--boot N]   statistics of a reads.csv
   heed check-cases PATH                              validate a case set (folder or zip)
   heed demo [--out DIR]                              write the demo case set
+  heed verify BUNDLE                                 check a study bundle's hashes and chain
+  heed merge A B ... --out C                         merge bundles of one study from several workstations
+  heed simulate [--readers N] [--seed S] --out PATH  a demo study read by simulated readers, as a bundle
 Heed is a research and training tool, not a medical device.`;
 
 type Verb = (args: string[]) => Promise<number>;
@@ -13,6 +16,9 @@ const verbs: Record<string, () => Promise<Verb>> = {
   analyze: async () => (await import('./analyze')).runAnalyze,
   'check-cases': async () => (await import('./check-cases')).runCheckCases,
   demo: async () => (await import('./demo')).runDemo,
+  verify: async () => (await import('./verify')).runVerify,
+  merge: async () => (await import('./merge')).runMerge,
+  simulate: async () => (await import('./simulate')).runSimulate,
 };
 
 const main = async (argv: string[]): Promise<number> => {

@@ -8,11 +8,15 @@ import { READ_LOG_COLUMNS, type ReadRow } from '../core/read-log';
 
 const cell = (value: string | number | null): string => (value === null ? '' : String(value));
 
-export const readLogCsv = (rows: readonly ReadRow[], attributeNames: readonly string[]): string => {
-  const header = [...READ_LOG_COLUMNS, ...attributeNames.map((name) => `case_${name}`)];
-  const data = rows.map((row) => [
+/** Columns a caller adds after all others (the bundle's read id and chain hash): names, and the cells of row i. */
+export type ExtraColumns = { names: readonly string[]; cells: (index: number) => readonly string[] };
+
+export const readLogCsv = (rows: readonly ReadRow[], attributeNames: readonly string[], extra?: ExtraColumns): string => {
+  const header = [...READ_LOG_COLUMNS, ...attributeNames.map((name) => `case_${name}`), ...(extra?.names ?? [])];
+  const data = rows.map((row, i) => [
     ...READ_LOG_COLUMNS.map((column) => cell(row[column])),
     ...attributeNames.map((name) => row.case_attributes[name] ?? ''),
+    ...(extra ? extra.cells(i) : []),
   ]);
   return `${Papa.unparse({ fields: header, data }, { newline: '\n', quotes: false, quoteChar: '"', escapeChar: '"' })}\n`;
 };
