@@ -10,6 +10,7 @@ import { signal } from '../signals';
 import { actions } from '../state/app-state';
 import { useAsync } from '../use-async';
 import { CaseSetList } from './CaseSetList';
+import { OpenBundle } from './OpenBundle';
 
 export const HomeScreen = () => {
   const db = useDb();
@@ -65,6 +66,7 @@ export const HomeScreen = () => {
               </ul>
             )}
           </section>
+          <OpenBundle />
           <CaseSetList caseSets={home.value.caseSets} onChanged={home.reload} />
         </>
       )}
