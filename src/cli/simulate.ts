@@ -12,6 +12,7 @@ import { writeBundle } from '../io/bundle/write';
 import { CliError } from './cli-error';
 import { problemLine } from './format-case-set';
 import { nodeSetSource } from './node-set-source';
+import { useNativeSha256 } from './bundle-file';
 
 const USAGE = 'usage: heed simulate [--readers N] [--seed S] [--assistance sequential|concurrent] [--cases PATH] [--split K] [--images] --out PATH';
 
@@ -59,6 +60,7 @@ const loadCases = async (path: string | null): Promise<{ name: string; manifest:
 };
 
 export const runSimulate = async (args: string[]): Promise<number> => {
+  useNativeSha256();
   const options = parseSimulateArgs(args);
   const set = await loadCases(options.cases);
   let snapshot;

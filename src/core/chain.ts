@@ -19,8 +19,21 @@ import { bytesToHex, utf8ToBytes } from '@noble/hashes/utils';
 
 export const CHAIN_PREFIX = 'heed-chain/1';
 
-export const sha256Hex = (data: Uint8Array | string): string =>
-  bytesToHex(sha256(typeof data === 'string' ? utf8ToBytes(data) : data));
+export type Sha256Hex = (data: Uint8Array | string) => string;
+
+const nobleSha256Hex: Sha256Hex = (data) => bytesToHex(sha256(typeof data === 'string' ? utf8ToBytes(data) : data));
+let active: Sha256Hex = nobleSha256Hex;
+
+/** SHA-256 as 64 lower-case hex digits. */
+export const sha256Hex: Sha256Hex = (data) => active(data);
+
+/**
+ * Swaps in another implementation of the same SHA-256 (the CLI uses Node's native one, several
+ * times faster on large bundles); the digests are the same, so this changes speed only.
+ */
+export const useSha256 = (implementation: Sha256Hex): void => { active = implementation; };
+
+const compareKeys = (a: string, b: string): number => (a < b ? -1 : a > b ? 1 : 0);
 
 /**
  * JSON with object keys sorted (by UTF-16 code units) at every depth and no spaces: one text per
@@ -28,17 +41,34 @@ export const sha256Hex = (data: Uint8Array | string): string =>
  * a number JSON cannot hold (NaN, Infinity), which would not survive a round trip.
  */
 export const canonicalJson = (value: unknown): string => {
-  if (value === null || typeof value === 'boolean' || typeof value === 'string') return JSON.stringify(value);
-  if (typeof value === 'number') {
-    if (!Number.isFinite(value)) throw new RangeError(`canonical JSON cannot hold the number ${value}`);
-    return JSON.stringify(value);
+  if (value === null) return 'null';
+  switch (typeof value) {
+    case 'string': return JSON.stringify(value);
+    case 'boolean': return value ? 'true' : 'false';
+    case 'number':
+      if (!Number.isFinite(value)) throw new RangeError(`canonical JSON cannot hold the number ${value}`);
+      return JSON.stringify(value);
+    case 'object': {
+      if (Array.isArray(value)) {
+        let out = '[';
+        for (let i = 0; i < value.length; i++) out += `${i > 0 ? ',' : ''}${value[i] === undefined ? 'null' : canonicalJson(value[i])}`;
+        return `${out}]`;
+      }
+      const record = value as Record<string, unknown>;
+      const keys = Object.keys(record).sort(compareKeys);
+      let out = '{';
+      let first = true;
+      for (const k of keys) {
+        const v = record[k];
+        if (v === undefined) continue;
+        out += `${first ? '' : ','}${JSON.stringify(k)}:${canonicalJson(v)}`;
+        first = false;
+      }
+      return `${out}}`;
+    }
+    default:
+      throw new RangeError(`canonical JSON cannot hold a ${typeof value}`);
   }
-  if (Array.isArray(value)) return `[${value.map((v) => (v === undefined ? 'null' : canonicalJson(v))).join(',')}]`;
-  if (typeof value === 'object') {
-    const entries = Object.entries(value).filter(([, v]) => v !== undefined).sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0));
-    return `{${entries.map(([k, v]) => `${JSON.stringify(k)}:${canonicalJson(v)}`).join(',')}}`;
-  }
-  throw new RangeError(`canonical JSON cannot hold a ${typeof value}`);
 };
 
 /** The content of one link: what an event says, without its place in the chain. */
@@ -50,8 +80,16 @@ export type ChainedEvent = LinkContent & { prev: string; hash: string };
 /** The hash a study's chain starts from; the key '' is the workstation's own chain (events of no study). */
 export const genesisHash = (chainKey: string): string => sha256Hex(`${CHAIN_PREFIX}\n${chainKey}`);
 
+/** canonicalJson({ at, type, detail }), from the detail's canonical text (computed once by callers that also need it). */
+export const contentText = (at: string, type: string, detailText: string): string =>
+  `{"at":${JSON.stringify(at)},"detail":${detailText},"type":${JSON.stringify(type)}}`;
+
 export const linkHash = (prev: string, content: LinkContent): string =>
-  sha256Hex(`${prev}\n${canonicalJson({ at: content.at, type: content.type, detail: content.detail })}`);
+  sha256Hex(`${prev}\n${contentText(content.at, content.type, canonicalJson(content.detail))}`);
+
+/** One line of events.jsonl: canonicalJson({ at, detail, hash, prev, type }). */
+export const eventLine = (e: ChainedEvent, detailText: string = canonicalJson(e.detail)): string =>
+  `{"at":${JSON.stringify(e.at)},"detail":${detailText},"hash":"${e.hash}","prev":"${e.prev}","type":${JSON.stringify(e.type)}}`;
 
 /** Links `contents` in order after `prev` (the genesis for a new chain). */
 export const chainLinks = (prev: string, contents: readonly LinkContent[]): ChainedEvent[] => {

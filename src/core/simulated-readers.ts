@@ -171,6 +171,7 @@ export const simulateAnswers = (
     }
     return found;
   };
+  const truthOf = new Map(manifest.cases.flatMap((c) => c.findings.map((f) => [suggestionKey(c.caseId, f.finding), f.truth] as const)));
   const out: SimulatedAnswer[] = [];
   for (const reader of readers) {
     const sequence = design.sequences[reader.sequenceIndex];
@@ -183,7 +184,6 @@ export const simulateAnswers = (
     const acceptRight = betaDraw(rr, p.acceptRight);
     const speed = Math.exp(p.readerSpeedSd * normal(rr));
     const schedule = buildSchedule(design, manifest, { id: reader.code, index: reader.slot, sequence });
-    const truthOf = new Map(manifest.cases.flatMap((c) => c.findings.map((f) => [suggestionKey(c.caseId, f.finding), f.truth] as const)));
     for (const period of schedule.periods) {
       period.items.forEach((item, itemIndex) => {
         for (const finding of design.findings) {

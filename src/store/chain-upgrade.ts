@@ -25,7 +25,7 @@ export const chainExistingRecords = async (tx: Transaction): Promise<void> => {
   for (const event of events) {
     const chain = chainKey(event.studyId);
     const prev = heads.get(chain) ?? genesisHash(chain);
-    let detail = event.detail;
+    let detail: Record<string, unknown> = event.detail ?? {}; // the oldest events may have none
     const id = (event.type === 'initial-committed' || event.type === 'final-committed') ? readIdOf(detail) : null;
     const read = id === null ? undefined : reads.get(id);
     if (id !== null && read && detail.read === undefined) {

@@ -3,33 +3,6 @@ import { z } from 'zod';
 
 const bit = z.union([z.literal(0), z.literal(1)]);
 const hex64 = z.string().regex(/^[0-9a-f]{64}$/, { error: 'must be 64 lower-case hex digits' });
-const answerPart = z.object({ call: bit, confidence: z.number().min(0).max(100).nullable(), ms: z.number().min(0) });
-
-export const eventLineSchema = z.strictObject({
-  at: z.string(),
-  type: z.string().min(1),
-  detail: z.record(z.string(), z.unknown()),
-  prev: hex64,
-  hash: hex64,
-});
-
-/** The read an answer event carries; fields a later version adds are kept. */
-export const readSchema = z.looseObject({
-  id: z.string().min(1),
-  sessionId: z.string().min(1),
-  studyId: z.string().min(1),
-  readerId: z.string().min(1),
-  period: z.number().int().min(1),
-  caseId: z.string().min(1),
-  finding: z.string().min(1),
-  initial: answerPart.nullable(),
-  final: answerPart.nullable(),
-  shownAt: z.string(),
-  aiCall: bit.nullable(),
-  aiScore: z.number().min(0).max(1).nullable(),
-  aiPlanted: z.boolean(),
-  cautionShown: z.boolean(),
-});
 
 const readerSchema = z.looseObject({
   id: z.string().min(1), studyId: z.string().min(1), code: z.string().min(1), role: z.string(), years: z.number().nullable(),

@@ -16,7 +16,7 @@ import { validateDesign } from '../../core/design-validate';
 import { buildSuggestions } from '../../core/planting';
 import { buildSchedule } from '../../core/schedule';
 import { sequenceIndexForSlot } from '../../core/sequence-assignment';
-import { applyCommit, currentPosition, type CommittedAnswer } from '../../core/session';
+import { applyCommit, currentPosition, planSteps, type CommittedAnswer, type SessionPosition } from '../../core/session';
 import { DEFAULT_SIMULATION, simulateAnswers, type SimulatedAnswer, type SimulationParameters } from '../../core/simulated-readers';
 import { indexSuggestions, suggestionKey } from '../../core/suggestions';
 import type { SnapshotRead, SnapshotReader, SnapshotSession, StudySnapshot } from './snapshot';
@@ -92,17 +92,21 @@ export const simulateStudy = (caseSet: SimulationCaseSet, options: SimulationOpt
       const plan = { items: planned.items, findings: design.findings };
       const committed = new Map<string, CommittedAnswer>();
       const own = new Map((byReaderPeriod.get(`${reader.code}/${planned.period}`) ?? []).map((a) => [suggestionKey(a.caseId, a.finding), a]));
-      let shownAt = new Map<number, number>();
-      for (;;) {
-        const position = currentPosition(plan, [...committed.values()]);
-        if (position.done) break;
-        const { step, item } = position;
-        const answer = own.get(suggestionKey(item.caseId, step.finding));
+      // The session machine's own steps, in order; applyCommit refuses any step that is not the
+      // current one. (Each position is built from the step list rather than by currentPosition,
+      // which rescans every answer: the end check below confirms the session is complete.)
+      const steps = planSteps(plan);
+      let shown = clock;
+      steps.forEach((step, stepIndex) => {
+        const item = planned.items[step.itemIndex];
+        if (!item) throw new RangeError(`no item ${step.itemIndex}`);
+        const position: SessionPosition = { done: false, step, stepIndex, totalSteps: steps.length, item, caseNumber: step.itemIndex + 1, caseCount: planned.items.length };
+        const key = suggestionKey(item.caseId, step.finding);
+        const answer = own.get(key);
         const part = step.phase === 'initial' ? answer?.initial : answer?.final;
         if (!answer || !part) throw new RangeError(`no simulated answer for ${reader.code} ${item.caseId} ${step.finding} ${step.phase}`);
-        if (!shownAt.has(step.itemIndex)) shownAt = new Map([[step.itemIndex, clock]]);
-        const shown = shownAt.get(step.itemIndex) ?? clock;
-        const key = suggestionKey(item.caseId, step.finding);
+        const first = stepIndex === 0 || steps[stepIndex - 1]?.itemIndex !== step.itemIndex;
+        if (first) shown = clock;
         const next = applyCommit(position, step, committed.get(key) ?? null, part);
         committed.set(key, next);
         const aided = item.assistance !== 'none';
@@ -116,9 +120,10 @@ export const simulateStudy = (caseSet: SimulationCaseSet, options: SimulationOpt
         contents.push({ at: iso(clock), type: step.phase === 'initial' ? 'initial-committed' : 'final-committed', detail: {
           sessionId, caseId: item.caseId, finding: step.finding, call: part.call, confidence: part.confidence, ms: part.ms, read,
         } });
-        const last = step.phase === 'final' && step.finding === design.findings.at(-1);
-        if (last) clock += GAP_MS;
-      }
+        const lastOfCase = steps[stepIndex + 1]?.itemIndex !== step.itemIndex;
+        if (lastOfCase) clock += GAP_MS;
+      });
+      if (!currentPosition(plan, [...committed.values()]).done) throw new RangeError(`session ${sessionId} did not complete`);
       const completedAt = clock;
       contents.push({ at: iso(completedAt), type: 'session-completed', detail: { sessionId } });
       sessions.push({ id: sessionId, studyId, readerId: reader.id, period: planned.period, items: planned.items, orderSeed: String(planned.orderSeed), startedAt: iso(startedAt), completedAt: iso(completedAt), override: null });

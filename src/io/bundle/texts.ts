@@ -4,7 +4,7 @@
  * line by line, so an edit anywhere in those files is found at its line.
  */
 import Papa from 'papaparse';
-import { canonicalJson, sha256Hex, type ChainedEvent } from '../../core/chain';
+import { canonicalJson, eventLine, sha256Hex, type ChainedEvent } from '../../core/chain';
 import { joinReadRows } from '../../core/read-rows';
 import { plantedList } from '../../core/planting';
 import { studyJson } from '../../core/study-json';
@@ -30,7 +30,7 @@ export const designFingerprint = (snapshot: Pick<StudySnapshot, 'study' | 'caseS
 
 export const eventsJsonl = (events: readonly ChainedEvent[]): string => {
   let out = '';
-  for (const e of events) out += `${canonicalJson({ at: e.at, type: e.type, detail: e.detail, prev: e.prev, hash: e.hash })}\n`;
+  for (const e of events) out += `${eventLine(e)}\n`;
   return out;
 };
 
