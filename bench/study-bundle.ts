@@ -12,9 +12,11 @@
  */
 import 'fake-indexeddb/auto';
 import { spawnSync } from 'node:child_process';
+import { createHash } from 'node:crypto';
 import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { useSha256 } from '../src/core/chain';
 import { mergeSnapshots } from '../src/io/bundle/merge';
 import { readBundle } from '../src/io/bundle/read';
 import { splitSnapshot } from '../src/io/bundle/simulate-study';
@@ -48,8 +50,7 @@ const main = async () => {
     const file = join(dir, 'study.zip');
     const simulate = timed(() => heed('simulate', '--readers', '20', '--seed', '7', '--cases', cases, '--out', file));
     const zip = new Uint8Array(readFileSync(file));
-    const verify = timed(() => verified(zip));
-    const snapshot = verify.value;
+    const snapshot = verified(zip);
     const reads = snapshot.events.filter((e) => e.type === 'final-committed').length;
 
     // restored with an empty image list: the save reads the stored images' hashes, and there are none to read here
@@ -59,6 +60,9 @@ const main = async () => {
     const saved = writeBundle(await gatherStudySnapshot(db, study.id));
     const saveMs = performance.now() - t0;
 
+    // verify and merge as the CLI runs them: with Node's native SHA-256 (the app's save above used @noble/hashes)
+    useSha256((data) => createHash('sha256').update(data).digest('hex'));
+    const verify = timed(() => verified(zip));
     const stations = splitSnapshot(snapshot, 10).map((s) => writeBundle(s));
     const mergeSplit = timed(() => writeBundle(mergeSnapshots(stations.map((z, i) => ({ label: `w${i}`, snapshot: verified(z) })))));
     const mergeCopies = timed(() => writeBundle(mergeSnapshots(Array.from({ length: 10 }, (_, i) => ({ label: `c${i}`, snapshot: verified(zip) })))));
@@ -76,7 +80,7 @@ const main = async () => {
         plain('merge 10 full copies (verify each, merge, write)', mergeCopies.ms, 'ms'),
         plain('saved bundle size', saved.length / 1e6, 'MB'),
       ],
-      notes: ['one run each; wall clock on a shared machine', 'save runs against fake-indexeddb in Node, not Chromium'],
+      notes: ['one run each; wall clock on a shared machine', 'save runs against fake-indexeddb in Node, not Chromium, with @noble/hashes as in the app', 'verify and merge use Node\'s native SHA-256, as the heed verbs do'],
     });
   } finally {
     rmSync(dir, { recursive: true, force: true });
