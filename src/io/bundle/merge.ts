@@ -9,7 +9,7 @@
  * So merging is idempotent (a copy merged again adds nothing) and does not depend on the order of
  * its inputs. Throws BundleMergeError with one plain message.
  */
-import { canonicalJson, chainLinks, genesisHash, type ChainedEvent } from '../../core/chain';
+import { canonicalJson, genesisHash, sha256Hex, type ChainedEvent } from '../../core/chain';
 import { ANSWER_EVENTS, type SnapshotRead, type SnapshotReader, type SnapshotSession, type StudySnapshot } from './snapshot';
 import { designFingerprint } from './texts';
 
@@ -107,10 +107,17 @@ export const mergeSnapshots = (inputs: readonly MergeInput[]): StudySnapshot => 
   if (complete) {
     events = complete.events;
   } else {
-    const all: ChainedEvent[] = [];
-    for (const { event, n } of counts.values()) for (let k = 0; k < n; k++) all.push(event);
-    const keyed = all.map((event) => ({ event, key: contentKey(event) })).sort((a, b) => byText(a.event.at, b.event.at) || byText(a.key, b.key));
-    events = chainLinks(genesisHash(first.snapshot.study.id), keyed.map((k) => k.event));
+    const keyed: { event: ChainedEvent; key: string }[] = [];
+    for (const [key, { event, n }] of counts) for (let k = 0; k < n; k++) keyed.push({ event, key });
+    keyed.sort((a, b) => byText(a.event.at, b.event.at) || byText(a.key, b.key));
+    // The content key is the very text a link hashes (canonical {at, detail, type}), so the chain is built from it.
+    events = [];
+    let prev = genesisHash(first.snapshot.study.id);
+    for (const { event, key } of keyed) {
+      const hash = sha256Hex(`${prev}\n${key}`);
+      events.push({ at: event.at, type: event.type, detail: event.detail, prev, hash });
+      prev = hash;
+    }
   }
 
   const studies = inputs.map((i) => i.snapshot.study).sort((a, b) => byText(canonicalJson(a), canonicalJson(b)));
