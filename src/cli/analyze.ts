@@ -1,7 +1,6 @@
 // `heed analyze FILE [--json] [--seed N] [--boot N] [--covariance jackknife|delong]`: statistics of
 // a reads.csv (docs/formats.md),
 // as JSON or as a readable table per reader and finding, then the group.
-import { readFile } from 'node:fs/promises';
 import { analyzeReads, DEFAULT_BOOT, DEFAULT_COVARIANCE, DEFAULT_SEED, type CovarianceMethod } from '../analysis/engine';
 import type { ORInterval } from '../analysis/or-single-treatment';
 import type { AveragedValue } from '../analysis/reader-bootstrap';
@@ -11,6 +10,7 @@ import type { WeightOfAdvice } from '../analysis/weight-of-advice';
 import type { Proportion } from '../analysis/wilson';
 import { parseReadLogBytes, ReadLogError } from '../io/read-log-parse';
 import { CliError } from './cli-error';
+import { readAnalyzeInput } from './analyze-input';
 
 type AnalyzeArgs = { file: string; json: boolean; seed: number; boot: number; covariance: CovarianceMethod; includeWithdrawn: boolean };
 
@@ -57,13 +57,7 @@ export const parseAnalyzeArgs = (args: string[]): AnalyzeArgs => {
 
 export const runAnalyze = async (args: string[]): Promise<number> => {
   const { file, json, seed, boot, covariance, includeWithdrawn } = parseAnalyzeArgs(args);
-  let bytes: Uint8Array;
-  try {
-    bytes = new Uint8Array(await readFile(file));
-  } catch (error) {
-    const code = error instanceof Error && 'code' in error ? String(error.code) : 'unreadable';
-    throw new CliError(`${file}: cannot read the file (${code === 'ENOENT' ? 'no such file' : code})`);
-  }
+  const bytes = await readAnalyzeInput(file);
   let rows;
   try {
     rows = parseReadLogBytes(bytes);

@@ -8,6 +8,9 @@ const USAGE = `usage:
   heed demo [--out DIR]                              write the demo case set
   heed report FILE --reader ID [--out F.html] [--pdf F.pdf]
                                                      one reader's private feedback report
+  heed verify BUNDLE                                 check a study bundle's hashes and chain
+  heed merge A B ... --out C                         merge bundles of one study from several workstations
+  heed simulate [--readers N] [--seed S] --out PATH  a demo study read by simulated readers, as a bundle
 Heed is a research and training tool, not a medical device.`;
 
 type Verb = (args: string[]) => Promise<number>;
@@ -17,6 +20,9 @@ const verbs: Record<string, () => Promise<Verb>> = {
   'check-cases': async () => (await import('./check-cases')).runCheckCases,
   demo: async () => (await import('./demo')).runDemo,
   report: async () => (await import('./report')).runReport,
+  verify: async () => (await import('./verify')).runVerify,
+  merge: async () => (await import('./merge')).runMerge,
+  simulate: async () => (await import('./simulate')).runSimulate,
 };
 
 const main = async (argv: string[]): Promise<number> => {

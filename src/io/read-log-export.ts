@@ -12,12 +12,16 @@ import { READ_LOG_COLUMNS, READ_LOG_OPTIONAL_COLUMNS, type ReadRow } from '../co
 // Text that a spreadsheet could run as a formula gets a leading ' (core/formula-text); numbers never do.
 const cell = (value: string | number | null): string => (value === null ? '' : neutraliseCell(String(value)));
 
-export const readLogCsv = (rows: readonly ReadRow[], attributeNames: readonly string[]): string => {
-  const header = [...READ_LOG_COLUMNS, ...READ_LOG_OPTIONAL_COLUMNS, ...attributeNames.map((name) => `case_${name}`)];
-  const data = rows.map((row) => [
+/** Columns a caller adds after all others (the bundle's read id and chain hash): names, and the cells of row i. */
+export type ExtraColumns = { names: readonly string[]; cells: (index: number) => readonly string[] };
+
+export const readLogCsv = (rows: readonly ReadRow[], attributeNames: readonly string[], extra?: ExtraColumns): string => {
+  const header = [...READ_LOG_COLUMNS, ...READ_LOG_OPTIONAL_COLUMNS, ...attributeNames.map((name) => `case_${name}`), ...(extra?.names ?? [])];
+  const data = rows.map((row, i) => [
     ...READ_LOG_COLUMNS.map((column) => cell(row[column])),
     ...READ_LOG_OPTIONAL_COLUMNS.map((column) => cell(row[column])),
     ...attributeNames.map((name) => neutraliseCell(row.case_attributes[name] ?? '')),
+    ...(extra ? extra.cells(i) : []),
   ]);
   return `${Papa.unparse({ fields: header, data }, { newline: '\n', quotes: false, quoteChar: '"', escapeChar: '"' })}\n`;
 };

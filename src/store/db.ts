@@ -3,6 +3,7 @@
  * its stores and an upgrade, and a test opens a database written by the version before it.
  */
 import { Dexie, type EntityTable } from 'dexie';
+import { chainExistingRecords } from './chain-upgrade';
 import type {
   StoredCaseSet, StoredEvent, StoredImage, StoredRead, StoredReader, StoredSession, StoredStudy,
 } from './records';
@@ -25,6 +26,12 @@ export const SCHEMA_V2 = {
   ...SCHEMA_V1,
   reads: 'id, sessionId, studyId, [studyId+readerId]',
   events: '++seq, at, type, studyId',
+} as const;
+
+/** Version 3: every event is a link of its study's hash chain (core/chain.ts), found by `chain`. */
+export const SCHEMA_V3 = {
+  ...SCHEMA_V2,
+  events: '++seq, at, type, studyId, chain',
 } as const;
 
 export type HeedDb = Dexie & {
@@ -53,5 +60,6 @@ export const openHeedDb = (name: string = DB_NAME): HeedDb => {
       if (event.studyId === undefined) event.studyId = null;
     });
   });
+  db.version(3).stores(SCHEMA_V3).upgrade((tx) => chainExistingRecords(tx));
   return db;
 };

@@ -1,9 +1,27 @@
+import { genesisHash, linkHash } from '../core/chain';
 import type { HeedDb } from './db';
 import type { StoredEvent } from './records';
 
-/** Appends to the event log. Call it inside the transaction of the change it records. */
-export const appendEvent = (db: HeedDb, studyId: string | null, type: string, detail: Record<string, unknown>): Promise<number | undefined> =>
-  db.events.add({ at: new Date().toISOString(), studyId, type, detail } satisfies StoredEvent);
+/** The chain an event belongs to: its study, or '' for events of no study (e.g. a case set stored). */
+export const chainKey = (studyId: string | null): string => studyId ?? '';
+
+/** The hash the next event of a chain links to: the last event's hash, or the chain's genesis. */
+export const chainHead = async (db: HeedDb, key: string): Promise<string> =>
+  (await db.events.where('chain').equals(key).last())?.hash ?? genesisHash(key);
+
+/**
+ * Appends to the event log, linked to the head of its chain. Call it inside the transaction of the
+ * change it records (the transaction must include db.events): the head is read and the new link
+ * written in that one transaction, so two windows can never fork a chain.
+ */
+export const appendEvent = async (db: HeedDb, studyId: string | null, type: string, detail: Record<string, unknown>): Promise<StoredEvent> => {
+  const chain = chainKey(studyId);
+  const prev = await chainHead(db, chain);
+  const at = new Date().toISOString();
+  const event: StoredEvent = { at, studyId, type, detail, chain, prev, hash: linkHash(prev, { at, type, detail }) };
+  event.seq = await db.events.add(event);
+  return event;
+};
 
 export const eventsOfStudy = (db: HeedDb, studyId: string): Promise<StoredEvent[]> =>
   db.events.where('studyId').equals(studyId).sortBy('seq');

@@ -88,6 +88,8 @@ export type StoredRead = {
   aiScore: number | null;
   aiPlanted: boolean;
   cautionShown: boolean;
+  /** hash of the chain link (event) that last committed this read; see core/chain.ts */
+  hash?: string;
 };
 
 export type StoredEvent = {
@@ -96,4 +98,10 @@ export type StoredEvent = {
   studyId: string | null;
   type: string;
   detail: Record<string, unknown>;
+  /** the chain this event belongs to: its study id, or '' for the workstation's own events */
+  chain: string;
+  /** hash of the previous event of the chain (the chain's genesis for the first) */
+  prev: string;
+  /** SHA-256 over prev and this event's content (core/chain.ts) */
+  hash: string;
 };

@@ -93,11 +93,14 @@ export const commitAnswerAndRead = (db: HeedDb, input: AnswerCommit): Promise<Co
       aiCall: input.suggestion?.call ?? null, aiScore: input.suggestion?.score ?? null,
       aiPlanted: input.suggestion?.planted ?? false, cautionShown: input.cautionShown,
     };
-    await db.reads.put(read);
-    await appendEvent(db, session.studyId, input.step.phase === 'initial' ? 'initial-committed' : 'final-committed', {
+    // The event carries the read as stored, so the chain covers the answer; the read keeps the link's hash.
+    const event = await appendEvent(db, session.studyId, input.step.phase === 'initial' ? 'initial-committed' : 'final-committed', {
       sessionId: session.id, caseId: item.caseId, finding: input.step.finding, call: input.call, confidence: input.confidence, ms: input.ms,
       ...(input.rating == null ? {} : { rating: input.rating }),
+      read: { ...read },
     });
+    read.hash = event.hash;
+    await db.reads.put(read);
     const next = currentPosition(plan, [...reads.filter((r) => r.id !== id), read].map(toAnswer));
     if (next.done) {
       await db.sessions.update(session.id, { completedAt: new Date().toISOString() });

@@ -16,8 +16,8 @@ export type CaseReviewItem = {
 
 /**
  * The reads worth looking at again: every aided read whose final call followed a wrong
- * suggestion or went against a right one (the reads counted by over- and under-reliance, SPEC
- * Contract 2), in period and reading order. Practice reads are left out, as in every statistic.
+ * suggestion or went against a right one (the reads counted by over- and under-reliance,
+ * docs/methods.md), in period and reading order. Practice reads are left out, as in every statistic.
  * Example: truth 0, suggestion 1, final 1 → one item of kind 'followed-wrong'.
  */
 export const caseReview = (reads: readonly ReadRow[]): CaseReviewItem[] => {

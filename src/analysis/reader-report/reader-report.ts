@@ -62,7 +62,7 @@ export type ReaderReportInput = {
 };
 
 /**
- * One reader's private report for one study (SPEC core behaviour 5): per finding, the engine's
+ * One reader's private report for one study (docs/report.md): per finding, the engine's
  * own figures for this reader (over- and under-reliance, unaided against aided, switching,
  * calibration, subgroups, time) with a plain sentence each, plus the report's own summaries of
  * the reader's rows (confidence bands, score bands, switching split, confidence when following).

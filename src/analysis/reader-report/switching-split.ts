@@ -17,7 +17,7 @@ export type SwitchingSplit = { suggestion_right: SwitchCounts; suggestion_wrong:
  * First call to final call of sequential reads (those with a first call and a shown
  * suggestion), split by whether the suggestion was right. With yes/no calls every change is
  * either for the better or for the worse, so kept + better + worse = n; summed over both groups,
- * better and worse are the engine's beneficial and detrimental counts (SPEC Contract 2).
+ * better and worse are the engine's beneficial and detrimental counts (docs/methods.md).
  * Null when there is no sequential read.
  * Example: first call wrong, right suggestion, final call right → suggestion_right.better 1.
  */

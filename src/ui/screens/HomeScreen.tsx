@@ -13,6 +13,7 @@ import { actions } from '../state/app-state';
 import { useAsync } from '../use-async';
 import { CaseSetList } from './CaseSetList';
 import { DataPanel } from './DataPanel';
+import { OpenBundle } from './OpenBundle';
 
 export const HomeScreen = () => {
   const db = useDb();
@@ -70,6 +71,7 @@ export const HomeScreen = () => {
               </ul>
             )}
           </section>
+          <OpenBundle />
           <CaseSetList caseSets={home.value.caseSets} onChanged={home.reload} />
           <DataPanel />
         </>

@@ -8,6 +8,7 @@ import { actions } from '../state/app-state';
 import { useAsync } from '../use-async';
 import { DesignSummary } from './DesignSummary';
 import { EnrolForm } from './EnrolForm';
+import { BundlePanel } from './BundlePanel';
 import { ExportPanel } from './ExportPanel';
 import { ReaderTable } from './ReaderTable';
 import { ReportSetting } from '../report/ReportSetting';
@@ -42,6 +43,7 @@ export const StudyScreen = ({ studyId }: { studyId: string }) => {
       <EnrolForm study={study} onEnrolled={refresh} />
       <ReportSetting study={study} onChanged={refresh} />
       <ExportPanel study={study} caseSet={caseSet} caution={RESEARCH_CAUTION} />
+      <BundlePanel study={study} onMerged={refresh} />
       <DesignSummary study={study} caseSet={caseSet} />
     </main>
   );

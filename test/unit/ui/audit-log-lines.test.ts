@@ -4,11 +4,13 @@ import type { StoredEvent, StoredReader } from '../../../src/store/records';
 import { auditLines, filterAudit } from '../../../src/ui/screens/audit-log-lines';
 
 const reader = (id: string, code: string) => ({ id, code } as Pick<StoredReader, 'id' | 'code'>) satisfies Pick<StoredReader, 'id' | 'code'>;
+// chain, prev and hash do not matter to the lines; placeholders
+const link = { chain: 's', prev: '', hash: '' };
 const events: StoredEvent[] = [
-  { seq: 3, at: '2026-01-02T10:00:00.000Z', studyId: 's', type: 'session-started', detail: { sessionId: 'r1/1', readerId: 'r1', period: 1 } },
-  { seq: 1, at: '2026-01-01T09:00:00.000Z', studyId: 's', type: 'study-created', detail: { name: 'Pilot' } },
-  { seq: 2, at: '2026-01-01T09:05:00.000Z', studyId: 's', type: 'reader-deleted', detail: { readerId: 'gone', code: 'R9' } },
-  { seq: 4, at: '2026-01-02T10:01:00.000Z', studyId: 's', type: 'paused', detail: { sessionId: 'r1/1', note: 'a "quoted", comma' } },
+  { ...link, seq: 3, at: '2026-01-02T10:00:00.000Z', studyId: 's', type: 'session-started', detail: { sessionId: 'r1/1', readerId: 'r1', period: 1 } },
+  { ...link, seq: 1, at: '2026-01-01T09:00:00.000Z', studyId: 's', type: 'study-created', detail: { name: 'Pilot' } },
+  { ...link, seq: 2, at: '2026-01-01T09:05:00.000Z', studyId: 's', type: 'reader-deleted', detail: { readerId: 'gone', code: 'R9' } },
+  { ...link, seq: 4, at: '2026-01-02T10:01:00.000Z', studyId: 's', type: 'paused', detail: { sessionId: 'r1/1', note: 'a "quoted", comma' } },
 ];
 
 describe('audit log', () => {

@@ -1,0 +1,73 @@
+/** The study page's bundle actions: save the whole study as one file, and merge another workstation's copy. */
+import { useState, type ChangeEvent } from 'react';
+import { writeBundle } from '../../io/bundle/write';
+import { gatherStudySnapshot, mergeStudyBundle } from '../../store/bundle';
+import type { StoredStudy } from '../../store/records';
+import { getHost } from '../../host';
+import { useDb } from '../db-context';
+import { signal } from '../signals';
+import { actions } from '../state/app-state';
+
+type Props = { study: StoredStudy; onMerged: () => void };
+
+const safeName = (name: string): string => name.replace(/[^A-Za-z0-9._-]+/g, '-').replace(/^-|-$/g, '') || 'study';
+
+export const BundlePanel = ({ study, onMerged }: Props) => {
+  const db = useDb();
+  const [withImages, setWithImages] = useState(false);
+  const [status, setStatus] = useState('');
+  const [problem, setProblem] = useState('');
+  const [busy, setBusy] = useState(false);
+
+  const save = async () => {
+    setBusy(true);
+    setProblem('');
+    try {
+      const file = `${safeName(study.name)}-bundle.zip`;
+      const bytes = writeBundle(await gatherStudySnapshot(db, study.id, withImages));
+      const result = await getHost().saveFile(file, bytes, 'application/zip');
+      setStatus(result.handedTo === 'downloads' ? `${file} handed to the browser's downloads.` : result.saved ? `Saved ${file}${result.where ? ` to ${result.where}` : ''}.` : 'Not saved.');
+      signal('saved', { file });
+    } catch (e) {
+      actions.notify({ kind: 'error', text: `The bundle was not saved: ${e instanceof Error ? e.message : String(e)}` });
+    } finally {
+      setBusy(false);
+    }
+  };
+
+  const merge = async (event: ChangeEvent<HTMLInputElement>) => {
+    const file = event.target.files?.[0];
+    event.target.value = '';
+    if (!file) return;
+    setBusy(true);
+    setProblem('');
+    try {
+      const outcome = await mergeStudyBundle(db, study.id, file.name, new Uint8Array(await file.arrayBuffer()));
+      if (!outcome.ok) setProblem(outcome.message);
+      else {
+        setStatus(outcome.added === 0 ? `${file.name} holds nothing new: the study is unchanged.` : `Merged ${file.name}: ${outcome.added} read${outcome.added === 1 ? '' : 's'} added.`);
+        onMerged();
+      }
+      signal('saved', { merged: file.name, ok: outcome.ok });
+    } finally {
+      setBusy(false);
+    }
+  };
+
+  return (
+    <section className="panel" aria-labelledby="bundle-head">
+      <h2 id="bundle-head">Study bundle</h2>
+      <p className="muted">One file with the whole study (design, readers, every answer and event, each chained by a hash so any later edit shows), to move it to another workstation, merge workstations, or keep as a backup.</p>
+      <div className="form-actions">
+        <label><input type="checkbox" checked={withImages} onChange={(e) => setWithImages(e.target.checked)} /> include the case images</label>
+        <button type="button" disabled={busy} onClick={() => void save()}>Save study bundle</button>
+        <label>
+          Merge a workstation’s bundle
+          <input type="file" accept=".zip,application/zip" disabled={busy} onChange={(e) => void merge(e)} />
+        </label>
+      </div>
+      {problem && <p role="alert">{problem}</p>}
+      <p className="muted" aria-live="polite">{status}</p>
+    </section>
+  );
+};
