@@ -7,6 +7,7 @@ import { signal } from '../signals';
 import { actions } from '../state/app-state';
 import { useAsync } from '../use-async';
 import { DesignSummary } from './DesignSummary';
+import { DryRunPanel } from './DryRunPanel';
 import { EnrolForm } from './EnrolForm';
 import { ExportPanel } from './ExportPanel';
 import { ReaderTable } from './ReaderTable';
@@ -35,6 +36,7 @@ export const StudyScreen = ({ studyId }: { studyId: string }) => {
       <EnrolForm study={study} onEnrolled={refresh} />
       <ExportPanel study={study} caseSet={caseSet} caution={RESEARCH_CAUTION} />
       <DesignSummary study={study} caseSet={caseSet} />
+      <DryRunPanel study={study} caseSet={caseSet} />
     </main>
   );
 };
