@@ -22,3 +22,16 @@ describe('heed plan arguments', () => {
     expect(() => parsePlanArgs(['--frobnicate', '1'])).toThrow(/unknown option --frobnicate/);
   });
 });
+
+describe('heed plan --design', () => {
+  it('names a study file it cannot read or parse', async () => {
+    const { runPlanCommand } = await import('../../../src/cli/plan');
+    await expect(runPlanCommand(['--design', '/nonexistent/study.json'])).rejects.toThrow(/cannot read \/nonexistent\/study.json/);
+    const { mkdtempSync, writeFileSync } = await import('node:fs');
+    const { join } = await import('node:path');
+    const { tmpdir } = await import('node:os');
+    const file = join(mkdtempSync(join(tmpdir(), 'heed-plan-')), 'study.json');
+    writeFileSync(file, '{"format": "heed-study",\n "version": 1,,}');
+    await expect(runPlanCommand(['--design', file])).rejects.toThrow(/study\.json is not valid JSON at line 2/);
+  });
+});
