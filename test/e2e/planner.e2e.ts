@@ -36,6 +36,15 @@ describe('planner: the dry-run panel on a draft study', () => {
     await homePage(page).newStudy({ name: 'Dry run pilot', aidedMode: 'sequential', plantedFalsePositive: 3, plantedFalseNegative: 3, caution: 'with a random half of aided reads' });
 
     const panel = page.getByRole('region', { name: /Dry run/ });
+    // a long run shows its progress and stops on Cancel, leaving no result
+    await panel.getByLabel('Simulated studies').fill('5000');
+    await panel.getByRole('button', { name: 'Run dry run' }).click();
+    await panel.getByRole('progressbar', { name: 'Dry run progress' }).waitFor();
+    await panel.getByRole('button', { name: 'Cancel' }).click();
+    await panel.getByRole('progressbar', { name: 'Dry run progress' }).waitFor({ state: 'detached' });
+    expect(await page.getByLabel('Dry-run result').count()).toBe(0);
+    expect(await panel.getByRole('button', { name: 'Run dry run' }).isEnabled()).toBe(true);
+
     await panel.getByLabel('Readers', { exact: true }).fill('5');
     await panel.getByLabel('Simulated studies').fill('20');
     await panel.getByRole('button', { name: 'Run dry run' }).click();
