@@ -11,7 +11,7 @@
  *  - AUC power ('plan/auc/<s>'): the own-look model at the assumed AUC difference;
  *  - AUC null ('plan/null/<s>'): the own-look model at difference 0 (the test's type I error).
  * Curves: the reliance and AUC-power sets again at a small grid of readers, cases and planted
- * errors around the design (x0.5, x1.5, x2), with a fifth of the studies (at least 20).
+ * errors around the design (x0.5, x1.5, x2), with a tenth of the studies (at least 20): enough for a plot.
  * Throws RangeError for assumptions out of range or a case set too small for the planted errors.
  */
 import type { StudyDesign } from '../../core/design';
@@ -106,7 +106,7 @@ export function* planSteps(input: PlanInput): Generator<PlanProgress, PlanReport
   const full = relianceParameters(a);
   const ownLook = ownLookParameters(a);
   const nullLook = ownLookParameters(a, 0);
-  const curveSims = Math.max(20, Math.round(a.sims / 5));
+  const curveSims = Math.max(20, Math.round(a.sims / 10));
   const points: { vary: CurvePoint['vary']; assumptions: PlanAssumptions }[] = [];
   if (input.curves !== false) {
     for (const f of curveFactors) points.push({ vary: 'readers', assumptions: { ...a, readers: Math.max(2, Math.round(a.readers * f)) } });
