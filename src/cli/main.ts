@@ -11,6 +11,7 @@ const USAGE = `usage:
   heed verify BUNDLE                                 check a study bundle's hashes and chain
   heed merge A B ... --out C                         merge bundles of one study from several workstations
   heed simulate [--readers N] [--seed S] --out PATH  a demo study read by simulated readers, as a bundle
+  heed plan [--design study.json] [--readers N] ...  dry-run a design: how precise its answers will be (--help)
 Heed is a research and training tool, not a medical device.`;
 
 type Verb = (args: string[]) => Promise<number>;
@@ -23,6 +24,7 @@ const verbs: Record<string, () => Promise<Verb>> = {
   verify: async () => (await import('./verify')).runVerify,
   merge: async () => (await import('./merge')).runMerge,
   simulate: async () => (await import('./simulate')).runSimulate,
+  plan: async () => (await import('./plan')).runPlanCommand,
 };
 
 const main = async (argv: string[]): Promise<number> => {

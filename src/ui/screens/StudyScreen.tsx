@@ -7,6 +7,7 @@ import { signal } from '../signals';
 import { actions } from '../state/app-state';
 import { useAsync } from '../use-async';
 import { DesignSummary } from './DesignSummary';
+import { DryRunPanel } from './DryRunPanel';
 import { EnrolForm } from './EnrolForm';
 import { BundlePanel } from './BundlePanel';
 import { ExportPanel } from './ExportPanel';
@@ -45,6 +46,7 @@ export const StudyScreen = ({ studyId }: { studyId: string }) => {
       <ExportPanel study={study} caseSet={caseSet} caution={RESEARCH_CAUTION} />
       <BundlePanel study={study} onMerged={refresh} />
       <DesignSummary study={study} caseSet={caseSet} />
+      <DryRunPanel study={study} caseSet={caseSet} />
     </main>
   );
 };

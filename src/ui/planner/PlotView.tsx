@@ -1,0 +1,15 @@
+/** An Observable Plot figure in the page, drawn by the shared renderer (src/io/plots/render.ts). */
+import { useEffect, useRef } from 'react';
+import { renderPlot, type PlotOptions } from '../../io/plots/render';
+
+export const PlotView = ({ options, label }: { options: PlotOptions; label: string }) => {
+  const ref = useRef<HTMLDivElement>(null);
+  useEffect(() => {
+    const host = ref.current;
+    if (!host) return;
+    const node = renderPlot(options, document);
+    host.replaceChildren(node);
+    return () => { host.replaceChildren(); };
+  }, [options]);
+  return <figure className="plot" role="img" aria-label={label} ref={ref} />;
+};
