@@ -3,7 +3,7 @@
  * Schema, so R, Python or any Frictionless tool can load them with types. Checked in the tests
  * against the published Data Package and Table Schema JSON Schemas.
  */
-import { READ_LOG_COLUMNS, type ReadLogColumn } from '../../core/read-log';
+import { READ_LOG_COLUMNS, READ_LOG_OPTIONAL_COLUMNS, type ReadLogColumn, type ReadLogOptionalColumn } from '../../core/read-log';
 import { RESEARCH_CAUTION } from '../../core/research-caution';
 import type { CaseSetManifest } from '../../core/case-set';
 import { CHAIN_COLUMNS } from './texts';
@@ -12,7 +12,7 @@ type Field = { name: string; type: string; description?: string; format?: string
 
 const BOOLEAN: Omit<Field, 'name'> = { type: 'boolean', trueValues: ['1'], falseValues: ['0'] };
 
-const READ_TYPES: Record<ReadLogColumn, Omit<Field, 'name'>> = {
+const READ_TYPES: Record<ReadLogColumn | ReadLogOptionalColumn, Omit<Field, 'name'>> = {
   study_id: { type: 'string', constraints: { required: true } },
   reader_id: { type: 'string', constraints: { required: true } },
   reader_role: { type: 'string' },
@@ -36,13 +36,18 @@ const READ_TYPES: Record<ReadLogColumn, Omit<Field, 'name'>> = {
   final_confidence: { type: 'number', constraints: { minimum: 0, maximum: 100 } },
   total_ms: { type: 'number', constraints: { required: true, minimum: 0 } },
   shown_at: { type: 'datetime', format: 'any', constraints: { required: true } },
+  scale: { type: 'string', constraints: { enum: ['call-confidence', 'five-point', 'percent'] }, description: 'answer scale; empty means call-confidence' },
+  initial_rating: { type: 'number', constraints: { minimum: 0, maximum: 100 }, description: '1..5 on five-point, 0..100 on percent' },
+  final_rating: { type: 'number', constraints: { minimum: 0, maximum: 100 }, description: '1..5 on five-point, 0..100 on percent' },
+  training: { ...BOOLEAN, description: 'read in a training study that showed the truth after each case' },
+  withdrawn: { ...BOOLEAN, description: 'the reader was withdrawn from the study' },
 };
 
 const attributeFields = (manifest: CaseSetManifest): Field[] =>
   manifest.attributeNames.map((a) => ({ name: `case_${a}`, type: 'string', description: `case attribute "${a}" from the case set` }));
 
 const readsFields = (manifest: CaseSetManifest): Field[] => [
-  ...READ_LOG_COLUMNS.map((name) => ({ name, ...READ_TYPES[name] })),
+  ...[...READ_LOG_COLUMNS, ...READ_LOG_OPTIONAL_COLUMNS].map((name) => ({ name, ...READ_TYPES[name] })),
   ...attributeFields(manifest),
   { name: CHAIN_COLUMNS[0], type: 'string', constraints: { required: true, unique: true }, description: 'read identifier' },
   { name: CHAIN_COLUMNS[1], type: 'string', constraints: { required: true, pattern: '[0-9a-f]{64}' }, description: 'SHA-256 of the event that committed the answer' },
