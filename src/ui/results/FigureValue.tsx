@@ -7,7 +7,7 @@
 import { HEADLINE_KEY, valueAt, type FigureDef } from './figure-list';
 import { figureText } from './format';
 
-const attr = (x: unknown): string => (typeof x === 'number' ? String(x) : x === null ? 'null' : '');
+const attr = (x: unknown): string => (typeof x === 'number' ? String(x) : typeof x === 'string' ? x : x === null ? 'null' : '');
 
 export const FigureValue = ({ def, root, base }: { def: FigureDef; root: unknown; base: string }) => {
   const value = valueAt(root, def.path);

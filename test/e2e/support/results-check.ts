@@ -34,7 +34,9 @@ export const compareWithCli = (shown: readonly ShownFigure[], cli: unknown): { p
     if (node === undefined) { problems.push(`${f.path}: not in the JSON`); continue; }
     const record = node !== null && typeof node === 'object' && !Array.isArray(node) ? (node as Record<string, unknown>) : null;
     const expected = f.key ? record?.[f.key] : node;
-    if (f.value.startsWith('[')) {
+    if (typeof expected === 'string') {
+      if (f.value !== expected) problems.push(`${f.path}: page ${f.value}, JSON ${expected}`);
+    } else if (f.value.startsWith('[')) {
       if (JSON.stringify(expected) !== f.value) problems.push(`${f.path}: page ${f.value}, JSON ${JSON.stringify(expected)}`);
     } else if (asNumber(f.value) !== (expected ?? null)) problems.push(`${f.path}${f.key ? `.${f.key}` : ''}: page ${f.value}, JSON ${String(expected)}`);
     for (const end of ['lower', 'upper'] as const) {
