@@ -1,12 +1,13 @@
 // `heed report FILE --reader ID [--out report.html] [--pdf report.pdf]`: one reader's private
 // feedback report from a reads.csv, as a self-contained HTML page and/or a PDF.
-import { mkdtemp, readFile, rm, writeFile } from 'node:fs/promises';
+import { mkdtemp, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { analyzeReads } from '../analysis/engine';
 import { readerComplete } from '../analysis/reader-report/log-completion';
 import { readerReport } from '../analysis/reader-report/reader-report';
-import { parseReadLog, ReadLogError } from '../io/read-log-parse';
+import { parseReadLog, parseReadLogBytes, ReadLogError } from '../io/read-log-parse';
+import { readAnalyzeInput } from './analyze-input';
 import { reportPage } from '../io/report/render-report';
 import { printHtmlToPdf } from './chromium-pdf';
 import { CliError } from './cli-error';
@@ -39,11 +40,11 @@ export const parseReportArgs = (args: string[]): ReportArgs => {
   return { file, reader, out, pdf };
 };
 
-/** The report page for one reader of a read log's text; CliError for bad input. */
-export const reportFromLog = (file: string, text: string, readerId: string, madeAt: string): string => {
+/** The report page for one reader of a read log (its text, or its bytes read as strict UTF-8); CliError for bad input. */
+export const reportFromLog = (file: string, log: string | Uint8Array, readerId: string, madeAt: string): string => {
   let rows;
   try {
-    rows = parseReadLog(text);
+    rows = typeof log === 'string' ? parseReadLog(log) : parseReadLogBytes(log);
   } catch (error) {
     if (error instanceof ReadLogError) throw new CliError(`${file}:${error.line}: ${error.column === null ? '' : `column ${error.column}: `}${error.problem}`);
     throw error;
@@ -64,14 +65,9 @@ export const reportFromLog = (file: string, text: string, readerId: string, made
 
 export const runReport = async (args: string[]): Promise<number> => {
   const { file, reader, out, pdf } = parseReportArgs(args);
-  let text: string;
-  try {
-    text = await readFile(file, 'utf8');
-  } catch (error) {
-    const code = error instanceof Error && 'code' in error ? String(error.code) : 'unreadable';
-    throw new CliError(`${file}: cannot read the file (${code === 'ENOENT' ? 'no such file' : code})`);
-  }
-  const html = reportFromLog(file, text, reader, new Date().toISOString());
+  // a reads.csv, or a study bundle (verified first, then its reads.csv)
+  const bytes = await readAnalyzeInput(file);
+  const html = reportFromLog(file, bytes, reader, new Date().toISOString());
   if (out !== null) await writeFile(out, html);
   if (pdf !== null) {
     const work = await mkdtemp(join(tmpdir(), 'heed-report-'));

@@ -4,7 +4,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { unzipSync, zipSync } from 'fflate';
 
-// The real commands, as a user runs them: node bin/heed.js simulate | merge | verify | analyze.
+// The real commands, as a user runs them: node bin/heed.js simulate | merge | verify | analyze | report.
 const dir = mkdtempSync(join(tmpdir(), 'heed-bundle-cli-'));
 const heed = (...args: string[]) => {
   const r = spawnSync(process.execPath, ['bin/heed.js', ...args], { encoding: 'utf8', cwd: process.cwd() });
@@ -53,5 +53,18 @@ describe('heed simulate, merge, verify and analyze on bundles', () => {
     const fromCsv = heed('analyze', csv, '--json', '--boot', '50');
     expect(fromBundle.code, fromBundle.err).toBe(0);
     expect(fromBundle.out).toBe(fromCsv.out);
+  });
+
+  it('makes a reader\'s report from a bundle exactly as from its reads.csv', () => {
+    const csv = join(dir, 'reads-for-report.csv');
+    writeFileSync(csv, text(whole, 'reads.csv'));
+    const reader = text(whole, 'reads.csv').split('\n')[1]?.split(',')[1] ?? '';
+    const fromBundle = heed('report', whole, '--reader', reader);
+    const fromCsv = heed('report', csv, '--reader', reader);
+    expect(fromBundle.code, fromBundle.err).toBe(0);
+    expect(fromBundle.out).toContain(reader);
+    // the pages differ only in the moment they were made
+    const undated = (html: string) => html.replace(/\d{4}-\d\d-\d\dT[\d:.]+Z/g, 'T').replace(/\d{4}-\d\d-\d\d \d\d:\d\d( UTC)?/g, 'T');
+    expect(undated(fromBundle.out)).toBe(undated(fromCsv.out));
   });
 });
