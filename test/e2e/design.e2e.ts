@@ -9,26 +9,15 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import Papa from 'papaparse';
 import { inject } from 'vitest';
-import { useChromiumProfile, type RunningChromium } from './support/chromium';
+import { useChromiumProfile } from './support/chromium';
 import { writeCaseFolder } from './support/case-folder';
+import { readWholePeriod } from './support/read-period';
 import { homePage, readingPage, studyPage } from './support/pages';
 import { compareWithCli, shownFigures } from './support/results-check';
 
 const SHOTS = join(import.meta.dirname, '..', '..', 'test-results', 'screens');
 const CASES = 24;
 const PRACTICE = 2;
-
-const readWholePeriod = async (chrome: RunningChromium) => {
-  const reading = readingPage(chrome.page);
-  let steps = 0;
-  while (!(await reading.isDone())) {
-    await reading.answerByKeys((steps % 2) as 0 | 1, 1 + (steps % 9));
-    steps++;
-  }
-  await chrome.page.getByRole('button', { name: 'Done: hand back the workstation' }).click();
-  await chrome.page.getByRole('button', { name: 'Coordinator: back to the study' }).click();
-  return steps;
-};
 
 describe('design: own case set, planted errors, caution notice, crossover with washout', () => {
   const url = inject('appUrl');

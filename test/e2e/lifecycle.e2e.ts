@@ -8,23 +8,12 @@ import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import Papa from 'papaparse';
 import { inject } from 'vitest';
-import { useChromiumProfile, waitForSignal, signalCount, type RunningChromium } from './support/chromium';
+import { useChromiumProfile, waitForSignal, signalCount } from './support/chromium';
 import { writeCaseFolder } from './support/case-folder';
+import { readWholePeriod } from './support/read-period';
 import { homePage, readingPage, studyPage } from './support/pages';
 
 const SHOTS = join(import.meta.dirname, '..', '..', 'test-results', 'screens');
-
-const readWholePeriod = async (chrome: RunningChromium) => {
-  const reading = readingPage(chrome.page);
-  let steps = 0;
-  while (!(await reading.isDone())) {
-    await reading.answerByKeys((steps % 2) as 0 | 1, 1 + (steps % 9));
-    steps++;
-  }
-  await chrome.page.getByRole('button', { name: 'Done: hand back the workstation' }).click();
-  await chrome.page.getByRole('button', { name: 'Coordinator: back to the study' }).click();
-  return steps;
-};
 
 describe('a study’s whole life', () => {
   const url = inject('appUrl');
