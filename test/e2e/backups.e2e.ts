@@ -7,6 +7,7 @@
  */
 import { readFileSync, readdirSync } from 'node:fs';
 import { join } from 'node:path';
+import type { Page } from 'playwright-core';
 import { inject } from 'vitest';
 import { readBundle } from '../../src/io/bundle/read';
 import { useChromiumProfile, signalCount, waitForSignal } from './support/chromium';
@@ -23,7 +24,7 @@ describe('automatic backups', () => {
   const second = useChromiumProfile(url.href);
   const folder = writeCaseFolder(4, 0);
 
-  const importSet = async (page: import('playwright-core').Page) => {
+  const importSet = async (page: Page) => {
     const [chooser] = await Promise.all([page.waitForEvent('filechooser'), page.getByRole('button', { name: 'Import a folder…' }).click()]);
     await chooser.setFiles(folder.dir);
     await page.getByRole('status').filter({ hasText: 'Imported' }).waitFor();
@@ -76,7 +77,7 @@ describe('automatic backups', () => {
     await homePage(page).waitUntilReady();
     await importSet(page);
     const panel = page.getByRole('region', { name: 'Backups' });
-    await panel.getByText('not on this workstation').waitFor();
+    await panel.getByText('Backed-up-study (not on this workstation)').waitFor();
     await page.screenshot({ path: join(SHOTS, 'backups-start-screen.png'), fullPage: true });
     await panel.getByRole('button', { name: `Restore ${written}` }).click();
     await page.getByRole('heading', { name: 'Backed-up study', level: 1 }).waitFor();

@@ -26,6 +26,9 @@ const byStudy = (backups: BackupEntry[]): Map<string, BackupEntry[]> => {
   return groups;
 };
 
+/** The study name a backup's file carries after its time stamp ("…Z-Reader-study.zip" gives "Reader-study"). */
+const nameInFile = (fileName: string): string => /Z-(.+)\.zip$/.exec(fileName)?.[1] ?? 'A study';
+
 const when = (iso: string): string => new Date(iso).toLocaleString('en-GB', { dateStyle: 'medium', timeStyle: 'short' });
 
 export const BackupsPanel = ({ studies }: Props) => {
@@ -70,7 +73,7 @@ export const BackupsPanel = ({ studies }: Props) => {
             <ul className="plain">
               {[...byStudy(l.backups)].map(([studyId, group]) => (
                 <li key={studyId}>
-                  <strong>{names.get(studyId) ?? `Study ${studyId} (not on this workstation)`}</strong>
+                  <strong>{names.get(studyId) ?? `${nameInFile(group[0]?.fileName ?? '')} (not on this workstation)`}</strong>
                   <ul className="plain">
                     {group.map((b) => (
                       <li key={b.id}>
