@@ -6,9 +6,14 @@ export const CHANNELS = {
   pickCaseSet: 'heed:pick-case-set',
   readCaseFile: 'heed:read-case-file',
   openFolder: 'heed:open-folder',
+  saveBackup: 'heed:save-backup',
+  listBackups: 'heed:list-backups',
+  readBackup: 'heed:read-backup',
 } as const;
 
 export type ChannelKey = keyof typeof CHANNELS;
 
 /** Every channel key, in a typed list (Object.keys would give string[]). */
-export const CHANNEL_KEYS: readonly ChannelKey[] = ['saveFile', 'printToPdf', 'pickCaseSet', 'readCaseFile', 'openFolder'];
+export const CHANNEL_KEYS: readonly ChannelKey[] = [
+  'saveFile', 'printToPdf', 'pickCaseSet', 'readCaseFile', 'openFolder', 'saveBackup', 'listBackups', 'readBackup',
+];

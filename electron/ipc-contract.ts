@@ -3,9 +3,11 @@
 // unknown against these schemas; the payload types themselves live in src/host/bridge.ts.
 import { z } from 'zod';
 import type {
-  OpenFolderRequest, PickCaseSetRequest, PrintToPdfRequest, ReadCaseFileRequest, SaveFileRequest,
+  ListBackupsRequest, OpenFolderRequest, PickCaseSetRequest, PrintToPdfRequest, ReadBackupRequest, ReadCaseFileRequest, SaveBackupRequest,
+  SaveFileRequest,
 } from '../src/host/bridge';
 import { fileNameProblem } from '../src/host/file-name';
+import { backupProblem, parseBackupId } from '../scripts/lib/backup-folder.mjs';
 import type { ChannelKey } from './channels';
 
 export { CHANNELS, CHANNEL_KEYS } from './channels';
@@ -42,12 +44,33 @@ export const readCaseFileRequest = z.strictObject({
 
 export const openFolderRequest = z.strictObject({ where: z.string().min(1).max(4096) }) satisfies z.ZodType<OpenFolderRequest>;
 
+/** Largest backup the renderer may ask the main process to write (bundles without images are small). */
+export const MAX_BACKUP_BYTES = 128 * 1024 * 1024;
+
+export const saveBackupRequest = z.strictObject({
+  studyId: z.string(),
+  fileName: z.string(),
+  bytes: z.instanceof(Uint8Array).refine((b) => b.byteLength <= MAX_BACKUP_BYTES, `the backup is larger than ${MAX_BACKUP_BYTES} bytes`),
+}).superRefine((request, ctx) => {
+  const problem = backupProblem(request.studyId, request.fileName);
+  if (problem !== null) ctx.addIssue({ code: 'custom', message: problem, path: ['fileName'] });
+}) satisfies z.ZodType<SaveBackupRequest>;
+
+export const listBackupsRequest = z.null() satisfies z.ZodType<ListBackupsRequest>;
+
+export const readBackupRequest = z.strictObject({
+  id: z.string().refine((id) => parseBackupId(id) !== null, 'not a backup id (study id/file name)'),
+}) satisfies z.ZodType<ReadBackupRequest>;
+
 export const REQUESTS = {
   saveFile: saveFileRequest,
   printToPdf: printToPdfRequest,
   pickCaseSet: pickCaseSetRequest,
   readCaseFile: readCaseFileRequest,
   openFolder: openFolderRequest,
+  saveBackup: saveBackupRequest,
+  listBackups: listBackupsRequest,
+  readBackup: readBackupRequest,
 } as const satisfies Record<ChannelKey, z.ZodType>;
 
 /** A zod error as one line naming the field: `suggestedName: the suggested file name is empty`. */

@@ -6,6 +6,8 @@ import { writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import type { z } from 'zod';
 import type { BridgeResult, HeedBridge } from '../src/host/bridge';
+import { createBackupFolder } from '../scripts/lib/backup-folder.mjs';
+import type { BackupFolder } from '../scripts/lib/backup-folder.mjs';
 import { isAppUrl } from './app-protocol';
 import { createCaseSetFiles } from './case-set-files';
 import type { CaseSetFiles } from './case-set-files';
@@ -41,7 +43,10 @@ const filtersFor = (name: string): SaveDialogOptions['filters'] => {
   return ext === '' ? [] : [{ name: ext.toUpperCase(), extensions: [ext] }, { name: 'All files', extensions: ['*'] }];
 };
 
-export const createHandlers = (caseSets: CaseSetFiles = createCaseSetFiles()): Handlers => {
+/** Backups live in the app's data folder (userData/backups), the last ten of each study kept. */
+const appBackups = (): BackupFolder => createBackupFolder({ root: path.join(app.getPath('userData'), 'backups') });
+
+export const createHandlers = (caseSets: CaseSetFiles = createCaseSetFiles(), backupFolder: () => BackupFolder = appBackups): Handlers => {
   // Paths written in this session: the only ones openFolder will reveal.
   const saved = new Set<string>();
 
@@ -90,6 +95,12 @@ export const createHandlers = (caseSets: CaseSetFiles = createCaseSetFiles()): H
       shell.showItemInFolder(request.where);
       return true;
     }),
+    saveBackup: guarded('saveBackup', REQUESTS.saveBackup, (request) => backupFolder().save(request.studyId, request.fileName, request.bytes)),
+    listBackups: guarded('listBackups', REQUESTS.listBackups, async () => {
+      const folder = backupFolder();
+      return { available: true as const, folder: folder.root, keep: folder.keep, backups: await folder.list() };
+    }),
+    readBackup: guarded('readBackup', REQUESTS.readBackup, (request) => backupFolder().read(request.id)),
   };
 };
 

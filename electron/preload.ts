@@ -14,6 +14,9 @@ export const makeBridge = (invoke: Invoke): HeedBridge => ({
   pickCaseSet: (request) => invoke(CHANNELS.pickCaseSet, request),
   readCaseFile: (request) => invoke(CHANNELS.readCaseFile, request),
   openFolder: (request) => invoke(CHANNELS.openFolder, request),
+  saveBackup: (request) => invoke(CHANNELS.saveBackup, request),
+  listBackups: (request) => invoke(CHANNELS.listBackups, request),
+  readBackup: (request) => invoke(CHANNELS.readBackup, request),
 });
 
 contextBridge.exposeInMainWorld('heedHost', makeBridge((channel, payload) => ipcRenderer.invoke(channel, payload)));

@@ -14,6 +14,7 @@ import {
 import { ELECTRON, RENDERER, targetIsStale } from './lib/freshness.mjs';
 import { profileToken, provesHeed } from './lib/launch-token.mjs';
 import { startStaticServer } from './lib/static-server.mjs';
+import { backupSecretFor, createBackupFolder, defaultBackupRoot } from './lib/backup-folder.mjs';
 
 const HANDOFF_MS = 3000;
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
@@ -83,11 +84,15 @@ if (choice.mode === 'electron') {
   // nothing: a squatter on the port would otherwise be handed the whole profile).
   const profileDir = chromiumProfileDir(env, homedir());
   const token = profileToken(profileDir);
+  // Backups go through this server; the page proves it is ours with a secret derived from the
+  // token, so a window opened on a server reused from an earlier launch can back up too.
+  const backupSecret = backupSecretFor(token);
+  const backups = { folder: createBackupFolder({ root: defaultBackupRoot(env, homedir()) }), secret: backupSecret };
   const listen = async () => {
     const dist = path.join(root, 'dist');
-    if (port.port !== null) return startStaticServer({ root: dist, port: port.port, token });
+    if (port.port !== null) return startStaticServer({ root: dist, port: port.port, token, backups });
     try {
-      return await startStaticServer({ root: dist, port: DEFAULT_PORT, token });
+      return await startStaticServer({ root: dist, port: DEFAULT_PORT, token, backups });
     } catch (error) {
       if (error?.code !== 'EADDRINUSE') throw error;
       // IndexedDB is kept per origin: another port would open another, empty database. So reuse a
@@ -107,19 +112,19 @@ if (choice.mode === 'electron') {
     fail(`could not serve dist/ on 127.0.0.1${port.port ? `:${port.port}` : ''}: ${error.message}`);
   }
   if (server.reused && choice.mode === 'serve') process.exit(0);
-  if (!server.reused) say(`serving dist/ at ${server.url} (127.0.0.1 only)`);
+  if (!server.reused) say(`serving dist/ at ${server.url} (127.0.0.1 only); backups go to ${backups.folder.root}`);
   const shutdown = async (code) => {
     await server.close();
     process.exit(code);
   };
   if (choice.mode === 'serve') {
-    say(`open ${appUrl(server.url, 'serve', null)} in Chromium; press Ctrl+C to stop`);
+    say(`open ${appUrl(server.url, 'serve', null, backupSecret)} in Chromium; press Ctrl+C to stop`);
     process.on('SIGINT', () => shutdown(0));
     process.on('SIGTERM', () => shutdown(0));
   } else {
     mkdirSync(profileDir, { recursive: true });
     const isRoot = typeof process.getuid === 'function' && process.getuid() === 0;
-    const args = chromiumArgs({ url: appUrl(server.url, 'chromium', profileDir), profileDir, isRoot, debugPort: debugPort.port });
+    const args = chromiumArgs({ url: appUrl(server.url, 'chromium', profileDir, backupSecret), profileDir, isRoot, debugPort: debugPort.port });
     say(`opening a Chromium app window (profile ${profileDir})`);
     const verbose = Boolean(env.HEED_VERBOSE);
     const child = spawn(chromium, args, { stdio: ['ignore', verbose ? 'inherit' : 'ignore', verbose ? 'inherit' : 'pipe'], env });

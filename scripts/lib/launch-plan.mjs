@@ -54,12 +54,14 @@ export const parsePort = (name, value) => {
  * The address the launcher opens: the served root with the launch mode (and, for the Chromium
  * window, its profile folder) in the query string, so the start screen can say where this
  * window's data lives. The query does not change the origin, so the database is the same.
- * @param {string} url @param {'chromium' | 'serve'} mode @param {string | null} profileDir
+ * `backupSecret`, when given, lets the page write backups through the launcher (backup-endpoint.mjs).
+ * @param {string} url @param {'chromium' | 'serve'} mode @param {string | null} profileDir @param {string | null} [backupSecret]
  */
-export const appUrl = (url, mode, profileDir) => {
+export const appUrl = (url, mode, profileDir, backupSecret = null) => {
   const address = new URL(url);
   address.searchParams.set('mode', mode);
   if (profileDir !== null) address.searchParams.set('profile', profileDir);
+  if (backupSecret !== null) address.searchParams.set('backup', backupSecret);
   return address.href;
 };
 

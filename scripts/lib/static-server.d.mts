@@ -1,2 +1,4 @@
+import type { BackupFolder } from './backup-folder.mjs';
 export type StaticServer = { url: string; port: number; close(): Promise<void> };
-export declare const startStaticServer: (options: { root: string; port?: number; token?: string }) => Promise<StaticServer>;
+export type BackupOptions = { folder: BackupFolder; secret: string; maxBytes?: number };
+export declare const startStaticServer: (options: { root: string; port?: number; token?: string; backups?: BackupOptions }) => Promise<StaticServer>;

@@ -1,9 +1,11 @@
 // A tiny static server for dist/: 127.0.0.1 only, GET/HEAD only, no directory listing, nothing
 // outside the root, Heed's CSP on every answer, no CORS. Used by `npm start` and the e2e tests.
+// With `backups`, it also takes the page's automatic backups (backup-endpoint.mjs).
 import { createServer } from 'node:http';
 import { createReadStream } from 'node:fs';
 import { realpath, stat } from 'node:fs/promises';
 import path from 'node:path';
+import { BACKUP_PATH, answerBackupRequest } from './backup-endpoint.mjs';
 import { PROOF_PATH, proofFor } from './launch-token.mjs';
 import { contentTypeFor, resolveInside, securityHeaders } from './web-policy.mjs';
 
@@ -20,8 +22,12 @@ const hostAllowed = (hostHeader, port) =>
 
 const isInside = (root, file) => file === root || file.startsWith(root + path.sep);
 
-const handler = (root, realRoot, getPort, token) => async (req, res) => {
+const handler = (root, realRoot, getPort, token, backups) => async (req, res) => {
   if (!hostAllowed(req.headers.host, getPort())) return send(res, 421, 'wrong host\n');
+  if (backups && (req.url === BACKUP_PATH || req.url?.startsWith(`${BACKUP_PATH}?`) || req.url?.startsWith(`${BACKUP_PATH}/`))) {
+    const origins = [`http://${HOST}:${getPort()}`, `http://localhost:${getPort()}`];
+    return answerBackupRequest(req, res, { ...backups, origins, url: new URL(req.url, `http://${HOST}`), send });
+  }
   if (req.method !== 'GET' && req.method !== 'HEAD') return send(res, 405, 'method not allowed\n', { Allow: 'GET, HEAD' });
   let pathname;
   try {
@@ -62,11 +68,11 @@ const handler = (root, realRoot, getPort, token) => async (req, res) => {
  * @param {{ root: string; port?: number; token?: string }} options
  * @returns {Promise<{ url: string; port: number; close(): Promise<void> }>}
  */
-export const startStaticServer = async ({ root, port = 0, token }) => {
+export const startStaticServer = async ({ root, port = 0, token, backups }) => {
   const absRoot = path.resolve(root);
   const realRoot = await realpath(absRoot);
   let boundPort = port;
-  const server = createServer(handler(absRoot, realRoot, () => boundPort, token));
+  const server = createServer(handler(absRoot, realRoot, () => boundPort, token, backups));
   await new Promise((resolve, reject) => {
     server.once('error', reject);
     server.listen(port, HOST, () => {

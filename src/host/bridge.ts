@@ -1,7 +1,7 @@
 // The shape of `window.heedHost`, the narrow bridge the Electron preload exposes: one method per
 // IPC channel, each answering { ok, value } or { ok, error }. Plain types only, so the renderer
 // never depends on Electron; electron/ipc-contract.ts holds the matching runtime schemas.
-import type { CaseSetKind, SaveResult } from './types';
+import type { BackupEntry, BackupListing, CaseSetKind, SaveResult } from './types';
 
 export type BridgeResult<T> = { ok: true; value: T } | { ok: false; error: string };
 
@@ -14,6 +14,10 @@ export type CaseSetListing = { token: string; label: string; files: { path: stri
 export type ReadCaseFileRequest = { token: string; path: string; offset: number };
 export type FileChunk = { bytes: Uint8Array; size: number };
 export type OpenFolderRequest = { where: string };
+export type SaveBackupRequest = { studyId: string; fileName: string; bytes: Uint8Array };
+/** Listing backups takes no arguments; the payload is always null. */
+export type ListBackupsRequest = null;
+export type ReadBackupRequest = { id: string };
 
 export type HeedBridge = {
   saveFile(request: SaveFileRequest): Promise<BridgeResult<SaveResult>>;
@@ -21,9 +25,12 @@ export type HeedBridge = {
   pickCaseSet(request: PickCaseSetRequest): Promise<BridgeResult<CaseSetListing | null>>;
   readCaseFile(request: ReadCaseFileRequest): Promise<BridgeResult<FileChunk>>;
   openFolder(request: OpenFolderRequest): Promise<BridgeResult<boolean>>;
+  saveBackup(request: SaveBackupRequest): Promise<BridgeResult<BackupEntry>>;
+  listBackups(request: ListBackupsRequest): Promise<BridgeResult<BackupListing>>;
+  readBackup(request: ReadBackupRequest): Promise<BridgeResult<Uint8Array>>;
 };
 
-const METHODS = ['saveFile', 'printToPdf', 'pickCaseSet', 'readCaseFile', 'openFolder'] as const;
+const METHODS = ['saveFile', 'printToPdf', 'pickCaseSet', 'readCaseFile', 'openFolder', 'saveBackup', 'listBackups', 'readBackup'] as const;
 
 /** True when `value` has every bridge method; a page without the preload has no `heedHost`. */
 export const isBridge = (value: unknown): value is HeedBridge =>

@@ -2,7 +2,8 @@
 // <a download> blob URL, printing through the print dialog, case sets through a file input.
 // The DOM pieces come in as small dependencies so the logic is tested without a browser.
 import { checkFileName } from './file-name';
-import type { CaseSetKind, Host, PickedCaseSet } from './types';
+import { backupSecretOf, createLauncherBackups } from './launcher-backups';
+import type { BackupHost, CaseSetKind, Host, PickedCaseSet } from './types';
 
 export type AnchorLike = { href: string; download: string; rel: string; click(): void };
 export type FileLike = { name: string; webkitRelativePath: string; arrayBuffer(): Promise<ArrayBuffer> };
@@ -63,7 +64,21 @@ const zipSet = (file: FileLike): PickedCaseSet => {
   };
 };
 
-export const createBrowserHost = (deps: BrowserDeps = domDeps()): Host => ({
+/** Backups through the launcher, with the secret from this page's address. */
+export const pageBackups = (): BackupHost => {
+  // made on first use, so a host built outside a page (tests) never touches window
+  let made: BackupHost | null = null;
+  const backups = (): BackupHost => (made ??= createLauncherBackups(backupSecretOf(window.location.search), (url, init) =>
+    fetch(url, { method: init?.method ?? 'GET', headers: init?.headers ?? {}, body: init?.body ? new Blob([new Uint8Array(init.body)]) : null })));
+  return {
+    saveBackup: (studyId, fileName, bytes) => backups().saveBackup(studyId, fileName, bytes),
+    listBackups: () => backups().listBackups(),
+    readBackup: (id) => backups().readBackup(id),
+  };
+};
+
+export const createBrowserHost = (deps: BrowserDeps = domDeps(), backups: BackupHost = pageBackups()): Host => ({
+  ...backups,
   kind: 'browser',
   saveFile: async (suggestedName, data, mime) => {
     const name = checkFileName(suggestedName);

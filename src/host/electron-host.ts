@@ -43,4 +43,7 @@ export const createElectronHost = (bridge: HeedBridge): Host => ({
     };
   },
   openFolder: async (where) => unwrap(await bridge.openFolder({ where })),
+  saveBackup: async (studyId, fileName, bytes) => unwrap(await bridge.saveBackup({ studyId, fileName, bytes })),
+  listBackups: async () => unwrap(await bridge.listBackups(null)),
+  readBackup: async (id) => unwrap(await bridge.readBackup({ id })),
 });

@@ -18,7 +18,23 @@ export type PickedCaseSet = { label: string; files: PickedFile[] };
 /** Which kind of case set to pick: a folder holding cases.csv, or a .zip of one. */
 export type CaseSetKind = 'folder' | 'zip';
 
-export type Host = {
+/** One backup on disk: `id` is `studyId/fileName`, `savedAt` an ISO time. */
+export type BackupEntry = { id: string; studyId: string; fileName: string; bytes: number; savedAt: string };
+
+/** Where backups go and which are there; or why this window has no backup folder. */
+export type BackupListing =
+  | { available: true; folder: string; keep: number; backups: BackupEntry[] }
+  | { available: false; reason: string };
+
+/** Automatic backups: written to a folder on disk by the launcher's server or Electron's main process. */
+export type BackupHost = {
+  /** Writes one study bundle; `fileName` is `<UTC time>-<name>.zip` (see backupFileName). */
+  saveBackup(studyId: string, fileName: string, bytes: Uint8Array): Promise<BackupEntry>;
+  listBackups(): Promise<BackupListing>;
+  readBackup(id: string): Promise<Uint8Array>;
+};
+
+export type Host = BackupHost & {
   kind: 'electron' | 'browser';
   /** Offers `data` for saving under `suggestedName` (a plain file name, no folders). */
   saveFile(suggestedName: string, data: Uint8Array | string, mime: string): Promise<SaveResult>;

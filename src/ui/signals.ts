@@ -3,7 +3,7 @@
  * DOM event `heed:<name>` on window, and a running count of each is kept on document.body as
  * the attribute `data-heed-<name>`.
  */
-export type SignalName = 'mounted' | 'ready' | 'saved' | 'case-painted';
+export type SignalName = 'mounted' | 'ready' | 'saved' | 'case-painted' | 'backup';
 
 export const signal = (name: SignalName, detail: Record<string, unknown> = {}): void => {
   const attribute = `data-heed-${name}`;

@@ -1,7 +1,8 @@
 /**
  * Merging copies of one study from several workstations (docs/bundle.md, "Merge rules"):
  * - only copies of the same study with the same design fingerprint merge;
- * - readers and sessions are joined by id; reads are added by read id, and two different answers
+ * - readers and sessions are joined by id (a withdrawal on any copy wins; a code corrected on one
+ *   copy only is refused); reads are added by read id, and two different answers
  *   under one id are refused, naming both (bundle and events.jsonl line);
  * - events are joined by content: an event in several copies is kept once;
  * - when one copy already holds every event, its chain is kept as it is; otherwise the events are
@@ -43,17 +44,35 @@ const joinById = <T extends { id: string }>(lists: { label: string; items: reado
   return [...out.values()].map((v) => v.item);
 };
 
-const same = <T>(what: string) => (a: T, b: T, labels: string): T => {
-  if (canonicalJson(a) !== canonicalJson(b)) throw new BundleMergeError(`${labels} hold two different versions of ${what}`);
-  return a;
-};
-
 const minText = (a: string | null, b: string | null): string | null => (a === null ? b : b === null ? a : a < b ? a : b);
 
 const joinSessions = (a: SnapshotSession, b: SnapshotSession, labels: string): SnapshotSession => {
   if (canonicalJson(a.items) !== canonicalJson(b.items)) throw new BundleMergeError(`${labels} hold different case lists for session ${a.id}`);
   const override = [a.override, b.override].filter((o) => o !== null).sort((x, y) => byText(canonicalJson(x), canonicalJson(y)))[0] ?? null;
   return { ...a, startedAt: minText(a.startedAt, b.startedAt) ?? a.startedAt, completedAt: minText(a.completedAt, b.completedAt), override };
+};
+
+type Withdrawal = NonNullable<SnapshotReader['withdrawn']>;
+
+/** The earlier of two withdrawals (then by content), so the choice does not depend on the order of copies. */
+const earlierWithdrawal = (a: Withdrawal, b: Withdrawal): Withdrawal =>
+  byText(a.at, b.at) < 0 ? a : byText(a.at, b.at) > 0 ? b : byText(canonicalJson(a), canonicalJson(b)) <= 0 ? a : b;
+
+/**
+ * One reader in two copies. A withdrawal recorded on any copy wins and keeps its reason (the
+ * earlier one when both copies withdrew); a code corrected on one copy only is refused, naming both
+ * codes; every other field must be equal.
+ */
+const joinReaders = (a: SnapshotReader, b: SnapshotReader, labels: string): SnapshotReader => {
+  if (a.code !== b.code) {
+    throw new BundleMergeError(`${labels} hold two different codes for one reader (id ${a.id}): ${a.code} and ${b.code}; correct the code on the other copy too, so that both match, then merge`);
+  }
+  const rest = (r: SnapshotReader) => canonicalJson({ ...r, withdrawn: null });
+  if (rest(a) !== rest(b)) throw new BundleMergeError(`${labels} hold two different versions of reader ${a.code}`);
+  const withdrawn = a.withdrawn && b.withdrawn ? earlierWithdrawal(a.withdrawn, b.withdrawn) : a.withdrawn ?? b.withdrawn ?? null;
+  if (withdrawn !== null) return { ...a, withdrawn };
+  // neither withdrawn: the form without the field, if either copy has it, whatever the order
+  return a.withdrawn === undefined ? a : b.withdrawn === undefined ? b : a;
 };
 
 export const mergeSnapshots = (inputs: readonly MergeInput[]): StudySnapshot => {
@@ -66,7 +85,7 @@ export const mergeSnapshots = (inputs: readonly MergeInput[]): StudySnapshot => 
     if (canonicalJson(snapshot.suggestions) !== canonicalJson(first.snapshot.suggestions)) throw new BundleMergeError(`${label} shows other suggestions than ${first.label}`);
   }
 
-  const readers = joinById<SnapshotReader>(inputs.map((i) => ({ label: i.label, items: i.snapshot.readers })), (a, b, labels) => same<SnapshotReader>(`reader ${a.code}`)(a, b, labels));
+  const readers = joinById<SnapshotReader>(inputs.map((i) => ({ label: i.label, items: i.snapshot.readers })), joinReaders);
   const codes = new Map<string, string>();
   for (const r of readers) {
     const other = codes.get(r.code.toLowerCase());

@@ -13,6 +13,7 @@ import type { HeedDb } from '../../store/db';
 import type { StoredRead, StoredSession, StoredStudy } from '../../store/records';
 import { commitAnswerAndRead, getSession, logSessionMoment, readsOfSession, sessionPosition } from '../../store/sessions';
 import { getStudy } from '../../store/studies';
+import { backUpStudy } from '../services/backup';
 
 export type LoadedSession = {
   study: StoredStudy;
@@ -75,6 +76,8 @@ export const useReadingSession = (db: HeedDb, studyId: string, sessionId: string
     readsNow.current = updated;
     setReadsState(updated);
     setPosition(next);
+    // the period's last answer is committed: back the study up (never awaited, never blocking)
+    if (next.done) void backUpStudy(db, loaded.study.id, 'period-complete');
     return { next, reads: updated };
   }, [db, loaded, position]);
 

@@ -7,6 +7,7 @@ import { getHost } from '../../host';
 import { useDb } from '../db-context';
 import { signal } from '../signals';
 import { actions } from '../state/app-state';
+import { backUpStudy } from '../services/backup';
 
 type Props = { study: StoredStudy; onMerged: () => void };
 
@@ -35,6 +36,18 @@ export const BundlePanel = ({ study, onMerged }: Props) => {
     }
   };
 
+  const backUp = async () => {
+    setBusy(true);
+    setProblem('');
+    try {
+      const outcome = await backUpStudy(db, study.id, 'on-demand');
+      if (outcome.ok) setStatus(`Backed up to ${outcome.folder}/${outcome.entry.id} (${outcome.entry.bytes.toLocaleString('en')} bytes).`);
+      else setProblem(outcome.message);
+    } finally {
+      setBusy(false);
+    }
+  };
+
   const merge = async (event: ChangeEvent<HTMLInputElement>) => {
     const file = event.target.files?.[0];
     event.target.value = '';
@@ -57,10 +70,11 @@ export const BundlePanel = ({ study, onMerged }: Props) => {
   return (
     <section className="panel" aria-labelledby="bundle-head">
       <h2 id="bundle-head">Study bundle</h2>
-      <p className="muted">One file with the whole study (design, readers, every answer and event, each chained by a hash so any later edit shows), to move it to another workstation, merge workstations, or keep as a backup.</p>
+      <p className="muted">One file with the whole study (design, readers, every answer and event, each chained by a hash so any later edit shows), to move it to another workstation, merge workstations, or keep as a backup. Heed also writes one to its backup folder (named on the start screen) whenever a period is complete.</p>
       <div className="form-actions">
         <label><input type="checkbox" checked={withImages} onChange={(e) => setWithImages(e.target.checked)} /> include the case images</label>
         <button type="button" disabled={busy} onClick={() => void save()}>Save study bundle</button>
+        <button type="button" disabled={busy} onClick={() => void backUp()}>Back up now</button>
         <label>
           Merge a workstation’s bundle
           <input type="file" accept=".zip,application/zip" disabled={busy} onChange={(e) => void merge(e)} />

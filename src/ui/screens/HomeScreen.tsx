@@ -11,6 +11,7 @@ import { ensureDemoCaseSet } from '../services/demo-set';
 import { signal } from '../signals';
 import { actions } from '../state/app-state';
 import { useAsync } from '../use-async';
+import { BackupsPanel } from './BackupsPanel';
 import { CaseSetList } from './CaseSetList';
 import { DataPanel } from './DataPanel';
 import { OpenBundle } from './OpenBundle';
@@ -72,6 +73,7 @@ export const HomeScreen = () => {
             )}
           </section>
           <OpenBundle />
+          <BackupsPanel studies={home.value.studies} />
           <CaseSetList caseSets={home.value.caseSets} onChanged={home.reload} />
           <DataPanel />
         </>

@@ -71,7 +71,7 @@ export const shell = {};
     expect(names.indexOf('privileged')).toBeLessThan(names.indexOf('ready'));
     expect(calls.find((c) => c[0] === 'privileged')?.[1]).toEqual([{ scheme: 'heed', privileges: expect.objectContaining({ standard: true, secure: true }) }]);
     expect(calls).toContainEqual(['switch', 'remote-debugging-port', '9555']);
-    expect(names.filter((n) => n === 'ipc')).toHaveLength(5);
+    expect(names.filter((n) => n === 'ipc')).toHaveLength(8); // one per IPC channel (electron/channels.ts)
     expect(calls).toContainEqual(['handle', 'heed']);
     expect(calls).toContainEqual(['load', 'heed://app/index.html']);
     const prefs = calls.find((c) => c[0] === 'window')?.[1];

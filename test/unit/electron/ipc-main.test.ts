@@ -1,4 +1,4 @@
-import { mkdirSync, mkdtempSync, readFileSync, rmSync, symlinkSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdirSync, mkdtempSync, readFileSync, readdirSync, rmSync, symlinkSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 
@@ -18,11 +18,14 @@ vi.mock('electron', () => ({
 import type { IpcMain, IpcMainInvokeEvent } from 'electron';
 import { CHANNELS, CHANNEL_KEYS, READ_CHUNK_BYTES } from '../../../electron/ipc-contract';
 import { createHandlers, registerIpc } from '../../../electron/ipc-main';
+import { createBackupFolder } from '../../../scripts/lib/backup-folder.mjs';
 
 const printToPDF = vi.fn(async () => Buffer.from('%PDF-1.7 fake'));
 const eventFrom = (url: string | null) =>
   ({ senderFrame: url === null ? null : { url }, sender: { printToPDF } }) satisfies object as unknown as IpcMainInvokeEvent;
 const fromApp = eventFrom('heed://app/index.html');
+const STUDY = '3f1c2b7e-0d6a-4c55-9a43-1f2e3d4c5b6a';
+const BACKUP = '2026-12-02T04-00-00-000Z-demo.zip';
 
 let dir: string;
 beforeEach(() => {
@@ -45,6 +48,13 @@ describe('every handler refuses malformed payloads with { ok: false }', () => {
       { token: crypto.randomUUID(), path: 'a', offset: 1.5 },
       { token: crypto.randomUUID(), path: '', offset: 0 }],
     openFolder: [undefined, {}, { where: '' }, { where: 3 }],
+    saveBackup: [undefined, {}, { studyId: STUDY, fileName: BACKUP, bytes: 'x' },
+      { studyId: '..', fileName: BACKUP, bytes: new Uint8Array(1) },
+      { studyId: STUDY, fileName: `../${BACKUP}`, bytes: new Uint8Array(1) },
+      { studyId: STUDY, fileName: 'notes.txt', bytes: new Uint8Array(1) },
+      { studyId: STUDY, fileName: BACKUP, bytes: new Uint8Array(1), extra: 1 }],
+    listBackups: [undefined, {}, 'all'],
+    readBackup: [undefined, {}, { id: `../${STUDY}/${BACKUP}` }, { id: `${STUDY}/${BACKUP}/x` }, { id: 3 }],
   };
 
   it.each(CHANNEL_KEYS)('%s', async (key) => {
@@ -192,6 +202,30 @@ describe('pickCaseSet and readCaseFile', () => {
     writeFileSync(notZip, 'x');
     electron.showOpenDialog.mockResolvedValue({ canceled: false, filePaths: [notZip] });
     expect(await createHandlers().pickCaseSet(fromApp, { kind: 'zip' })).toMatchObject({ ok: false, error: expect.stringMatching(/is not a \.zip file/) });
+  });
+});
+
+describe('saveBackup, listBackups and readBackup', () => {
+  it('write into the backup folder, list newest first, read back, and keep the last ten of a study', async () => {
+    const root = path.join(dir, 'backups');
+    const handlers = createHandlers(undefined, () => createBackupFolder({ root }));
+    const names = Array.from({ length: 12 }, (_, i) => `2026-12-02T04-00-${String(i).padStart(2, '0')}-000Z-demo.zip`);
+    for (const [i, fileName] of names.entries()) {
+      expect(await handlers.saveBackup(fromApp, { studyId: STUDY, fileName, bytes: new Uint8Array([i]) })).toMatchObject({ ok: true, value: { id: `${STUDY}/${fileName}`, bytes: 1 } });
+    }
+    const listed = await handlers.listBackups(fromApp, null);
+    if (!listed.ok || !listed.value.available) throw new Error('listing failed');
+    expect(listed.value.folder).toBe(root);
+    expect(listed.value.backups.map((b) => b.fileName)).toEqual(names.slice(2).reverse());
+    expect(await handlers.readBackup(fromApp, { id: `${STUDY}/${names[11]}` })).toEqual({ ok: true, value: new Uint8Array([11]) });
+    expect(readdirSync(path.join(root, STUDY))).toHaveLength(10);
+  });
+
+  it('refuses a backup request from another page', async () => {
+    const root = path.join(dir, 'backups');
+    const answer = await createHandlers(undefined, () => createBackupFolder({ root })).saveBackup(eventFrom('https://example.org/'), { studyId: STUDY, fileName: BACKUP, bytes: new Uint8Array(1) });
+    expect(answer).toMatchObject({ ok: false, error: expect.stringMatching(/did not come from Heed's own page/) });
+    expect(existsSync(root)).toBe(false);
   });
 });
 

@@ -15,6 +15,9 @@ const fakeBridge = (content: Uint8Array, chunk: number, overrides: Partial<HeedB
       return ok({ bytes: content.slice(offset, offset + chunk), size: content.length });
     }),
     openFolder: vi.fn(async () => ok(true)),
+    saveBackup: vi.fn(async ({ studyId, fileName }) => ok({ id: `${studyId}/${fileName}`, studyId, fileName, bytes: 3, savedAt: '2026-12-02T04:00:00.000Z' })),
+    listBackups: vi.fn(async () => ok({ available: true as const, folder: '/data/backups', keep: 10, backups: [] })),
+    readBackup: vi.fn(async () => ok(new Uint8Array([1, 2]))),
     ...overrides,
   };
   return { bridge, reads };
@@ -72,5 +75,17 @@ describe('createElectronHost', () => {
     expect(bridge.printToPdf).not.toHaveBeenCalled();
     await expect(host.saveFile('reads.csv', 'x', 'text/csv')).resolves.toEqual({ saved: true, where: '/docs/reads.csv' });
     expect(await host.openFolder?.('/docs/reads.csv')).toBe(true);
+  });
+
+  it('passes backups through the bridge and unwraps the answers and refusals', async () => {
+    const { bridge } = fakeBridge(new Uint8Array(0), 4, {
+      readBackup: vi.fn(async () => ({ ok: false as const, error: 'heed:read-backup: id: not a backup id' })),
+    });
+    const host = createElectronHost(bridge);
+    expect(await host.saveBackup('s1', 'x.zip', new Uint8Array([1, 2, 3]))).toMatchObject({ id: 's1/x.zip', bytes: 3 });
+    expect(bridge.saveBackup).toHaveBeenCalledWith({ studyId: 's1', fileName: 'x.zip', bytes: new Uint8Array([1, 2, 3]) });
+    expect(await host.listBackups()).toEqual({ available: true, folder: '/data/backups', keep: 10, backups: [] });
+    expect(bridge.listBackups).toHaveBeenCalledWith(null);
+    await expect(host.readBackup('nope')).rejects.toThrow(/not a backup id/);
   });
 });

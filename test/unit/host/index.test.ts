@@ -2,12 +2,15 @@ import type { Host } from '../../../src/host/index';
 import { chooseHost } from '../../../src/host/index';
 
 const ok = async () => ({ ok: true as const, value: null });
-const fullBridge = { saveFile: ok, printToPdf: ok, pickCaseSet: ok, readCaseFile: ok, openFolder: ok };
+const fullBridge = { saveFile: ok, printToPdf: ok, pickCaseSet: ok, readCaseFile: ok, openFolder: ok, saveBackup: ok, listBackups: ok, readBackup: ok };
 const browser: Host = {
   kind: 'browser',
   saveFile: async () => ({ saved: false }),
   printToPdf: async () => ({ saved: false }),
   pickCaseSet: async () => null,
+  saveBackup: async () => { throw new Error('no backups'); },
+  listBackups: async () => ({ available: false, reason: 'none' }),
+  readBackup: async () => new Uint8Array(0),
 };
 
 describe('chooseHost', () => {
