@@ -66,6 +66,8 @@ export type StoredSession = {
   startedAt: string;
   completedAt: string | null;
   override: WashoutOverride | null;
+  /** cases the reader was let past because they could not be shown (no index, so no schema version) */
+  skipped?: string[];
 };
 
 export type StoredAnswerPart = AnswerPart;
