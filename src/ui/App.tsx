@@ -8,6 +8,7 @@ import { EditStudyScreen } from './screens/EditStudyScreen';
 import { AuditLogScreen } from './screens/AuditLogScreen';
 import { ReaderReportScreen } from './report/ReaderReportScreen';
 import { actions, useAppState } from './state/app-state';
+import { CoordinatorGate } from './lock/CoordinatorGate';
 
 export const App = () => {
   const { screen, notice } = useAppState();
@@ -19,6 +20,7 @@ export const App = () => {
           <button type="button" className="link" onClick={actions.clearNotice} aria-label="Dismiss notice">×</button>
         </div>
       )}
+      <CoordinatorGate screen={screen}>
       {screen.name === 'home' && <HomeScreen />}
       {screen.name === 'new-study' && <NewStudyScreen />}
       {screen.name === 'study' && <StudyScreen studyId={screen.studyId} />}
@@ -28,6 +30,7 @@ export const App = () => {
       {screen.name === 'edit-study' && <EditStudyScreen studyId={screen.studyId} />}
       {screen.name === 'audit' && <AuditLogScreen studyId={screen.studyId} />}
       {screen.name === 'reader-report' && <ReaderReportScreen studyId={screen.studyId} readerId={screen.readerId} />}
+      </CoordinatorGate>
     </>
   );
 };
