@@ -39,7 +39,12 @@ export type CommittedAnswer = {
   final: AnswerPart | null;
 };
 
-export type SessionPlan = { items: SessionItem[]; findings: string[] };
+/**
+ * The plan of a session. `skipped` lists cases the reader was let past because they could not be
+ * shown (e.g. an image the browser cannot decode): every step of a skipped case counts as done and
+ * has no answer, so the position moves on and the read log simply has no row for it.
+ */
+export type SessionPlan = { items: SessionItem[]; findings: string[]; skipped?: readonly string[] | undefined };
 
 const answerKey = (caseId: string, finding: string): string => `${caseId}\u0000${finding}`;
 
@@ -64,9 +69,11 @@ export type SessionPosition =
  */
 export const currentPosition = (plan: SessionPlan, answers: readonly CommittedAnswer[]): SessionPosition => {
   const byKey = new Map(answers.map((a) => [answerKey(a.caseId, a.finding), a]));
+  const skipped = new Set(plan.skipped ?? []);
   const steps = planSteps(plan);
   const isAnswered = (step: Step): boolean => {
     const item = plan.items[step.itemIndex];
+    if (item && skipped.has(item.caseId)) return true;
     const answer = item ? byKey.get(answerKey(item.caseId, step.finding)) : undefined;
     return step.phase === 'initial' ? answer?.initial != null : answer?.final != null;
   };
@@ -122,4 +129,14 @@ export const applyCommit = (
   }
   const base: CommittedAnswer = previous ?? { caseId: item.caseId, finding: step.finding, initial: null, final: null };
   return step.phase === 'initial' ? { ...base, initial: answer } : { ...base, final: answer };
+};
+
+/**
+ * The skipped list after skipping the current case. Only the case on screen can be skipped, so a
+ * skip can never jump ahead or reach back to a committed case. Throws otherwise.
+ */
+export const applySkip = (position: SessionPosition, caseId: string, skipped: readonly string[] = []): string[] => {
+  if (position.done) throw new Error('the session is complete; nothing can be skipped');
+  if (position.item.caseId !== caseId) throw new Error(`case ${caseId} is not the current case (${position.item.caseId}); only the case on screen can be skipped`);
+  return skipped.includes(caseId) ? [...skipped] : [...skipped, caseId];
 };

@@ -44,3 +44,33 @@ export const periodGate = (
   }
   return { open: true, override };
 };
+
+/**
+ * Slack for small clock corrections (time synchronisation steps of a few seconds). A rule of
+ * thumb with no published source.
+ */
+export const CLOCK_SLACK_MS = 60_000;
+
+/**
+ * Why the wall clock cannot be trusted for the washout, or null: it reads earlier than the latest
+ * time already stored (the clock was set back), so a washout measured with it could be skipped.
+ * Example: latest stored 2026-03-01T10:00Z, now 2026-02-01T10:00Z -> a message naming both.
+ */
+export const clockBackwardsProblem = (now: Date, latestStored: Date | null): string | null => {
+  if (latestStored === null || Number.isNaN(latestStored.getTime())) return null;
+  if (now.getTime() >= latestStored.getTime() - CLOCK_SLACK_MS) return null;
+  return `The computer's clock reads ${when(now)}, earlier than the latest time Heed has stored (${when(latestStored)}). `
+    + 'The clock seems to have been set back, so the washout cannot be checked. Set the clock right, then try again (this refusal is logged).';
+};
+
+/**
+ * When a finished period really ended, from every time stored for it (its start, its answers,
+ * its completion): the latest of them. A completion stamped earlier than the session's own
+ * earlier records means the clock was set back during the period; the washout is then measured
+ * from the latest stored time, and `backwards` says so (so the caller can log it).
+ */
+export const periodEnd = (completedAt: Date, storedTimes: readonly Date[]): { end: Date; backwards: boolean } => {
+  let end = completedAt;
+  for (const t of storedTimes) if (!Number.isNaN(t.getTime()) && t.getTime() > end.getTime()) end = t;
+  return { end, backwards: end.getTime() - completedAt.getTime() > CLOCK_SLACK_MS };
+};

@@ -5,7 +5,7 @@
 import { Dexie, type EntityTable } from 'dexie';
 import { chainExistingRecords } from './chain-upgrade';
 import type {
-  StoredCaseSet, StoredEvent, StoredImage, StoredRead, StoredReader, StoredSession, StoredStudy,
+  StoredCaseSet, StoredEvent, StoredImage, StoredRead, StoredReader, StoredSession, StoredSetting, StoredStudy,
 } from './records';
 
 export const DB_NAME = 'heed';
@@ -34,6 +34,12 @@ export const SCHEMA_V3 = {
   events: '++seq, at, type, studyId, chain',
 } as const;
 
+/** Version 4: workstation settings by key (the coordinator lock); a new empty table, nothing to move. */
+export const SCHEMA_V4 = {
+  ...SCHEMA_V3,
+  settings: 'key',
+} as const;
+
 export type HeedDb = Dexie & {
   caseSets: EntityTable<StoredCaseSet, 'id'>;
   images: Dexie.Table<StoredImage, [string, string]>;
@@ -42,6 +48,7 @@ export type HeedDb = Dexie & {
   sessions: EntityTable<StoredSession, 'id'>;
   reads: EntityTable<StoredRead, 'id'>;
   events: EntityTable<StoredEvent, 'seq'>;
+  settings: EntityTable<StoredSetting, 'key'>;
 };
 
 /** Opens (and upgrades) the database. Strict durability: a committed answer is flushed to disk. */
@@ -61,5 +68,6 @@ export const openHeedDb = (name: string = DB_NAME): HeedDb => {
     });
   });
   db.version(3).stores(SCHEMA_V3).upgrade((tx) => chainExistingRecords(tx));
+  db.version(4).stores(SCHEMA_V4);
   return db;
 };

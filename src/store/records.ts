@@ -1,6 +1,7 @@
 /** The shapes stored in Heed's database. Plain data only, so they survive structured cloning. */
 import type { CaseSetManifest } from '../core/case-set';
 import type { StudyDesign } from '../core/design';
+import type { PassphraseHash } from '../core/passphrase';
 import type { Bit } from '../core/read-log';
 import type { AnswerPart, SessionItem } from '../core/session';
 import type { SuggestionRow } from '../core/suggestions';
@@ -66,6 +67,8 @@ export type StoredSession = {
   startedAt: string;
   completedAt: string | null;
   override: WashoutOverride | null;
+  /** cases the reader was let past because they could not be shown (no index, so no schema version) */
+  skipped?: string[];
 };
 
 export type StoredAnswerPart = AnswerPart;
@@ -105,3 +108,11 @@ export type StoredEvent = {
   /** SHA-256 over prev and this event's content (core/chain.ts) */
   hash: string;
 };
+
+/**
+ * A workstation setting, by key. `coordinator-lock`: the passphrase's salted hash (never the
+ * passphrase) and the idle minutes; `lock-state`: whether the coordinator's side is locked.
+ */
+export type StoredSetting =
+  | { key: 'coordinator-lock'; hash: PassphraseHash; idleMinutes: number; setAt: string }
+  | { key: 'lock-state'; locked: boolean; since: string; why: string };

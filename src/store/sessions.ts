@@ -54,7 +54,7 @@ export const readsOfSession = (db: HeedDb, id: string): Promise<StoredRead[]> =>
 
 /** The session's position, from the answers committed so far. */
 export const sessionPosition = async (db: HeedDb, session: StoredSession, findings: string[]): Promise<SessionPosition> =>
-  currentPosition({ items: session.items, findings }, (await readsOfSession(db, session.id)).map(toAnswer));
+  currentPosition({ items: session.items, findings, skipped: session.skipped }, (await readsOfSession(db, session.id)).map(toAnswer));
 
 export type AnswerCommit = {
   session: StoredSession;
@@ -77,7 +77,8 @@ export const commitAnswerAndRead = (db: HeedDb, input: AnswerCommit): Promise<Co
   db.transaction('rw', db.reads, db.sessions, db.events, async () => {
     const { session } = input;
     const reads = await readsOfSession(db, session.id);
-    const plan = { items: session.items, findings: input.findings };
+    // skipped cases are read from the stored session: the caller's copy may predate a skip
+    const plan = { items: session.items, findings: input.findings, skipped: (await db.sessions.get(session.id))?.skipped };
     const position = currentPosition(plan, reads.map(toAnswer));
     const item = session.items[input.step.itemIndex];
     if (!item) throw new Error(`session ${session.id} has no item ${input.step.itemIndex}`);

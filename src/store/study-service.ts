@@ -8,7 +8,8 @@ import { buildSuggestions } from '../core/planting';
 import { buildSchedule } from '../core/schedule';
 import { sequenceIndexForSlot } from '../core/sequence-assignment';
 import { validateDesign } from '../core/design-validate';
-import { periodGate, type WashoutOverride } from '../core/washout';
+import { clockBackwardsProblem, periodEnd, periodGate, type WashoutOverride } from '../core/washout';
+import { appendEvent, eventsOfStudy } from './events';
 import { getCaseSet } from './case-sets';
 import type { HeedDb } from './db';
 import { InputError } from './input-error';
@@ -40,6 +41,9 @@ export const changeStudyDesign = async (db: HeedDb, study: StoredStudy, design: 
 export const enrolInStudy = (db: HeedDb, study: StoredStudy, input: NewReader): Promise<StoredReader> =>
   enrolReader(db, study.id, input, (slot) => sequenceIndexForSlot(study.design, slot));
 
+const logClockBackwards = (db: HeedDb, studyId: string, detail: Record<string, unknown>) =>
+  db.transaction('rw', db.events, () => appendEvent(db, studyId, 'clock-backwards', detail));
+
 export type PeriodOpening =
   | { open: true; session: StoredSession }
   | { open: false; message: string };
@@ -63,7 +67,18 @@ export const openPeriod = async (
   if (period > 1) {
     const previous = await getSession(db, sessionId(reader.id, period - 1));
     if (!previous?.completedAt) return { open: false, message: `Period ${period - 1} of ${reader.code} is not complete yet.` };
-    previousDone = new Date(previous.completedAt);
+    // measured from the latest time stored for that period: a clock set back while it was read cannot shorten the washout
+    const own = (await eventsOfStudy(db, study.id)).filter((e) => e.detail.sessionId === previous.id).map((e) => new Date(e.at));
+    const ended = periodEnd(new Date(previous.completedAt), [new Date(previous.startedAt), ...own]);
+    if (ended.backwards) await logClockBackwards(db, study.id, { readerId: reader.id, period: period - 1, completedAt: previous.completedAt, latestStored: ended.end.toISOString() });
+    previousDone = ended.end;
+  }
+  // the washout is measured on the wall clock: refuse (and log) a clock set back before stored times
+  const latest = await db.events.orderBy('at').last();
+  const backwards = clockBackwardsProblem(now, latest ? new Date(latest.at) : null);
+  if (backwards) {
+    await logClockBackwards(db, study.id, { readerId: reader.id, period, clock: now.toISOString(), latestStored: latest?.at ?? null });
+    return { open: false, message: `Period ${period} of ${reader.code} was not opened. ${backwards}` };
   }
   const gate = periodGate(now, previousDone, study.design.washoutDays, override);
   if (!gate.open) return { open: false, message: `Period ${period} of ${reader.code} is not open yet. ${gate.message}` };

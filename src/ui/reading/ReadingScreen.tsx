@@ -25,6 +25,7 @@ import { SuggestionPanel } from './SuggestionPanel';
 import { readingKeyAction } from './reading-keys';
 import { shouldShowTruth, truthLines, type TruthLine } from './truth-feedback';
 import { TruthPanel } from './TruthPanel';
+import { UndecodableCase } from './UndecodableCase';
 import { useFullscreenPause } from './use-fullscreen-pause';
 import { useReadingSession } from './use-reading-session';
 
@@ -37,7 +38,9 @@ const logMoment = (...args: Parameters<typeof logSessionMoment>): void => {
 
 export const ReadingScreen = ({ studyId, sessionId, notice }: Props) => {
   const db = useDb();
-  const { loaded, position, reads, error, commit } = useReadingSession(db, studyId, sessionId);
+  const { loaded, position, reads, error, commit, skip } = useReadingSession(db, studyId, sessionId);
+  // an image of the current case that the browser could not decode: the reader is offered a way on
+  const [failed, setFailed] = useState<{ path: string; message: string } | null>(null);
   const setId = loaded?.setId;
   const cache = useMemo(() => (setId ? createImageCache(db, setId) : null), [db, setId]);
   const [loadedImage, setLoadedImage] = useState<{ path: string; image: GrayImage } | null>(null);
@@ -101,13 +104,14 @@ export const ReadingScreen = ({ studyId, sessionId, notice }: Props) => {
   useEffect(() => {
     if (!cache || !imagePath) return;
     let live = true;
-    cache.get(imagePath).then((decoded) => { if (live) setLoadedImage({ path: imagePath, image: decoded }); }, (e: unknown) => actions.notify({ kind: 'error', text: String(e) }));
+    cache.get(imagePath).then((decoded) => { if (live) setLoadedImage({ path: imagePath, image: decoded }); }, (e: unknown) => { if (live) setFailed({ path: imagePath, message: e instanceof Error ? e.message : String(e) }); });
     return () => { live = false; };
   }, [cache, imagePath]);
 
   // Only this case's own pixels are handed to the viewport, never the previous case's.
   const prefetched = imagePath ? cache?.peek(imagePath) : undefined;
   const image = prefetched ?? (loadedImage && caseRecord?.images.includes(loadedImage.path) ? loadedImage.image : null);
+  const undecodable = failed && !image && failed.path === imagePath ? failed : null;
 
   // The clock of a case starts when its pixels are drawn (and not during a break).
   const onDrawn = useCallback(() => {
@@ -165,6 +169,27 @@ export const ReadingScreen = ({ studyId, sessionId, notice }: Props) => {
       setBusy(false);
     }
   }, [busy, paused, breakFor, feedback, problem, call, confidence, rating, ratingScale, scale, askConfidence, commit, item, loaded, caseRecord, db]);
+
+  // A case that cannot be shown is skipped in the store (logged with its reason); its clock never ran.
+  const skipUndecodable = useCallback(async () => {
+    if (busy || !undecodable) return;
+    setBusy(true);
+    try {
+      await skip(`${undecodable.path}: ${undecodable.message}`);
+      clock.current = null;
+      clockCase.current = null;
+      setClockStarted(false);
+      setFailed(null);
+      setCall(null);
+      setConfidence(null);
+      setRating(null);
+      signal('saved');
+    } catch (e) {
+      actions.notify({ kind: 'error', text: `Could not skip the case: ${e instanceof Error ? e.message : String(e)}` });
+    } finally {
+      setBusy(false);
+    }
+  }, [busy, undecodable, skip]);
 
   // Pausing works at any moment of a case: before its image is drawn (the clock then starts
   // paused) and while a save finishes (that answer's time was already taken).
@@ -242,7 +267,7 @@ export const ReadingScreen = ({ studyId, sessionId, notice }: Props) => {
         <span className="reading-reader">Reader {loaded.readerCode} · period {loaded.session.period}</span>
         <span className="reading-caution" title={RESEARCH_CAUTION}>Research and training tool, not a medical device</span>
         <button type="button" onClick={toggleFullscreen}>Full screen <kbd>F</kbd></button>
-        <button type="button" onClick={togglePause} disabled={!clockStarted && !paused}>{paused ? 'Resume' : 'Pause'} <kbd>Esc</kbd></button>
+        <button type="button" onClick={togglePause} disabled={!clockStarted && !paused && !undecodable}>{paused ? 'Resume' : 'Pause'} <kbd>Esc</kbd></button>
       </header>
       <div className="reading-body">
         <div className="reading-image">
@@ -282,6 +307,9 @@ export const ReadingScreen = ({ studyId, sessionId, notice }: Props) => {
           )}
         </aside>
       </div>
+      {undecodable && !paused && !interlude && !feedback && (
+        <UndecodableCase busy={busy} onSkip={() => void skipUndecodable()} onHandBack={() => { setPause(true, 'image cannot be shown'); actions.handOver(studyId); }} />
+      )}
       <ReadingOverlay paused={paused} interlude={interlude} onContinue={paused ? togglePause : endBreak} onLeave={() => actions.handOver(studyId)} />
       {feedback && !paused && <TruthPanel lines={feedback.lines} practice={feedback.practice} onContinue={endFeedback} />}
       {notice?.kind === 'error' && <p className="reading-error" role="alert">{notice.text} <button type="button" onClick={actions.clearNotice}>OK</button></p>}

@@ -12,6 +12,7 @@ import { getCaseSet } from '../../store/case-sets';
 import type { HeedDb } from '../../store/db';
 import type { StoredRead, StoredSession, StoredStudy } from '../../store/records';
 import { commitAnswerAndRead, getSession, logSessionMoment, readsOfSession, sessionPosition } from '../../store/sessions';
+import { skipCase } from '../../store/skip-case';
 import { getStudy } from '../../store/studies';
 import { backUpStudy } from '../services/backup';
 
@@ -81,5 +82,13 @@ export const useReadingSession = (db: HeedDb, studyId: string, sessionId: string
     return { next, reads: updated };
   }, [db, loaded, position]);
 
-  return { loaded, position, reads, error, commit };
+  /** Lets the reader past the case on screen when it cannot be shown (logged with the reason). */
+  const skip = useCallback(async (detail: string): Promise<SessionPosition | null> => {
+    if (!loaded || !position || position.done) return null;
+    const next = await skipCase(db, loaded.session.id, loaded.study.design.findings, position.item.caseId, 'image-undecodable', detail);
+    setPosition(next);
+    return next;
+  }, [db, loaded, position]);
+
+  return { loaded, position, reads, error, commit, skip };
 };

@@ -136,3 +136,20 @@ export const readingPage = (page: Page) => {
     isDone: async () => (await page.getByRole('heading', { name: /Period \d+ complete/ }).count()) > 0,
   };
 };
+
+/** The coordinator lock: setting the passphrase on the start page, and the lock screen. */
+export const lockPage = (page: Page) => ({
+  setPassphrase: async (phrase: string) => {
+    const panel = page.getByRole('region', { name: 'Coordinator lock' });
+    await panel.getByLabel('New passphrase').fill(phrase);
+    await panel.getByLabel('Repeat the passphrase').fill(phrase);
+    await panel.getByRole('button', { name: 'Set the passphrase' }).click();
+    await panel.waitFor({ state: 'detached' });
+  },
+  waitUntilLocked: async () => { await page.getByRole('heading', { name: 'Coordinator lock', level: 1 }).waitFor(); },
+  isLocked: async () => (await page.getByRole('heading', { name: 'Coordinator lock', level: 1 }).count()) > 0,
+  unlock: async (phrase: string) => {
+    await page.getByLabel('Coordinator passphrase').fill(phrase);
+    await page.getByRole('button', { name: 'Unlock' }).click();
+  },
+});
