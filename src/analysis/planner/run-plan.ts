@@ -24,7 +24,7 @@ import { ownLookParameters, relianceParameters } from './model-mapping';
 import { caseMix, planDesign, type PlanDesign } from './plan-design';
 import type { CurvePoint, PlanReport, Rate } from './plan-report';
 import { ALPHA, pairedDiffers, showsAbove } from './power-tests';
-import { aucOutcome, fillRows, preparedOutcomes, prepareStudy, simulatedReaders, type PreparedStudy } from './simulated-study';
+import { fillRows, preparedAucOutcome, preparedOutcomes, prepareStudy, simulatedReaders, type PreparedStudy } from './simulated-study';
 
 export type PlanInput = { assumptions: PlanAssumptions; base: StudyDesign | null; curves?: boolean };
 export type PlanProgress = { done: number; total: number };
@@ -85,7 +85,8 @@ function* aucSet(study: PreparedStudy, p: SimulationParameters, a: PlanAssumptio
   const differences: number[] = [];
   for (let s = 0; s < sims; s++) {
     const seed = deriveSeed(a.seed, `${stream}/${s}`);
-    const { outcome, note } = aucOutcome(fillRows(study, p, seed, 0));
+    fillRows(study, p, seed, 0);
+    const { outcome, note } = preparedAucOutcome(study);
     // a design that is not fully crossed never will be: say why and stop
     if (outcome === null) return { rejections: null, halfWidths, differences, note };
     if (outcome.p < ALPHA) rejected++;

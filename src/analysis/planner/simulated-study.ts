@@ -20,6 +20,9 @@ import { indexSuggestions, suggestionKey } from '../../core/suggestions';
 import { mrmc } from '../mrmc-adapter';
 import { reliance } from '../reliance';
 import type { Proportion } from '../wilson';
+import { aucLayout, layoutOutcome, type AucLayout, type AucOutcome } from './auc-layout';
+
+export type { AucOutcome } from './auc-layout';
 import type { PlanDesign } from './plan-design';
 import { followProbability, readerTruth } from './reader-truth';
 
@@ -41,6 +44,8 @@ export type PreparedStudy = {
   rows: ReadRow[];
   /** per reader (same order as `readers`), its aided rows in reading order */
   aidedRows: ReadRow[][];
+  /** where each row's score goes in the AUC test, or why there is no test */
+  auc: AucLayout;
 };
 
 export const prepareStudy = (plan: PlanDesign, readers: readonly SimulatedReader[]): PreparedStudy => {
@@ -63,7 +68,7 @@ export const prepareStudy = (plan: PlanDesign, readers: readonly SimulatedReader
     if (step.assistance !== 'none') aidedRows[step.reader]?.push(out);
     return out;
   });
-  return { plan, readers, prepared, draws: emptyDraws(rows.length), rows, aidedRows };
+  return { plan, readers, prepared, draws: emptyDraws(rows.length), rows, aidedRows, auc: aucLayout(rows) };
 };
 
 /** One simulated study: refills the study's rows in place and returns them. */
@@ -132,8 +137,6 @@ export const readerOutcomes = (rows: readonly ReadRow[], readers: readonly Simul
 export const preparedOutcomes = (study: PreparedStudy, p: SimulationParameters, seed: number, noticeEffect: number): ReaderOutcome[] =>
   study.readers.map((reader, i) => outcomeOf(reader, study.aidedRows[i] ?? [], p, seed, noticeEffect));
 
-export type AucOutcome = { p: number; difference: number; halfWidth: number } | null;
-
 /** The random-reader Obuchowski-Rockette test of one simulated study (null when the design is not fully crossed). */
 export const aucOutcome = (rows: readonly ReadRow[]): { outcome: AucOutcome; note: string | null } => {
   const m = mrmc(rows);
@@ -141,3 +144,6 @@ export const aucOutcome = (rows: readonly ReadRow[]): { outcome: AucOutcome; not
   const t = m.result.random;
   return { outcome: { p: t.p, difference: t.difference, halfWidth: (t.upper - t.lower) / 2 }, note: null };
 };
+
+/** aucOutcome of the study last filled by fillRows, from its prepared layout. */
+export const preparedAucOutcome = (study: PreparedStudy): { outcome: AucOutcome; note: string | null } => layoutOutcome(study.auc, study.rows);
