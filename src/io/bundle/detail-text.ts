@@ -1,0 +1,40 @@
+/**
+ * The canonical text of an event's detail, made once per detail object and remembered: the
+ * verifier has it already (it checked the line against it), and the merge's content key, the
+ * chain's link hash and the writer's events.jsonl line all reuse it instead of serialising the
+ * detail again (tens of thousands of events per bundle). Event details are never changed in
+ * place (a changed event is a new object), so a remembered text cannot go stale.
+ */
+import { canonicalJson, contentText, sha256Hex, type ChainedEvent, type LinkContent } from '../../core/chain';
+
+const texts = new WeakMap<object, string>();
+
+/** canonicalJson(detail), remembered. */
+export const detailText = (detail: Record<string, unknown>): string => {
+  let text = texts.get(detail);
+  if (text === undefined) {
+    text = canonicalJson(detail);
+    texts.set(detail, text);
+  }
+  return text;
+};
+
+/** Remembers a text already known to be canonicalJson(detail) (the verifier's). */
+export const rememberDetailText = (detail: Record<string, unknown>, text: string): void => {
+  texts.set(detail, text);
+};
+
+/** canonicalJson({ at, detail, type }): an event's content, the text its link hashes after the previous hash. */
+export const contentKeyOf = (c: LinkContent): string => contentText(c.at, c.type, detailText(c.detail));
+
+/** core/chain.ts chainLinks, from remembered texts: the same links. */
+export const chainFromTexts = (prev: string, contents: readonly LinkContent[]): ChainedEvent[] => {
+  const out: ChainedEvent[] = [];
+  let head = prev;
+  for (const c of contents) {
+    const hash = sha256Hex(`${head}\n${contentKeyOf(c)}`);
+    out.push({ at: c.at, type: c.type, detail: c.detail, prev: head, hash });
+    head = hash;
+  }
+  return out;
+};
