@@ -1,9 +1,10 @@
 /**
  * The canonical text of an event's detail, made once per detail object and remembered: the
- * verifier has it already (it checked the line against it), and the merge's content key, the
- * chain's link hash and the writer's events.jsonl line all reuse it instead of serialising the
- * detail again (tens of thousands of events per bundle). Event details are never changed in
- * place (a changed event is a new object), so a remembered text cannot go stale.
+ * merge's content key, the link hashes of a simulated study and the writer's events.jsonl lines
+ * reuse it instead of serialising the detail again (tens of thousands of events per bundle).
+ * The verifier does not remember its texts: measured, the extra weak entries cost its check more
+ * than they save later. Event details are never changed in place (a changed event is a new
+ * object), so a remembered text cannot go stale.
  */
 import { canonicalJson, contentText, sha256Hex, type ChainedEvent, type LinkContent } from '../../core/chain';
 
@@ -17,11 +18,6 @@ export const detailText = (detail: Record<string, unknown>): string => {
     texts.set(detail, text);
   }
   return text;
-};
-
-/** Remembers a text already known to be canonicalJson(detail) (the verifier's). */
-export const rememberDetailText = (detail: Record<string, unknown>, text: string): void => {
-  texts.set(detail, text);
 };
 
 /** canonicalJson({ at, detail, type }): an event's content, the text its link hashes after the previous hash. */

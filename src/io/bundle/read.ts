@@ -8,7 +8,6 @@
  */
 import { unzipSync } from 'fflate';
 import { canonicalJson, contentText, eventLine, genesisHash, sha256Hex, type ChainedEvent } from '../../core/chain';
-import { rememberDetailText } from './detail-text';
 import { parseStudyJson } from '../../core/study-json';
 import type { CaseImage } from '../../core/case-set';
 import type { StudyDesign } from '../../core/design';
@@ -95,7 +94,6 @@ export const checkEventLines = (body: string, studyId: string): ChainCheck => {
     if (ANSWER_EVENTS.has(e.type) && !isRead(e.detail.read)) {
       return { ok: false, fault: { file, line, message: 'an answer event without a valid read' } };
     }
-    rememberDetailText(e.detail, detailText);
     events.push(e);
     prev = e.hash;
   }
