@@ -26,8 +26,16 @@
  * 4. Reading time, log-normal per condition: total ms = median_c * exp(sigma*Z) * speed_j with
  *    speed_j = exp(readerSpeedSd * Z_j); sequential reads split it into an initial part
  *    (`initialShare` of the total) and the rest.
- * Random streams (core/rng.ts): 'sim/reader/<code>', 'sim/case/<case>/<finding>',
- * 'sim/rc/<code>/<case>/<finding>', 'sim/read/<code>/p<period>/<case>/<finding>'.
+ * Random streams (core/rng.ts), each opened once per simulated study:
+ *  - 'sim/reader/<code>': R pair, unaided TR pair, aided TR pair, followWrong, acceptRight, speed
+ *    (planner/reader-truth.ts repeats the first draws in this order);
+ *  - 'sim/case/<case>/<finding>': C pair, unaided TC pair, aided TC pair;
+ *  - 'sim/rc/<code>': the reader's RC pair of every (case, finding) of the case set, in manifest order;
+ *  - 'sim/read/<code>/p<period>': per step in reading order, a Box-Muller pair (error term, time
+ *    term), then one uniform for the reliance choice when a suggestion is shown.
+ * Every stream belongs to one reader or one case, so a reader's answers do not depend on which
+ * other readers are simulated. The schedules come from a prepared design (simulated-design.ts),
+ * built once and reusable across studies: `simulateDraws(prepared, parameters, seed)`.
  * Throws RangeError for a parameter out of range (a Beta sd too large for its mean, a negative
  * variance or median).
  */
@@ -35,9 +43,11 @@ import type { CaseSetManifest } from './case-set';
 import type { Assistance, StudyDesign } from './design';
 import type { Bit } from './read-log';
 import { createRng, type Rng } from './rng';
-import { buildSchedule } from './schedule';
 import type { AnswerPart } from './session';
-import { indexSuggestions, suggestionKey, type SuggestionRow } from './suggestions';
+import { prepareDesign, type PreparedDesign, type PreparedReader, type PreparedStep, type SimulatedReader } from './simulated-design';
+import type { SuggestionRow } from './suggestions';
+
+export type { SimulatedReader } from './simulated-design';
 
 export type BetaSpec = { mean: number; sd: number };
 
@@ -89,8 +99,6 @@ export const DEFAULT_SIMULATION: SimulationParameters = {
   readerSpeedSd: 0.25,
   initialShare: 0.7,
 };
-
-export type SimulatedReader = { code: string; slot: number; sequenceIndex: number };
 
 /** One simulated answer to one step of a reader's period, in reading order. */
 export type SimulatedAnswer = {
@@ -144,38 +152,50 @@ const phi = (x: number): number => {
 
 const clampConfidence = (c: number): number => Math.max(0, Math.min(100, Math.round(c)));
 
+type Terms = { t0: number; t1: number };
+const pair = (rng: Rng, variance: number): Terms => ({ t0: normal(rng) * Math.sqrt(variance), t1: normal(rng) * Math.sqrt(variance) });
+
 const checkParameters = (p: SimulationParameters): void => {
   for (const [name, v] of Object.entries(p.variance)) if (!(v >= 0)) throw new RangeError(`variance.${name} must be >= 0, got ${v}`);
   for (const [name, v] of Object.entries(p.medianMs)) if (!(v > 0)) throw new RangeError(`medianMs.${name} must be > 0, got ${v}`);
 };
 
-type Terms = { t0: number; t1: number };
-const pair = (rng: Rng, variance: number): Terms => ({ t0: normal(rng) * Math.sqrt(variance), t1: normal(rng) * Math.sqrt(variance) });
+/** The answers of one simulated study, one entry per prepared step (flat typed arrays, reusable). */
+export type SimulatedDraws = {
+  ownCall: Uint8Array;
+  ownConfidence: Float64Array;
+  finalCall: Uint8Array;
+  finalConfidence: Float64Array;
+  initialMs: Float64Array;
+  finalMs: Float64Array;
+};
 
-export const simulateAnswers = (
-  design: StudyDesign, manifest: CaseSetManifest, suggestions: readonly SuggestionRow[], readers: readonly SimulatedReader[],
-  parameters: SimulationParameters, seed: number,
-): SimulatedAnswer[] => {
+export const emptyDraws = (steps: number): SimulatedDraws => ({
+  ownCall: new Uint8Array(steps), ownConfidence: new Float64Array(steps), finalCall: new Uint8Array(steps),
+  finalConfidence: new Float64Array(steps), initialMs: new Float64Array(steps), finalMs: new Float64Array(steps),
+});
+
+const TWO_PI = 2 * Math.PI;
+
+/** Simulates one study of a prepared design; `into` (sized for its steps) is reused when given. */
+export const simulateDraws = (prepared: PreparedDesign, parameters: SimulationParameters, seed: number, into?: SimulatedDraws): SimulatedDraws => {
   checkParameters(parameters);
   const p = parameters;
   const v = p.variance;
-  const table = indexSuggestions([...suggestions]);
-  const caseTerms = new Map<string, { c: Terms; tcUnaided: Terms; tcAided: Terms }>();
-  const caseTermsOf = (caseId: string, finding: string) => {
-    const key = suggestionKey(caseId, finding);
-    let found = caseTerms.get(key);
-    if (!found) {
-      const rng = createRng(seed, `sim/case/${caseId}/${finding}`);
-      found = { c: pair(rng, v.case), tcUnaided: pair(rng, v.modalityCase), tcAided: pair(rng, v.modalityCase) };
-      caseTerms.set(key, found);
-    }
-    return found;
-  };
-  const truthOf = new Map(manifest.cases.flatMap((c) => c.findings.map((f) => [suggestionKey(c.caseId, f.finding), f.truth] as const)));
-  const out: SimulatedAnswer[] = [];
-  for (const reader of readers) {
-    const sequence = design.sequences[reader.sequenceIndex];
-    if (!sequence) throw new RangeError(`reader ${reader.code} has no sequence ${reader.sequenceIndex}`);
+  const { steps, cells } = prepared;
+  const out = into !== undefined && into.ownCall.length === steps.length ? into : emptyDraws(steps.length);
+  // case terms, 6 per cell: C (t0, t1), unaided TC (t0, t1), aided TC (t0, t1)
+  const caseTerms = new Float64Array(cells.length * 6);
+  const sdCase = Math.sqrt(v.case);
+  const sdModalityCase = Math.sqrt(v.modalityCase);
+  cells.forEach((cell, i) => {
+    const rng = createRng(seed, `sim/case/${cell.caseId}/${cell.finding}`);
+    for (let k = 0; k < 6; k++) caseTerms[i * 6 + k] = normal(rng) * (k < 2 ? sdCase : sdModalityCase);
+  });
+  const rc = new Float64Array(cells.length * 2);
+  const sdReaderCase = Math.sqrt(v.readerCase);
+  const sdError = Math.sqrt(v.error);
+  for (const { reader, periods } of prepared.readers) {
     const rr = createRng(seed, `sim/reader/${reader.code}`);
     const r = pair(rr, v.reader);
     const trUnaided = pair(rr, v.modalityReader);
@@ -183,48 +203,77 @@ export const simulateAnswers = (
     const followWrong = betaDraw(rr, p.followWrong);
     const acceptRight = betaDraw(rr, p.acceptRight);
     const speed = Math.exp(p.readerSpeedSd * normal(rr));
-    const schedule = buildSchedule(design, manifest, { id: reader.code, index: reader.slot, sequence });
-    for (const period of schedule.periods) {
-      period.items.forEach((item, itemIndex) => {
-        for (const finding of design.findings) {
-          const key = suggestionKey(item.caseId, finding);
-          const truth = truthOf.get(key) ?? 0;
-          const aided = item.assistance !== 'none';
-          const ct = caseTermsOf(item.caseId, finding);
-          const rc = pair(createRng(seed, `sim/rc/${reader.code}/${item.caseId}/${finding}`), v.readerCase);
-          const rng = createRng(seed, `sim/read/${reader.code}/p${period.period}/${item.caseId}/${finding}`);
-          const pick = (t: Terms): number => (truth === 1 ? t.t1 : t.t0);
-          const mu = p.mu + (aided ? p.aidedShift : 0);
-          const x = mu * truth + pick(r) + pick(ct.c) + pick(rc) + pick(aided ? trAided : trUnaided) + pick(aided ? ct.tcAided : ct.tcUnaided)
-            + normal(rng) * Math.sqrt(v.error);
-          const ownCall: Bit = x > mu / 2 ? 1 : 0;
-          const ownConfidence = clampConfidence(100 * Math.abs(2 * phi(x - mu / 2) - 1));
-          const totalMs = Math.max(1, Math.round(p.medianMs[item.assistance] * Math.exp(p.timeSigma * normal(rng)) * speed));
-          const confidence = (c: number): number | null => (design.askConfidence ? c : null);
-          const shown = aided ? table.get(key) : undefined;
-          let finalCall = ownCall;
-          let finalConfidence = ownConfidence;
-          if (shown) {
-            const u = rng.float();
-            if (shown.call === ownCall) {
-              if (u < p.changeWhenAgreeing) { finalCall = ownCall === 1 ? 0 : 1; finalConfidence = p.changedConfidence; }
-              else finalConfidence = clampConfidence(ownConfidence + (100 - ownConfidence) * p.agreeBoost);
-            } else {
-              const follow = ownCall === truth ? followWrong : acceptRight;
-              if (u < follow) { finalCall = shown.call; finalConfidence = p.changedConfidence; }
-              else finalConfidence = clampConfidence(ownConfidence * p.disagreeKeep);
-            }
+    const rcRng = createRng(seed, `sim/rc/${reader.code}`);
+    for (let i = 0; i < cells.length; i++) {
+      const radius = Math.sqrt(-2 * Math.log(1 - rcRng.float())) * sdReaderCase;
+      const angle = TWO_PI * rcRng.float();
+      rc[2 * i] = radius * Math.cos(angle);
+      rc[2 * i + 1] = radius * Math.sin(angle);
+    }
+    for (const period of periods) {
+      const rng = createRng(seed, `sim/read/${reader.code}/p${period.period}`);
+      for (let s = period.from; s < period.to; s++) {
+        const step = steps[s] as PreparedStep;
+        const truth = step.truth;
+        const aided = step.assistance !== 'none';
+        const radius = Math.sqrt(-2 * Math.log(1 - rng.float()));
+        const angle = TWO_PI * rng.float();
+        const base = step.cell * 6 + truth;
+        const mu = p.mu + (aided ? p.aidedShift : 0);
+        const x = mu * truth + (truth === 1 ? r.t1 : r.t0) + (caseTerms[base] as number) + (rc[2 * step.cell + truth] as number)
+          + (truth === 1 ? (aided ? trAided : trUnaided).t1 : (aided ? trAided : trUnaided).t0) + (caseTerms[base + (aided ? 4 : 2)] as number)
+          + radius * Math.cos(angle) * sdError;
+        const ownCall: Bit = x > mu / 2 ? 1 : 0;
+        const ownConfidence = clampConfidence(100 * Math.abs(2 * phi(x - mu / 2) - 1));
+        const totalMs = Math.max(1, Math.round(p.medianMs[step.assistance] * Math.exp(p.timeSigma * radius * Math.sin(angle)) * speed));
+        const shown = step.shown;
+        let finalCall = ownCall;
+        let finalConfidence = ownConfidence;
+        if (shown) {
+          const u = rng.float();
+          if (shown.call === ownCall) {
+            if (u < p.changeWhenAgreeing) { finalCall = ownCall === 1 ? 0 : 1; finalConfidence = p.changedConfidence; }
+            else finalConfidence = clampConfidence(ownConfidence + (100 - ownConfidence) * p.agreeBoost);
+          } else {
+            const follow = ownCall === truth ? followWrong : acceptRight;
+            if (u < follow) { finalCall = shown.call; finalConfidence = p.changedConfidence; }
+            else finalConfidence = clampConfidence(ownConfidence * p.disagreeKeep);
           }
-          const sequential = item.assistance === 'sequential';
-          const initialMs = Math.max(1, Math.round(totalMs * p.initialShare));
-          out.push({
-            readerCode: reader.code, period: period.period, itemIndex, caseId: item.caseId, finding, assistance: item.assistance,
-            initial: sequential ? { call: ownCall, confidence: confidence(ownConfidence), ms: initialMs } : null,
-            final: { call: finalCall, confidence: confidence(finalConfidence), ms: Math.max(totalMs, sequential ? initialMs + 1 : 1) },
-          });
         }
-      });
+        const sequential = step.assistance === 'sequential';
+        const initialMs = Math.max(1, Math.round(totalMs * p.initialShare));
+        out.ownCall[s] = ownCall;
+        out.ownConfidence[s] = ownConfidence;
+        out.finalCall[s] = finalCall;
+        out.finalConfidence[s] = finalConfidence;
+        out.initialMs[s] = initialMs;
+        out.finalMs[s] = Math.max(totalMs, sequential ? initialMs + 1 : 1);
+      }
     }
   }
   return out;
+};
+
+/** The answers as records, in reading order (reader, period, item, finding). */
+export const answersOf = (prepared: PreparedDesign, draws: SimulatedDraws): SimulatedAnswer[] => {
+  const ask = prepared.design.askConfidence;
+  return prepared.steps.map((step, s) => {
+    const ownCall = draws.ownCall[s] as Bit;
+    const sequential = step.assistance === 'sequential';
+    return {
+      readerCode: (prepared.readers[step.reader] as PreparedReader).reader.code, period: step.period, itemIndex: step.itemIndex,
+      caseId: step.caseId, finding: step.finding, assistance: step.assistance,
+      initial: sequential ? { call: ownCall, confidence: ask ? (draws.ownConfidence[s] as number) : null, ms: draws.initialMs[s] as number } : null,
+      final: { call: draws.finalCall[s] as Bit, confidence: ask ? (draws.finalConfidence[s] as number) : null, ms: draws.finalMs[s] as number },
+    };
+  });
+};
+
+export const simulateAnswers = (
+  design: StudyDesign, manifest: CaseSetManifest, suggestions: readonly SuggestionRow[], readers: readonly SimulatedReader[],
+  parameters: SimulationParameters, seed: number,
+): SimulatedAnswer[] => {
+  checkParameters(parameters);
+  const prepared = prepareDesign(design, manifest, suggestions, readers);
+  return answersOf(prepared, simulateDraws(prepared, parameters, seed));
 };

@@ -17,14 +17,14 @@
 import type { StudyDesign } from '../../core/design';
 import { RESEARCH_CAUTION } from '../../core/research-caution';
 import { deriveSeed } from '../../core/rng';
-import type { SimulatedReader, SimulationParameters } from '../../core/simulated-readers';
+import type { SimulationParameters } from '../../core/simulated-readers';
 import { wilsonHalfWidth } from '../wilson';
 import { checkAssumptions, PRESETS, type PlanAssumptions } from './assumptions';
 import { ownLookParameters, relianceParameters } from './model-mapping';
 import { caseMix, planDesign, type PlanDesign } from './plan-design';
 import type { CurvePoint, PlanReport, Rate } from './plan-report';
 import { ALPHA, pairedDiffers, showsAbove } from './power-tests';
-import { aucOutcome, readerOutcomes, simulatedReaders, simulatedRows } from './simulated-study';
+import { fillRows, preparedAucOutcome, preparedOutcomes, prepareStudy, simulatedReaders, type PreparedStudy } from './simulated-study';
 
 export type PlanInput = { assumptions: PlanAssumptions; base: StudyDesign | null; curves?: boolean };
 export type PlanProgress = { done: number; total: number };
@@ -49,14 +49,14 @@ const mean = (xs: number[]): number | null => (xs.length === 0 ? null : xs.reduc
 
 type RelianceTally = { power: Rate; coverage: Rate; halfWidths: number[]; trueRates: number[]; notice: Rate; wrongPerReader: number };
 
-function* relianceSet(plan: PlanDesign, readers: SimulatedReader[], p: SimulationParameters, a: PlanAssumptions, sims: number, stream: string): Generator<void, RelianceTally> {
+function* relianceSet(study: PreparedStudy, p: SimulationParameters, a: PlanAssumptions, sims: number, stream: string): Generator<void, RelianceTally> {
   let power = 0, covered = 0, intervals = 0, notice = 0, wrongReads = 0;
   const halfWidths: number[] = [];
   const trueRates: number[] = [];
   for (let s = 0; s < sims; s++) {
     const seed = deriveSeed(a.seed, `${stream}/${s}`);
-    const rows = simulatedRows(plan, readers, p, seed, a.noticeEffect);
-    const outcomes = readerOutcomes(rows, readers, p, seed, a.noticeEffect);
+    fillRows(study, p, seed, a.noticeEffect);
+    const outcomes = preparedOutcomes(study, p, seed, a.noticeEffect);
     const rates: number[] = [];
     const differences: number[] = [];
     for (const o of outcomes) {
@@ -74,18 +74,19 @@ function* relianceSet(plan: PlanDesign, readers: SimulatedReader[], p: Simulatio
     if (pairedDiffers(differences)) notice++;
     yield;
   }
-  return { power: rate(power, sims), coverage: rate(covered, intervals), halfWidths, trueRates, notice: rate(notice, sims), wrongPerReader: wrongReads / (sims * readers.length) };
+  return { power: rate(power, sims), coverage: rate(covered, intervals), halfWidths, trueRates, notice: rate(notice, sims), wrongPerReader: wrongReads / (sims * study.readers.length) };
 }
 
 type AucTally = { rejections: Rate | null; halfWidths: number[]; differences: number[]; note: string | null };
 
-function* aucSet(plan: PlanDesign, readers: SimulatedReader[], p: SimulationParameters, a: PlanAssumptions, sims: number, stream: string): Generator<void, AucTally> {
+function* aucSet(study: PreparedStudy, p: SimulationParameters, a: PlanAssumptions, sims: number, stream: string): Generator<void, AucTally> {
   let rejected = 0;
   const halfWidths: number[] = [];
   const differences: number[] = [];
   for (let s = 0; s < sims; s++) {
     const seed = deriveSeed(a.seed, `${stream}/${s}`);
-    const { outcome, note } = aucOutcome(simulatedRows(plan, readers, p, seed, 0));
+    fillRows(study, p, seed, 0);
+    const { outcome, note } = preparedAucOutcome(study);
     // a design that is not fully crossed never will be: say why and stop
     if (outcome === null) return { rejections: null, halfWidths, differences, note };
     if (outcome.p < ALPHA) rejected++;
@@ -102,7 +103,8 @@ export function* planSteps(input: PlanInput): Generator<PlanProgress, PlanReport
   const a = input.assumptions;
   checkAssumptions(a);
   const plan = planDesign(a, input.base);
-  const readers = simulatedReaders(plan, a.readers);
+  // one prepared study for the three sets: its rows are refilled by each simulated study
+  const study = prepareStudy(plan, simulatedReaders(plan, a.readers));
   const full = relianceParameters(a);
   const ownLook = ownLookParameters(a);
   const nullLook = ownLookParameters(a, 0);
@@ -117,9 +119,9 @@ export function* planSteps(input: PlanInput): Generator<PlanProgress, PlanReport
   let done = 0;
   const progress = (): PlanProgress => ({ done: ++done, total });
 
-  const rel = yield* counted(relianceSet(plan, readers, full, a, a.sims, 'plan/reliance'), progress);
-  const power = yield* counted(aucSet(plan, readers, ownLook, a, a.sims, 'plan/auc'), progress);
-  const nul = yield* counted(aucSet(plan, readers, nullLook, a, a.sims, 'plan/null'), progress);
+  const rel = yield* counted(relianceSet(study, full, a, a.sims, 'plan/reliance'), progress);
+  const power = yield* counted(aucSet(study, ownLook, a, a.sims, 'plan/auc'), progress);
+  const nul = yield* counted(aucSet(study, nullLook, a, a.sims, 'plan/null'), progress);
   done = 3 * a.sims;
 
   const curvePoints: CurvePoint[] = [];
@@ -134,9 +136,9 @@ export function* planSteps(input: PlanInput): Generator<PlanProgress, PlanReport
       done += curveSims * (pt.vary === 'wrong' ? 1 : 2);
       continue;
     }
-    const ptReaders = simulatedReaders(ptPlan, pt.assumptions.readers);
-    const r = yield* counted(relianceSet(ptPlan, ptReaders, full, pt.assumptions, curveSims, `plan/curve/${pt.vary}/reliance`), progress);
-    const auc = pt.vary === 'wrong' ? null : yield* counted(aucSet(ptPlan, ptReaders, ownLook, pt.assumptions, curveSims, `plan/curve/${pt.vary}/auc`), progress);
+    const ptStudy = prepareStudy(ptPlan, simulatedReaders(ptPlan, pt.assumptions.readers));
+    const r = yield* counted(relianceSet(ptStudy, full, pt.assumptions, curveSims, `plan/curve/${pt.vary}/reliance`), progress);
+    const auc = pt.vary === 'wrong' ? null : yield* counted(aucSet(ptStudy, ownLook, pt.assumptions, curveSims, `plan/curve/${pt.vary}/auc`), progress);
     curvePoints.push({
       vary: pt.vary, readers: pt.assumptions.readers, cases: pt.assumptions.cases, wrong_reads_per_reader: r.wrongPerReader,
       overreliance_power: r.power, auc_power: auc?.rejections ?? null, median_halfwidth: median(r.halfWidths),
@@ -226,6 +228,6 @@ const drain = <T>(set: Generator<void, T>): T => {
 export const aucRejections = (a: PlanAssumptions, sims: number, difference: number, base: StudyDesign | null = null): { rejections: Rate | null; meanDifference: number | null; note: string | null } => {
   checkAssumptions({ ...a, aucDifference: difference });
   const plan = planDesign(a, base);
-  const t = drain(aucSet(plan, simulatedReaders(plan, a.readers), ownLookParameters(a, difference), a, sims, difference === 0 ? 'plan/null' : 'plan/auc'));
+  const t = drain(aucSet(prepareStudy(plan, simulatedReaders(plan, a.readers)), ownLookParameters(a, difference), a, sims, difference === 0 ? 'plan/null' : 'plan/auc'));
   return { rejections: t.rejections, meanDifference: mean(t.differences), note: t.note };
 };

@@ -11,6 +11,7 @@
  * its inputs. Throws BundleMergeError with one plain message.
  */
 import { canonicalJson, genesisHash, sha256Hex, type ChainedEvent } from '../../core/chain';
+import { contentKeyOf } from './detail-text';
 import { ANSWER_EVENTS, type SnapshotRead, type SnapshotReader, type SnapshotSession, type StudySnapshot } from './snapshot';
 import { designFingerprint } from './texts';
 
@@ -24,7 +25,6 @@ export class BundleMergeError extends Error {
 }
 
 const byText = (a: string, b: string): number => (a < b ? -1 : a > b ? 1 : 0);
-const contentKey = (e: ChainedEvent): string => canonicalJson({ at: e.at, type: e.type, detail: e.detail });
 
 const answerText = (read: SnapshotRead, type: string): string => {
   const part = type === 'initial-committed' ? read.initial : read.final;
@@ -100,7 +100,7 @@ export const mergeSnapshots = (inputs: readonly MergeInput[]): StudySnapshot => 
   for (const { label, snapshot } of inputs) {
     const local = new Map<string, number>();
     snapshot.events.forEach((event, index) => {
-      const key = contentKey(event);
+      const key = contentKeyOf(event);
       local.set(key, (local.get(key) ?? 0) + 1);
       if (!counts.has(key)) counts.set(key, { event, n: 0 });
       if (!ANSWER_EVENTS.has(event.type)) return;

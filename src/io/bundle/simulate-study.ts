@@ -9,7 +9,8 @@
  * Throws RangeError for a design the case set cannot carry, with the design's problems.
  */
 import type { CaseImage, CaseSetManifest } from '../../core/case-set';
-import { canonicalJson, chainLinks, genesisHash, type LinkContent } from '../../core/chain';
+import { genesisHash, type LinkContent } from '../../core/chain';
+import { chainFromTexts, contentKeyOf } from './detail-text';
 import { defaultDesign, type StudyDesign } from '../../core/design';
 import { parseDesign } from '../../core/design-schema';
 import { validateDesign } from '../../core/design-validate';
@@ -139,13 +140,13 @@ export const simulateStudy = (caseSet: SimulationCaseSet, options: SimulationOpt
     images: caseSet.images,
     readers,
     sessions: sessions.sort((a, b) => (a.id < b.id ? -1 : a.id > b.id ? 1 : 0)),
-    events: chainLinks(genesisHash(studyId), orderByTime(contents)),
+    events: chainFromTexts(genesisHash(studyId), orderByTime(contents)),
   };
 };
 
 /** Time order, ties by content: the order a merge of workstation copies gives (io/bundle/merge.ts). */
 const orderByTime = (contents: LinkContent[]): LinkContent[] =>
-  contents.map((c) => ({ c, key: canonicalJson(c) })).sort((a, b) => (a.c.at < b.c.at ? -1 : a.c.at > b.c.at ? 1 : a.key < b.key ? -1 : a.key > b.key ? 1 : 0)).map((x) => x.c);
+  contents.map((c) => ({ c, key: contentKeyOf(c) })).sort((a, b) => (a.c.at < b.c.at ? -1 : a.c.at > b.c.at ? 1 : a.key < b.key ? -1 : a.key > b.key ? 1 : 0)).map((x) => x.c);
 
 /**
  * The copies of K workstations: every copy holds the study and all enrolments (made by the
@@ -161,7 +162,7 @@ export const splitSnapshot = (snapshot: StudySnapshot, k: number): StudySnapshot
     return {
       ...snapshot,
       sessions: snapshot.sessions.filter((s) => sessionStation.get(s.id) === w),
-      events: chainLinks(genesisHash(snapshot.study.id), contents),
+      events: chainFromTexts(genesisHash(snapshot.study.id), contents),
     };
   });
 };

@@ -5,6 +5,7 @@
  */
 import Papa from 'papaparse';
 import { canonicalJson, eventLine, sha256Hex, type ChainedEvent } from '../../core/chain';
+import { detailText } from './detail-text';
 import { joinReadRows } from '../../core/read-rows';
 import { plantedList } from '../../core/planting';
 import { studyJson } from '../../core/study-json';
@@ -30,7 +31,7 @@ export const designFingerprint = (snapshot: Pick<StudySnapshot, 'study' | 'caseS
 
 export const eventsJsonl = (events: readonly ChainedEvent[]): string => {
   let out = '';
-  for (const e of events) out += `${eventLine(e)}\n`;
+  for (const e of events) out += `${eventLine(e, detailText(e.detail))}\n`;
   return out;
 };
 
