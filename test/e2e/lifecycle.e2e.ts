@@ -105,7 +105,7 @@ describe('a study’s whole life', () => {
     expect(await page.locator('.field-problem').count()).toBe(0);
     await page.getByRole('button', { name: 'Save design' }).click();
     await page.getByRole('heading', { name: 'Lifecycle pilot', level: 1 }).waitFor();
-    expect(await page.getByRole('region', { name: 'Design' }).textContent()).toContain('0 days between periods');
+    expect(await page.getByRole('region', { name: 'Design', exact: true }).textContent()).toContain('0 days between periods');
 
     // readers: a mistyped code corrected, a duplicate refused, one deleted before starting
     for (const code of ['R0l', 'R02', 'R03']) { await study.enrol(code); await study.enrolled(code); }
