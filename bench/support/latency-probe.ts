@@ -1,7 +1,7 @@
 /**
  * In-page recorder for the reading benchmark. Everything is stamped in page time
- * (performance.now): the Enter keydown (a capturing listener, so it runs before the app's
- * own handler), the app's `heed:saved` and `heed:case-painted` signals (their detail.at), and
+ * (performance.now): the Enter keydown that commits an answer (a capturing listener, so it runs
+ * before the app's own handler; an Enter that continues from a cover such as a break is not one), the app's `heed:saved` and `heed:case-painted` signals (their detail.at), and
  * the frame after each paint (one more requestAnimationFrame from inside the paint signal,
  * which itself fires in the frame after the pixels were drawn).
  */
@@ -12,15 +12,17 @@ const KEY = '__heedLatencyProbe';
 
 // A string, so no transpiler helper leaks into the page.
 const INSTALL = `(() => {
-  const r = { enters: [], saved: [], painted: [], frameAfter: [] };
-  window.addEventListener('keydown', (e) => { if (e.key === 'Enter') r.enters.push(performance.now()); }, { capture: true });
-  window.addEventListener('heed:saved', (e) => { r.saved.push(e.detail.at); });
+  const key = ${JSON.stringify(KEY)};
+  Reflect.set(window, key, { enters: [], saved: [], painted: [], frameAfter: [] });
+  const r = () => Reflect.get(window, key);
+  window.addEventListener('keydown', (e) => { if (e.key === 'Enter' && document.querySelector('[role=dialog]') === null) r().enters.push(performance.now()); }, { capture: true });
+  window.addEventListener('heed:saved', (e) => { r().saved.push(e.detail.at); });
   window.addEventListener('heed:case-painted', (e) => {
-    const index = r.painted.length;
-    r.painted.push({ at: e.detail.at, caseId: String(e.detail.caseId) });
-    requestAnimationFrame(() => { r.frameAfter.push({ index, at: performance.now() }); });
+    const record = r();
+    const index = record.painted.length;
+    record.painted.push({ at: e.detail.at, caseId: String(e.detail.caseId) });
+    requestAnimationFrame(() => { record.frameAfter.push({ index, at: performance.now() }); });
   });
-  Reflect.set(window, ${JSON.stringify(KEY)}, r);
 })()`;
 
 const recordSchema = z.object({
@@ -37,9 +39,22 @@ export type ReadTiming = { commitMs: number; paintedMs: number; frameAfterMs: nu
 
 export const installLatencyProbe = async (page: Page): Promise<void> => { await page.evaluate(INSTALL); };
 
+/** Starts a new record (the listeners stay): what comes next is measured on its own. */
+export const resetLatencyRecord = async (page: Page): Promise<void> => {
+  await collectLatencyRecord(page);
+  await page.evaluate((key) => { Reflect.set(window, key, { enters: [], saved: [], painted: [], frameAfter: [] }); }, KEY);
+};
+
 /** Waits until the frame after every paint so far has run, then reads the record. */
 export const collectLatencyRecord = async (page: Page): Promise<LatencyRecord> => {
-  await page.waitForFunction(`(() => { const r = window[${JSON.stringify(KEY)}]; return r.frameAfter.length === r.painted.length; })()`);
+  // a function, not a string: the app's Content Security Policy forbids evaluating strings
+  await page.waitForFunction((key) => {
+    const r: unknown = Reflect.get(window, key);
+    if (typeof r !== 'object' || r === null) return false;
+    const frames: unknown = Reflect.get(r, 'frameAfter');
+    const painted: unknown = Reflect.get(r, 'painted');
+    return Array.isArray(frames) && Array.isArray(painted) && frames.length === painted.length;
+  }, KEY);
   return recordSchema.parse(await page.evaluate((key) => Reflect.get(window, key), KEY));
 };
 

@@ -87,6 +87,52 @@ export const currentPosition = (plan: SessionPlan, answers: readonly CommittedAn
   return { done: false, step, stepIndex: firstOpen, totalSteps: steps.length, item, caseNumber: step.itemIndex + 1, caseCount };
 };
 
+/** The phases of one item's steps: sequential reads ask an initial then a final call per finding. */
+const phasesOf = (item: SessionItem): readonly Phase[] => (item.assistance === 'sequential' ? ['initial', 'final'] : ['final']);
+
+/** How many steps the plan has, counted without building them. */
+export const stepCount = (plan: SessionPlan): number => {
+  let total = 0;
+  for (const item of plan.items) total += phasesOf(item).length * plan.findings.length;
+  return total;
+};
+
+/** The index of a step in the plan (as `planSteps` orders them), or -1 when it is not one of its steps. */
+export const stepIndexOf = (plan: SessionPlan, step: Step): number => {
+  const item = plan.items[step.itemIndex];
+  const findingIndex = plan.findings.indexOf(step.finding);
+  if (!item || findingIndex < 0 || !phasesOf(item).includes(step.phase)) return -1;
+  let index = 0;
+  for (let i = 0; i < step.itemIndex; i++) index += phasesOf(plan.items[i] as SessionItem).length * plan.findings.length;
+  return index + (step.phase === 'final' && item.assistance === 'sequential' ? plan.findings.length : 0) + findingIndex;
+};
+
+/**
+ * The position at step `index` of the plan (done at the end), for a caller that knows the steps
+ * before it are the ones committed: the same position `currentPosition` gives for those answers,
+ * without walking them. The step before it is `positionAt(plan, index - 1)`.
+ */
+export const positionAt = (plan: SessionPlan, index: number): SessionPosition => {
+  const totalSteps = stepCount(plan);
+  const caseCount = plan.items.length;
+  if (index >= totalSteps) return { done: true, totalSteps, caseCount };
+  if (index < 0 || !Number.isInteger(index)) throw new RangeError(`no step ${index} in a plan of ${totalSteps}`);
+  let start = 0;
+  for (let itemIndex = 0; itemIndex < plan.items.length; itemIndex++) {
+    const item = plan.items[itemIndex] as SessionItem;
+    const phases = phasesOf(item);
+    const size = phases.length * plan.findings.length;
+    if (index < start + size) {
+      const within = index - start;
+      const phase = phases[Math.floor(within / plan.findings.length)] as Phase;
+      const finding = plan.findings[within % plan.findings.length] as string;
+      return { done: false, step: { itemIndex, finding, phase }, stepIndex: index, totalSteps, item, caseNumber: itemIndex + 1, caseCount };
+    }
+    start += size;
+  }
+  return { done: true, totalSteps, caseCount };
+};
+
 /** Whether the suggestion is on screen at this step: concurrent always, sequential only after the initial call. */
 export const suggestionVisible = (assistance: Assistance, phase: Phase): boolean =>
   assistance === 'concurrent' || (assistance === 'sequential' && phase === 'final');

@@ -21,10 +21,10 @@ const MEANING: Record<ReadLogColumn, string> = {
   caution_shown: '0/1: caution notice shown for this read',
   initial_call: '0/1: sequential only, the call before the suggestion was revealed',
   initial_confidence: '0..100: sequential only, confidence in the initial call',
-  initial_ms: 'number: sequential only, ms from the case shown to the initial call committed (paused time excluded)',
+  initial_ms: 'number: sequential only, ms from the animation frame that first showed the case image to the key press (its event time; or the click) that committed the initial call (monotonic clock, paused time excluded)',
   final_call: "0/1: the reader's final call",
   final_confidence: '0..100: certainty in the final call (0 guessing, 100 certain); empty when the study asked none',
-  total_ms: 'number: ms from the case shown to the final call committed (monotonic clock, paused time excluded)',
+  total_ms: 'number: ms from the animation frame that first showed the case image to the key press (its event time; or the click) that committed the final call (monotonic clock, paused time excluded; the durable save after it is not counted)',
   shown_at: 'ISO 8601 UTC: when the case was shown',
 };
 

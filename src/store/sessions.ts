@@ -4,7 +4,7 @@
  * be committed twice or out of order, even from two windows.
  */
 import type { Bit } from '../core/read-log';
-import { applyCommit, currentPosition, type CommittedAnswer, type Phase, type SessionItem, type SessionPosition } from '../core/session';
+import { applyCommit, currentPosition, positionAt, stepIndexOf, type CommittedAnswer, type Phase, type SessionItem, type SessionPosition } from '../core/session';
 import type { HeedDb } from './db';
 import { appendEvent } from './events';
 import type { StoredRead, StoredSession, StoredStudy, WashoutOverride } from './records';
@@ -72,21 +72,42 @@ export type AnswerCommit = {
 
 export type Committed = { position: SessionPosition; read: StoredRead };
 
-/** Commits one answer durably; resolves once the transaction is complete, with the stored read and the next position. */
+const answered = (read: StoredRead | undefined, phase: Phase): boolean =>
+  read !== undefined && (phase === 'initial' ? read.initial != null : read.final != null);
+
+/**
+ * Commits one answer durably; resolves once the transaction is complete, with the stored read and
+ * the next position. The step check costs two reads by key, not a read of the whole session:
+ * answers are only ever committed at the current step, so the committed steps are a prefix of the
+ * plan, and a step is the current one exactly when it is unanswered and the step before it is
+ * answered. Both are read inside the transaction, so a stale or repeated commit (a second window,
+ * a double Enter) is refused there, with nothing written.
+ */
 export const commitAnswerAndRead = (db: HeedDb, input: AnswerCommit): Promise<Committed> =>
   db.transaction('rw', db.reads, db.sessions, db.events, async () => {
     const { session } = input;
-    const reads = await readsOfSession(db, session.id);
     // skipped cases are read from the stored session: the caller's copy may predate a skip
-    const plan = { items: session.items, findings: input.findings, skipped: (await db.sessions.get(session.id))?.skipped };
-    const position = currentPosition(plan, reads.map(toAnswer));
+    const stored = await db.sessions.get(session.id);
+    const skipped = stored?.skipped;
+    const plan = { items: session.items, findings: input.findings, skipped };
+    const stepIndex = stepIndexOf(plan, input.step);
     const item = session.items[input.step.itemIndex];
-    if (!item) throw new Error(`session ${session.id} has no item ${input.step.itemIndex}`);
+    if (!item || stepIndex < 0) throw new Error(`session ${session.id} has no step ${input.step.itemIndex}/${input.step.finding}/${input.step.phase}`);
     const id = readId(session.id, item.caseId, input.step.finding);
-    const previous = reads.find((r) => r.id === id) ?? null;
+    const previous = await db.reads.get(id);
+    const before = stepIndex > 0 ? positionAt(plan, stepIndex - 1) : null;
+    const beforeId = before && !before.done ? readId(session.id, before.item.caseId, before.step.finding) : null;
+    const beforeRead = beforeId === null ? undefined : beforeId === id ? previous : await db.reads.get(beforeId);
+    // the quick check: this step unanswered and the one before it answered; a skipped case, or a
+    // step after one, takes the full walk (which knows the skips)
+    const current = !(skipped ?? []).includes(item.caseId) && !answered(previous, input.step.phase)
+      && (before === null || before.done || answered(beforeRead, before.step.phase));
+    // a refusal names the step that is current, which only then needs the session's answers
+    const position = current ? positionAt(plan, stepIndex) : await sessionPosition(db, stored ?? session, input.findings);
     const answer = applyCommit(position, input.step, previous ? toAnswer(previous) : null, {
       call: input.call, confidence: input.confidence, ms: input.ms, ...(input.rating == null ? {} : { rating: input.rating }),
     });
+    if (!current) throw new Error(`answer for case ${item.caseId} (${input.step.finding}, ${input.step.phase}) is not for the current step`);
     const read: StoredRead = {
       id, sessionId: session.id, studyId: session.studyId, readerId: session.readerId, period: session.period,
       caseId: item.caseId, finding: input.step.finding, initial: answer.initial, final: answer.final,
@@ -102,7 +123,7 @@ export const commitAnswerAndRead = (db: HeedDb, input: AnswerCommit): Promise<Co
     });
     read.hash = event.hash;
     await db.reads.put(read);
-    const next = currentPosition(plan, [...reads.filter((r) => r.id !== id), read].map(toAnswer));
+    const next = positionAt(plan, stepIndex + 1);
     if (next.done) {
       await db.sessions.update(session.id, { completedAt: new Date().toISOString() });
       await appendEvent(db, session.studyId, 'session-completed', { sessionId: session.id });

@@ -1,12 +1,17 @@
+import { lazy, Suspense } from 'react';
 import { HomeScreen } from './screens/HomeScreen';
-import { NewStudyScreen } from './screens/NewStudyScreen';
-import { StudyScreen } from './screens/StudyScreen';
 import { ReadingScreen } from './reading/ReadingScreen';
-import { ResultsScreen } from './screens/ResultsScreen';
-import { HandoverScreen } from './screens/HandoverScreen';
-import { EditStudyScreen } from './screens/EditStudyScreen';
-import { AuditLogScreen } from './screens/AuditLogScreen';
-import { ReaderReportScreen } from './report/ReaderReportScreen';
+
+// The start screen's bundle holds only what it shows: every other screen (and with them results,
+// reports, plots and the planner) is loaded when first opened. Reading stays in the first bundle,
+// so a resumed session opens without a second fetch.
+const NewStudyScreen = lazy(async () => ({ default: (await import('./screens/NewStudyScreen')).NewStudyScreen }));
+const StudyScreen = lazy(async () => ({ default: (await import('./screens/StudyScreen')).StudyScreen }));
+const ResultsScreen = lazy(async () => ({ default: (await import('./screens/ResultsScreen')).ResultsScreen }));
+const HandoverScreen = lazy(async () => ({ default: (await import('./screens/HandoverScreen')).HandoverScreen }));
+const EditStudyScreen = lazy(async () => ({ default: (await import('./screens/EditStudyScreen')).EditStudyScreen }));
+const AuditLogScreen = lazy(async () => ({ default: (await import('./screens/AuditLogScreen')).AuditLogScreen }));
+const ReaderReportScreen = lazy(async () => ({ default: (await import('./report/ReaderReportScreen')).ReaderReportScreen }));
 import { actions, useAppState } from './state/app-state';
 import { CoordinatorGate } from './lock/CoordinatorGate';
 import { SingleWindowSession } from './reading/SingleWindowSession';
@@ -21,6 +26,7 @@ export const App = () => {
           <button type="button" className="link" onClick={actions.clearNotice} aria-label="Dismiss notice">×</button>
         </div>
       )}
+      <Suspense fallback={<p className="page" aria-busy="true">Opening…</p>}>
       <CoordinatorGate screen={screen}>
       {screen.name === 'home' && <HomeScreen />}
       {screen.name === 'new-study' && <NewStudyScreen />}
@@ -36,6 +42,7 @@ export const App = () => {
       {screen.name === 'audit' && <AuditLogScreen studyId={screen.studyId} />}
       {screen.name === 'reader-report' && <ReaderReportScreen studyId={screen.studyId} readerId={screen.readerId} />}
       </CoordinatorGate>
+      </Suspense>
     </>
   );
 };

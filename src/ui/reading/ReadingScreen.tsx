@@ -113,19 +113,23 @@ export const ReadingScreen = ({ studyId, sessionId, notice }: Props) => {
   const image = prefetched ?? (loadedImage && caseRecord?.images.includes(loadedImage.path) ? loadedImage.image : null);
   const undecodable = failed && !image && failed.path === imagePath ? failed : null;
 
-  // The clock of a case starts when its pixels are drawn (and not during a break).
+  // The clock of a case starts in the animation frame that first shows its pixels (drawn to the
+  // canvas just before), the moment the case-painted signal marks; not during a break.
   const onDrawn = useCallback(() => {
     if (!item || breakFor || feedback || clockCase.current === item.caseId) return;
     clockCase.current = item.caseId;
-    const now = performance.now();
     const resumedInitial = currentRead?.initial?.ms ?? 0;
-    const started = { ...startClock(now), accumulated: resumedInitial };
-    // drawn while paused (a save was finishing when the reader paused): the clock waits for resume
-    clock.current = paused ? pauseClock(started, now) : started;
-    setClockStarted(true);
     shownAt.current = currentRead?.shownAt ?? new Date().toISOString();
-    requestAnimationFrame(() => signal('case-painted', { caseId: item.caseId }));
-  }, [item, breakFor, feedback, currentRead, paused]);
+    requestAnimationFrame(() => {
+      if (clockCase.current !== item.caseId) return;
+      const now = performance.now();
+      const started = { ...startClock(now), accumulated: resumedInitial };
+      // shown while paused (a save was finishing when the reader paused): the clock waits for resume
+      clock.current = pausedNow.current ? pauseClock(started, now) : started;
+      setClockStarted(true);
+      signal('case-painted', { caseId: item.caseId });
+    });
+  }, [item, breakFor, feedback, currentRead]);
 
   useEffect(() => {
     if (position?.done && !feedback) signal('ready', { screen: 'reading-done' });
@@ -137,11 +141,14 @@ export const ReadingScreen = ({ studyId, sessionId, notice }: Props) => {
   const askConfidence = !ratingScale && (design?.askConfidence ?? true);
   const problem = answerProblem({ call, confidence, rating }, askConfidence, scale.kind);
 
-  const doCommit = useCallback(async () => {
+  // `keyAt`: the committing key's event.timeStamp (same clock as performance.now), so the time ends
+  // at the key press itself, not when the main thread got round to handling it
+  const doCommit = useCallback(async (keyAt?: number) => {
     if (busy || paused || breakFor || feedback || problem !== null || !clock.current || !item || !loaded) return;
     const committedCall = ratingScale && rating !== null ? callFromRating(scale, rating) : call;
     if (committedCall === null) return;
-    const ms = elapsedMs(clock.current, performance.now());
+    const end = Math.min(keyAt ?? performance.now(), performance.now());
+    const ms = elapsedMs(clock.current, Math.max(end, clock.current.runningSince ?? end));
     setBusy(true);
     try {
       const result = await commit({
@@ -233,7 +240,7 @@ export const ReadingScreen = ({ studyId, sessionId, notice }: Props) => {
         case 'confidence-step': setConfidence((c) => Math.min(100, Math.max(0, (c ?? 50) + action.step))); break;
         case 'rating': setRating(action.value); break;
         case 'rating-step': setRating((r) => Math.min(100, Math.max(0, (r ?? 50) + action.step))); break;
-        case 'commit': void doCommit(); break;
+        case 'commit': void doCommit(event.timeStamp); break;
         case 'zoom': setView((v) => ({ ...v, zoom: Math.min(8, Math.max(0.5, v.zoom * action.factor)) })); break;
         case 'reset-view': setView(DEFAULT_VIEW); break;
         case 'image': setImageIndex((i) => Math.min(Math.max(0, i + action.step), (caseRecord?.images.length ?? 1) - 1)); break;

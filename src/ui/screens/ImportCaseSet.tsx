@@ -1,8 +1,6 @@
 /** Importing a case set from a folder or a zip: validated whole, refused with row and column named. */
 import { useState } from 'react';
 import type { CaseSetSummary } from '../../io/case-set/types';
-import { pickedSource } from '../../io/picked-source';
-import { importCaseSet, problemLine } from '../../store/import-case-set';
 import { getHost } from '../../host';
 import { useDb } from '../db-context';
 import { signal } from '../signals';
@@ -23,6 +21,8 @@ export const ImportCaseSet = ({ onImported }: { onImported: () => void }) => {
       const picked = await getHost().pickCaseSet(kind);
       if (!picked) return;
       setState({ kind: 'working', label: picked.label });
+      // loaded on first use: the case-set reader (zip, CSV, validation) is not part of the start screen's bundle
+      const [{ pickedSource }, { importCaseSet, problemLine }] = await Promise.all([import('../../io/picked-source'), import('../../store/import-case-set')]);
       const outcome = await importCaseSet(db, await pickedSource(picked));
       if (outcome.ok) { setState({ kind: 'imported', summary: outcome.summary }); onImported(); signal('saved', { caseSet: outcome.caseSet.id }); }
       else { setState({ kind: 'refused', label: picked.label, lines: outcome.problems.map((p) => problemLine(picked.label, p)), total: outcome.total }); signal('saved', { refused: true }); }

@@ -1,6 +1,5 @@
 /** The start screen's "Open a study bundle": verify a bundle, then restore its study here. */
 import { useState, type ChangeEvent } from 'react';
-import { openStudyBundle } from '../../store/bundle';
 import { useDb } from '../db-context';
 import { signal } from '../signals';
 import { actions } from '../state/app-state';
@@ -16,6 +15,8 @@ export const OpenBundle = () => {
     setBusy(true);
     setProblem('');
     try {
+      // loaded on first use: the bundle reader (zip, hashes, schemas) is not part of the start screen's bundle
+      const { openStudyBundle } = await import('../../store/bundle');
       const outcome = await openStudyBundle(db, file.name, new Uint8Array(await file.arrayBuffer()));
       if (!outcome.ok) {
         setProblem(outcome.message);

@@ -1,5 +1,5 @@
 /** Everything the study screen shows about its readers, loaded in one go. */
-import { answeredCases } from '../../store/progress';
+import { answeredCasesOf } from '../../store/progress';
 import type { HeedDb } from '../../store/db';
 import { listReaders } from '../../store/readers';
 import type { StoredReader, StoredSession, StoredStudy } from '../../store/records';
@@ -20,17 +20,20 @@ export const loadStudyProgress = async (db: HeedDb, studyId: string, now: Date =
   const sessions = await sessionsOfStudy(db, studyId);
   const periodCount = study.design.sequences[0]?.periods.length ?? 0;
   const caseCount = caseSet.manifest.cases.length;
+  // one query per table, not per session: sessions by reader and period, answered counts at once
+  const answered = await answeredCasesOf(db, sessions, study.design.findings.length);
+  const sessionOf = new Map(sessions.map((s) => [`${s.readerId}\u0000${s.period}`, s]));
   const progress: ReaderProgress[] = [];
   for (const reader of readers) {
     const periods: PeriodProgress[] = [];
     for (let period = 1; period <= periodCount; period++) {
-      const session = sessions.find((s) => s.readerId === reader.id && s.period === period) ?? null;
+      const session = sessionOf.get(`${reader.id}\u0000${period}`) ?? null;
       const previousDone = periods[period - 2]?.session?.completedAt ?? null;
       periods.push({
         period, session, total: session?.items.length ?? caseCount,
         opensAt: previousDone === null ? null : periodOpensAt(new Date(previousDone), study.design.washoutDays),
         inWashout: session === null && previousDone !== null && periodOpensAt(new Date(previousDone), study.design.washoutDays).getTime() > now.getTime(),
-        answered: session ? await answeredCases(db, session, study.design.findings.length) : 0,
+        answered: session ? answered.get(session.id) ?? 0 : 0,
       });
     }
     progress.push({ reader, sequenceLabel: study.design.sequences[reader.sequenceIndex]?.label ?? '?', periods });

@@ -1,5 +1,5 @@
 import {
-  answerProblem, applyCommit, currentPosition, planSteps, suggestionVisible,
+  answerProblem, applyCommit, currentPosition, planSteps, positionAt, stepCount, stepIndexOf, suggestionVisible,
   type CommittedAnswer, type SessionItem, type SessionPlan,
 } from '../../../src/core/session';
 import { elapsedMs, pauseClock, resumeClock, startClock } from '../../../src/core/active-clock';
@@ -74,6 +74,24 @@ describe('session state machine', () => {
     const plan = { items: items('none', 3), findings: ['a'] };
     const gap: CommittedAnswer[] = [{ caseId: 'c2', finding: 'a', initial: null, final: { call: 1, confidence: 50, ms: 1 } }];
     expect(() => currentPosition(plan, gap)).toThrow(/after an unanswered step/);
+  });
+
+  it('finds a step by index without walking the answers, as currentPosition does after the same commits', () => {
+    // a mixed plan: unaided, sequential and concurrent cases, two findings
+    const mixed = [...items('none', 2), ...items('sequential', 3), ...items('concurrent', 2)].map((item, i) => ({ ...item, caseId: `m${i}` }));
+    for (const plan of [{ items: mixed, findings: ['a', 'b'] }, { items: items('sequential', 4), findings: ['a'] }]) {
+      const steps = planSteps(plan);
+      expect(stepCount(plan)).toBe(steps.length);
+      steps.forEach((step, index) => {
+        expect(stepIndexOf(plan, step)).toBe(index);
+        expect(positionAt(plan, index)).toEqual(currentPosition(plan, commitAll(plan, index)));
+      });
+      expect(positionAt(plan, steps.length)).toEqual(currentPosition(plan, commitAll(plan, steps.length)));
+    }
+    const plan = { items: items('none', 2), findings: ['a'] };
+    expect(stepIndexOf(plan, { itemIndex: 0, finding: 'a', phase: 'initial' })).toBe(-1);
+    expect(stepIndexOf(plan, { itemIndex: 0, finding: 'z', phase: 'final' })).toBe(-1);
+    expect(stepIndexOf(plan, { itemIndex: 5, finding: 'a', phase: 'final' })).toBe(-1);
   });
 
   it('needs a call, and a confidence when the study asks for one', () => {

@@ -78,6 +78,33 @@ describe('store', () => {
     expect(types).toEqual(['study-created', 'reader-enrolled', 'design-locked', 'session-started', 'initial-committed', 'final-committed', 'initial-committed']);
   });
 
+  it('refuses, inside the transaction and with nothing written, a commit for a step already answered, ahead of the current one, or from a stale window', async () => {
+    const db = openHeedDb(`heed-test-${process.pid}-${++counter}`);
+    const { manifest, study } = await setUpStudy(db);
+    const reader = await enrolReader(db, study.id, { code: 'R01', role: 'radiologist', years: 3 }, () => 0);
+    const session = await startSession(db, { study, readerId: reader.id, period: 1, items: tinyItems(manifest, 'sequential'), orderSeed: 's1', override: null });
+    const base = { session, findings: ['target'], shownAt: '2026-12-01T10:00:00.000Z', suggestion: null, cautionShown: false, call: 1 as const, confidence: 50, ms: 800 };
+    const step = (itemIndex: number, phase: 'initial' | 'final') => ({ itemIndex, finding: 'target', phase });
+    const snapshot = async () => ({ reads: await db.reads.toArray(), events: (await eventsOfStudy(db, study.id)).length });
+
+    await commitAnswer(db, { ...base, step: step(0, 'initial') });
+    const after = await snapshot();
+    // the same step twice (a double Enter, or a second window that still shows it)
+    await expect(commitAnswer(db, { ...base, step: step(0, 'initial'), call: 0 })).rejects.toThrow(/not the current one/);
+    // a step ahead of the current one (its initial call done, the final not yet)
+    await expect(commitAnswer(db, { ...base, step: step(1, 'initial') })).rejects.toThrow(/not the current one/);
+    // two windows racing for the same step: exactly one commit is stored
+    const race = await Promise.allSettled([commitAnswer(db, { ...base, step: step(0, 'final') }), commitAnswer(db, { ...base, step: step(0, 'final'), call: 0 })]);
+    expect(race.map((r) => r.status).sort()).toEqual(['fulfilled', 'rejected']);
+    expect(await snapshot()).toEqual({ reads: expect.any(Array), events: after.events + 1 });
+    expect((await db.reads.get(`${session.id}/k1/target`))?.final?.call).toBe(1);
+    // a step the plan does not have
+    await expect(commitAnswer(db, { ...base, step: step(9, 'final') })).rejects.toThrow(/has no step/);
+    expect((await eventsOfStudy(db, study.id)).length).toBe(after.events + 1);
+    const next = await commitAnswer(db, { ...base, step: step(1, 'initial') });
+    expect(next.done ? null : [next.stepIndex, next.step.phase]).toEqual([3, 'final']);
+  });
+
   it('marks the session complete on its last answer and exports read-log rows', async () => {
     const db = freshDb();
     const { manifest, study } = await setUpStudy(db);
