@@ -102,12 +102,12 @@ export const commitAnswerAndRead = (db: HeedDb, input: AnswerCommit): Promise<Co
     // step after one, takes the full walk (which knows the skips)
     const current = !(skipped ?? []).includes(item.caseId) && !answered(previous, input.step.phase)
       && (before === null || before.done || answered(beforeRead, before.step.phase));
-    // a refusal names the step that is current, which only then needs the session's answers
+    // otherwise the position comes from all the session's answers (and its skips): applyCommit then
+    // refuses any step but that one, naming the step that is current
     const position = current ? positionAt(plan, stepIndex) : await sessionPosition(db, stored ?? session, input.findings);
     const answer = applyCommit(position, input.step, previous ? toAnswer(previous) : null, {
       call: input.call, confidence: input.confidence, ms: input.ms, ...(input.rating == null ? {} : { rating: input.rating }),
     });
-    if (!current) throw new Error(`answer for case ${item.caseId} (${input.step.finding}, ${input.step.phase}) is not for the current step`);
     const read: StoredRead = {
       id, sessionId: session.id, studyId: session.studyId, readerId: session.readerId, period: session.period,
       caseId: item.caseId, finding: input.step.finding, initial: answer.initial, final: answer.final,
