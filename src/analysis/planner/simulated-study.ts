@@ -1,6 +1,6 @@
 /**
  * One simulated study of a plan: the shared simulated-reader model answers the design, the
- * answers become read-log rows (SPEC Contract 1 shape, only the columns the analysis reads
+ * answers become read-log rows (the shape of docs/formats.md, "The read log"; only the columns the analysis reads
  * filled with meaning), and Heed's own analysis pieces measure them: `reliance` per reader (the
  * engine's over-reliance with its Wilson interval, split by caution notice) and `mrmc` (the
  * engine's Obuchowski-Rockette adapter). The same numbers analyzeReads would give, without the
