@@ -14,7 +14,6 @@ import type { StoredRead, StoredSession, StoredStudy } from '../../store/records
 import { commitAnswerAndRead, getSession, logSessionMoment, readsOfSession, sessionPosition } from '../../store/sessions';
 import { skipCase } from '../../store/skip-case';
 import { getStudy } from '../../store/studies';
-import { backUpStudy } from '../services/backup';
 
 export type LoadedSession = {
   study: StoredStudy;
@@ -77,8 +76,10 @@ export const useReadingSession = (db: HeedDb, studyId: string, sessionId: string
     readsNow.current = updated;
     setReadsState(updated);
     setPosition(next);
-    // the period's last answer is committed: back the study up (never awaited, never blocking)
-    if (next.done) void backUpStudy(db, loaded.study.id, 'period-complete');
+    // the period's last answer is committed: back the study up (never awaited, never blocking).
+    // Loaded on use, so the reading view's bundle carries no zip or bundle code; backUpStudy logs
+    // its own failures as backup-failed events.
+    if (next.done) void import('../services/backup').then(({ backUpStudy }) => backUpStudy(db, loaded.study.id, 'period-complete'));
     return { next, reads: updated };
   }, [db, loaded, position]);
 

@@ -1,6 +1,5 @@
 /** The start screen's backups: where they are written, the latest of each study, and restoring one. */
 import { useCallback, useState } from 'react';
-import { openStudyBundle } from '../../store/bundle';
 import type { StoredStudy } from '../../store/records';
 import type { BackupEntry } from '../../host/types';
 import { getHost } from '../../host';
@@ -42,6 +41,8 @@ export const BackupsPanel = ({ studies }: Props) => {
     setBusy(true);
     setProblem('');
     try {
+      // loaded on use, as in OpenBundle: the start screen's bundle carries no bundle reader
+      const { openStudyBundle } = await import('../../store/bundle');
       const outcome = await openStudyBundle(db, entry.fileName, await getHost().readBackup(entry.id));
       if (!outcome.ok) {
         setProblem(outcome.message);
