@@ -1,9 +1,10 @@
 /** The study page's bundle actions: save the whole study as one file, and merge another workstation's copy. */
-import { useState, type ChangeEvent } from 'react';
+import { useState } from 'react';
 import { writeBundle } from '../../io/bundle/write';
 import { gatherStudySnapshot, mergeStudyBundle } from '../../store/bundle';
 import type { StoredStudy } from '../../store/records';
 import { getHost } from '../../host';
+import { useBusyAction } from '../components/use-busy-action';
 import { useDb } from '../db-context';
 import { signal } from '../signals';
 import { actions } from '../state/app-state';
@@ -17,12 +18,9 @@ export const BundlePanel = ({ study, onMerged }: Props) => {
   const db = useDb();
   const [withImages, setWithImages] = useState(false);
   const [status, setStatus] = useState('');
-  const [problem, setProblem] = useState('');
-  const [busy, setBusy] = useState(false);
+  const { busy, problem, setProblem, run, picked } = useBusyAction();
 
-  const save = async () => {
-    setBusy(true);
-    setProblem('');
+  const save = () => run(async () => {
     try {
       const file = `${safeName(study.name)}-bundle.zip`;
       const bytes = writeBundle(await gatherStudySnapshot(db, study.id, withImages));
@@ -31,41 +29,24 @@ export const BundlePanel = ({ study, onMerged }: Props) => {
       signal('saved', { file });
     } catch (e) {
       actions.notify({ kind: 'error', text: `The bundle was not saved: ${e instanceof Error ? e.message : String(e)}` });
-    } finally {
-      setBusy(false);
     }
-  };
+  });
 
-  const backUp = async () => {
-    setBusy(true);
-    setProblem('');
-    try {
-      const outcome = await backUpStudy(db, study.id, 'on-demand');
-      if (outcome.ok) setStatus(`Backed up to ${outcome.folder}/${outcome.entry.id} (${outcome.entry.bytes.toLocaleString('en')} bytes).`);
-      else setProblem(outcome.message);
-    } finally {
-      setBusy(false);
-    }
-  };
+  const backUp = () => run(async () => {
+    const outcome = await backUpStudy(db, study.id, 'on-demand');
+    if (outcome.ok) setStatus(`Backed up to ${outcome.folder}/${outcome.entry.id} (${outcome.entry.bytes.toLocaleString('en')} bytes).`);
+    else setProblem(outcome.message);
+  });
 
-  const merge = async (event: ChangeEvent<HTMLInputElement>) => {
-    const file = event.target.files?.[0];
-    event.target.value = '';
-    if (!file) return;
-    setBusy(true);
-    setProblem('');
-    try {
-      const outcome = await mergeStudyBundle(db, study.id, file.name, new Uint8Array(await file.arrayBuffer()));
-      if (!outcome.ok) setProblem(outcome.message);
-      else {
-        setStatus(outcome.added === 0 ? `${file.name} holds nothing new: the study is unchanged.` : `Merged ${file.name}: ${outcome.added} read${outcome.added === 1 ? '' : 's'} added.`);
-        onMerged();
-      }
-      signal('saved', { merged: file.name, ok: outcome.ok });
-    } finally {
-      setBusy(false);
+  const merge = picked(async (name, bytes) => {
+    const outcome = await mergeStudyBundle(db, study.id, name, bytes);
+    if (!outcome.ok) setProblem(outcome.message);
+    else {
+      setStatus(outcome.added === 0 ? `${name} holds nothing new: the study is unchanged.` : `Merged ${name}: ${outcome.added} read${outcome.added === 1 ? '' : 's'} added.`);
+      onMerged();
     }
-  };
+    signal('saved', { merged: name, ok: outcome.ok });
+  });
 
   return (
     <section className="panel" aria-labelledby="bundle-head">
@@ -77,7 +58,7 @@ export const BundlePanel = ({ study, onMerged }: Props) => {
         <button type="button" disabled={busy} onClick={() => void backUp()}>Back up now</button>
         <label>
           Merge a workstation’s bundle
-          <input type="file" accept=".zip,application/zip" disabled={busy} onChange={(e) => void merge(e)} />
+          <input type="file" accept=".zip,application/zip" disabled={busy} onChange={merge} />
         </label>
       </div>
       {problem && <p role="alert">{problem}</p>}
