@@ -11,6 +11,7 @@ import type { Screen } from '../state/app-state';
 import { createIdleTimer } from './idle-timer';
 import { LockScreen } from './LockScreen';
 import { LockSetup } from './LockSetup';
+import { LockSetupContext } from './lock-setup-slot';
 import { isReaderFlow } from './reader-flow';
 
 // put off for this window only: the start page asks again after a restart
@@ -42,12 +43,7 @@ export const CoordinatorGate = ({ screen, children }: { screen: Screen; children
   if (readerFlow) return <>{children}</>;
   if (info === null) return <main className="page" aria-busy="true"><p>Opening…</p></main>;
   if (info.locked) return <LockScreen onOpen={refresh} />;
-  return (
-    <>
-      {screen.name === 'home' && !info.hasPassphrase && !dismissed && (
-        <LockSetup onSet={refresh} onDismiss={() => { setupDismissed = true; setDismissed(true); }} />
-      )}
-      {children}
-    </>
-  );
+  const setupDue = screen.name === 'home' && !info.hasPassphrase && !dismissed;
+  const setup = setupDue ? <LockSetup onSet={refresh} onDismiss={() => { setupDismissed = true; setDismissed(true); }} /> : null;
+  return <LockSetupContext.Provider value={setup}>{children}</LockSetupContext.Provider>;
 };

@@ -7,6 +7,7 @@ import { STATUS_WORDS } from '../../core/study-status';
 import { unfinishedSessions } from '../../store/progress';
 import { CautionLine } from '../components/CautionLine';
 import { useDb } from '../db-context';
+import { LockSetupSlot } from '../lock/lock-setup-slot';
 import { ensureDemoCaseSet } from '../services/demo-set';
 import { signal } from '../signals';
 import { actions } from '../state/app-state';
@@ -37,6 +38,7 @@ export const HomeScreen = () => {
         <p className="tagline">Local reading sessions that show how readers use a model’s suggestions.</p>
         <CautionLine />
       </header>
+      <LockSetupSlot />
       {home.error && <p role="alert">Could not open the database: {home.error.message}</p>}
       {!home.value && !home.error && <p aria-busy="true">Opening Heed (on first launch the demo case set is generated: a few seconds)…</p>}
       {home.value && (
