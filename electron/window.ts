@@ -60,6 +60,8 @@ export const createMainWindow = (preload: string, packaged = false): BrowserWind
       webviewTag: false,
       navigateOnDragDrop: false,
       spellcheck: false,
+      // A middle click would otherwise open links in a new window (denied anyway by guardContents).
+      disableBlinkFeatures: 'Auxclick',
       devTools: !packaged,
     },
   });

@@ -13,6 +13,7 @@ import {
 } from './lib/launch-plan.mjs';
 import { ELECTRON, RENDERER, targetIsStale } from './lib/freshness.mjs';
 import { profileToken, provesHeed } from './lib/launch-token.mjs';
+import { acquireLaunchLock } from './lib/launch-lock.mjs';
 import { startStaticServer } from './lib/static-server.mjs';
 import { backupSecretFor, createBackupFolder, defaultBackupRoot } from './lib/backup-folder.mjs';
 
@@ -41,6 +42,26 @@ const chromium = findChromium(env);
 const choice = chooseMode({ requested: env.HEED_MODE, electronUsable: electron !== null, chromium, hasDisplay: hasDisplay(env) });
 if (!choice.ok) fail(choice.error);
 say(`mode ${choice.mode} (${choice.reason})`);
+
+// One launcher per profile (Electron has its own single-instance lock): a second start would open
+// a second window on the same database. Checked before any build, which would change dist/ under
+// the running server.
+const profileDir = chromiumProfileDir(env, homedir());
+let launchLock = null;
+if (choice.mode !== 'electron') {
+  const token = profileToken(profileDir);
+  const lock = await acquireLaunchLock({ dir: profileDir, mode: choice.mode, proves: (url) => provesHeed(url, token) });
+  if (!lock.ok) {
+    const { holder } = lock;
+    const where = holder.url === null ? 'it is still starting' : `it serves ${holder.url}`;
+    const window = holder.mode === 'chromium' ? 'Switch to its Chromium window' : `Open ${holder.url ?? 'its address'} in Chromium`;
+    say(`Heed is already running with this profile (launcher process ${holder.pid}, started ${new Date(holder.startedAt).toISOString()}, mode ${holder.mode}; ${where}). ${window}; no second window was opened. To start afresh, close that Heed first (Ctrl+C in its terminal).`);
+    process.exit(0);
+  }
+  if (lock.took !== null) say(`took over a stale launcher lock (${lock.took})`);
+  launchLock = lock;
+  process.on('exit', () => launchLock?.release());
+}
 
 if (targetIsStale(root, RENDERER)) run('the renderer (vite build)', [path.join(root, 'node_modules', 'vite', 'bin', 'vite.js'), 'build']);
 else say('renderer is up to date (dist/)');
@@ -82,7 +103,6 @@ if (choice.mode === 'electron') {
 } else {
   // The profile's secret token: a server holding it proves it is this Heed (a page title proves
   // nothing: a squatter on the port would otherwise be handed the whole profile).
-  const profileDir = chromiumProfileDir(env, homedir());
   const token = profileToken(profileDir);
   // Backups go through this server; the page proves it is ours with a secret derived from the
   // token, so a window opened on a server reused from an earlier launch can back up too.
@@ -112,6 +132,7 @@ if (choice.mode === 'electron') {
     fail(`could not serve dist/ on 127.0.0.1${port.port ? `:${port.port}` : ''}: ${error.message}`);
   }
   if (server.reused && choice.mode === 'serve') process.exit(0);
+  launchLock?.setUrl(server.url);
   if (!server.reused) say(`serving dist/ at ${server.url} (127.0.0.1 only); backups go to ${backups.folder.root}`);
   const shutdown = async (code) => {
     await server.close();

@@ -4,17 +4,16 @@ import path from 'node:path';
 
 /**
  * Content Security Policy for every document Heed serves: own files only, no remote content, no
- * form ever submitted anywhere (forms are handled in script). Styles keep 'unsafe-inline' on
- * purpose: Observable Plot puts a <style> element inside every chart's SVG (plot.js,
- * `svg.append("style")`), which a style-src without it blocks. React's style attributes are
- * set through the CSSOM (element.style) and would not need it. Scripts stay 'self' only, which
- * is what stops injected markup from running.
+ * form ever submitted anywhere (forms are handled in script), no inline script and no inline
+ * style. Styles set by script through the CSSOM (React's style props, Observable Plot's
+ * element.style) are not inline styles; the <style> elements Plot adds to each plot and legend,
+ * and the reader report's CSS, are adopted as constructed style sheets (src/ui/adopted-styles.ts).
  */
 export const CONTENT_SECURITY_POLICY = [
   "default-src 'self'",
   "img-src 'self' blob: data:",
   "script-src 'self'",
-  "style-src 'self' 'unsafe-inline'",
+  "style-src 'self'",
   "object-src 'none'",
   "base-uri 'none'",
   "form-action 'none'",

@@ -10,6 +10,7 @@ import { join } from 'node:path';
 import { inject } from 'vitest';
 import { useChromiumProfile } from './support/chromium';
 import { homePage, studyPage } from './support/pages';
+import { plotStyle, watchPolicyViolations } from './support/style-policy';
 
 const SHOTS = join(import.meta.dirname, '..', '..', 'test-results', 'screens');
 mkdirSync(SHOTS, { recursive: true });
@@ -31,6 +32,7 @@ describe('planner: the dry-run panel on a draft study', () => {
   it('shows the figures heed plan gives for the exported study.json', async () => {
     const chrome = await browser.launch();
     const { page } = chrome;
+    const policy = watchPolicyViolations(page);
     await homePage(page).waitUntilReady();
     await page.getByText('Vesper Valley Imaging (demo)').waitFor();
     await homePage(page).newStudy({ name: 'Dry run pilot', aidedMode: 'sequential', plantedFalsePositive: 3, plantedFalseNegative: 3, caution: 'with a random half of aided reads' });
@@ -68,5 +70,10 @@ describe('planner: the dry-run panel on a draft study', () => {
       else expect(Math.abs(Number(shown) - expected), name).toBeLessThan(1e-12);
     }
     expect(valueAt(cli, 'notice.power')).not.toBeNull(); // the random-half notice is planned too
+
+    // The power curves are drawn under the page's policy (no inline styles): nothing blocked, Plot's CSS applied.
+    expect(await page.locator('figure.plot svg.heed-plot').count()).toBeGreaterThan(0);
+    expect(await plotStyle(page, 'figure.plot svg.heed-plot')).toMatchObject({ display: 'block', maxWidth: '100%', styleElements: 0 });
+    expect(policy.violations()).toEqual([]);
   });
 });

@@ -18,6 +18,7 @@ import { compareFigures, type ShownFigure } from '../support/report-figures';
 import { useChromiumProfile, type RunningChromium } from './support/chromium';
 import { writeCaseFolder } from './support/case-folder';
 import { homePage, readingPage, studyPage } from './support/pages';
+import { plotStyle, watchPolicyViolations } from './support/style-policy';
 
 const SHOTS = join(import.meta.dirname, '..', '..', 'test-results', 'screens');
 mkdirSync(SHOTS, { recursive: true });
@@ -59,6 +60,7 @@ describe('reader report: private, same numbers as heed analyze, case review only
     const folder = writeCaseFolder(16, 1);
     const chrome = await browser.launch();
     const { page } = chrome;
+    const policy = watchPolicyViolations(page);
     await homePage(page).waitUntilReady();
     const [chooser] = await Promise.all([page.waitForEvent('filechooser'), page.getByRole('button', { name: 'Import a folder…' }).click()]);
     await chooser.setFiles(folder.dir);
@@ -125,6 +127,11 @@ describe('reader report: private, same numbers as heed analyze, case review only
     const axe = await new AxeBuilder({ page }).include('.heed-report').analyze();
     const bad = axe.violations.filter((v) => v.impact === 'serious' || v.impact === 'critical').map((v) => `${v.id}: ${v.help}`);
     expect(bad).toEqual([]);
+
+    // The page's policy allows no inline style: the report's CSS and each plot's styles were
+    // adopted as style sheets, so nothing was blocked and the plots keep their font and layout.
+    expect(policy.violations()).toEqual([]);
+    expect(await plotStyle(page, '.heed-report .plot svg.heed-plot')).toMatchObject({ display: 'block', maxWidth: '100%', styleElements: 0 });
 
     // Case images on request, as data: URLs inside the report.
     await page.getByLabel('Include case images in the report').check();

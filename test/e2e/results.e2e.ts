@@ -17,6 +17,7 @@ import { writeCaseFolder } from './support/case-folder';
 import { useChromiumProfile, type RunningChromium } from './support/chromium';
 import { homePage, readingPage, studyPage } from './support/pages';
 import { compareWithCli, missingFromPage, shownFigures } from './support/results-check';
+import { plotStyle, watchPolicyViolations } from './support/style-policy';
 
 const SHOTS = join(import.meta.dirname, '..', '..', 'test-results', 'screens');
 const READERS = ['R1', 'R2', 'R3'];
@@ -55,6 +56,7 @@ describe('results page: pictures and plain words, the same numbers as heed analy
     const folder = writeCaseFolder(12, 1);
     const chrome = await browser.launch();
     const { page } = chrome;
+    const policy = watchPolicyViolations(page);
     await page.setViewportSize({ width: 1280, height: 900 });
     await homePage(page).waitUntilReady();
     const [chooser] = await Promise.all([page.waitForEvent('filechooser'), page.getByRole('button', { name: 'Import a folder…' }).click()]);
@@ -128,5 +130,10 @@ describe('results page: pictures and plain words, the same numbers as heed analy
     await page.setViewportSize({ width: 1920, height: 1080 });
     await page.evaluate(() => { for (const d of document.querySelectorAll('details')) d.open = false; window.scrollTo(0, 0); });
     await page.screenshot({ path: join(SHOTS, 'results-1920.png') });
+
+    // The page's policy allows no inline style (scripts/lib/web-policy.mjs): nothing was blocked,
+    // and Plot's own CSS still reaches the plots (adopted as a style sheet, src/ui/adopted-styles.ts).
+    expect(policy.violations()).toEqual([]);
+    expect(await plotStyle(page, '.plot-card svg.heed-plot')).toMatchObject({ display: 'block', maxWidth: '100%', styleElements: 0 });
   }, 480_000);
 });

@@ -7,10 +7,13 @@ import { FONT } from './theme';
 
 export type PlotOptions = Plot.PlotOptions;
 
+/** The class of every plot's SVG (Plot's CSS is scoped to it), fixed so pages and tests can find it. */
+export const PLOT_CLASS = 'heed-plot';
+
 /** Renders options to an element (SVG, or a figure when a legend or title is asked). */
 export const renderPlot = (options: PlotOptions, document: Document): SVGSVGElement | HTMLElement => {
   const style = { fontFamily: FONT, fontSize: '12px', background: 'white', color: '#222', overflow: 'visible' };
-  return Plot.plot({ ...options, document, style: { ...style, ...(typeof options.style === 'object' ? options.style : {}) } });
+  return Plot.plot({ className: PLOT_CLASS, ...options, document, style: { ...style, ...(typeof options.style === 'object' ? options.style : {}) } });
 };
 
 /** The figure as standalone markup, for HTML reports and SVG downloads. */

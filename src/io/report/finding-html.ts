@@ -10,28 +10,28 @@ import { scoreBandPlot, type BandPoint } from '../plots/score-band-reliance';
 import { subgroupPlot, type SubgroupPoint } from '../plots/subgroup-reliance';
 import { unaidedAidedPlot, type ConditionPoint } from '../plots/unaided-aided';
 import { countCell, esc, numberCell, pctText, shareCell } from './html';
-import { inlinePlot } from './inline-plot';
+import { inlinePlot, type PlotTarget } from './inline-plot';
 
 const p = (text: string, cls = 'explain'): string => (text ? `<p class="${cls}">${esc(text)}</p>` : '');
 
-export const findingHtml = (f: FindingReport, document: Document, showFinding: boolean): string => {
+export const findingHtml = (f: FindingReport, target: PlotTarget, showFinding: boolean): string => {
   const title = showFinding ? ` <span class="meta">(finding: ${esc(f.finding)})</span>` : '';
   return `<div class="finding" data-finding="${esc(f.finding)}">
-${glance(f, document, title)}
-${conditions(f, document, title)}
+${glance(f, target, title)}
+${conditions(f, target, title)}
 ${switching(f, title)}
-${confidence(f, document, title)}
-${bands(f, document, title)}
-${subgroups(f, document, title)}
+${confidence(f, target, title)}
+${bands(f, target, title)}
+${subgroups(f, target, title)}
 ${time(f, title)}
 </div>`;
 };
 
-const glance = (f: FindingReport, document: Document, title: string): string => {
+const glance = (f: FindingReport, target: PlotTarget, title: string): string => {
   const a = f.entry.aided;
   const own = a?.overreliance.estimate;
   const strip = own !== null && own !== undefined && f.peers.values.length > 0
-    ? inlinePlot(peerStripPlot(f.peers.values, own, 'followed a wrong suggestion'), document, `Your share of wrong suggestions followed, ${pctText(own)}, among ${f.peers.count} other readers (unnamed dots)`)
+    ? inlinePlot(peerStripPlot(f.peers.values, own, 'followed a wrong suggestion'), target, `Your share of wrong suggestions followed, ${pctText(own)}, among ${f.peers.count} other readers (unnamed dots)`)
     : '';
   const peerRow = f.peers.note === null
     ? `<tr><th scope="row">Other readers (${f.peers.count}, not named)</th><td class="num" data-figure="peers.median" data-value="${f.peers.median}">median ${pctText(f.peers.median)}</td><td class="num" data-figure="peers.range" data-lower="${f.peers.min}" data-upper="${f.peers.max}">range ${pctText(f.peers.min)}–${pctText(f.peers.max)}</td></tr>`
@@ -48,7 +48,7 @@ ${peerRow}</tbody></table>`}
 
 const MEASURES = [['accuracy', 'Right calls (accuracy)'], ['sensitivity', 'Finding present: found (sensitivity)'], ['specificity', 'Finding absent: cleared (specificity)']] as const;
 
-const conditions = (f: FindingReport, document: Document, title: string): string => {
+const conditions = (f: FindingReport, target: PlotTarget, title: string): string => {
   const { unaided, aided } = f.entry;
   const points: ConditionPoint[] = [];
   const add = (c: ConditionSection | AidedSection | null, condition: 'unaided' | 'aided') => {
@@ -64,7 +64,7 @@ const conditions = (f: FindingReport, document: Document, title: string): string
   const rows = MEASURES.map(([key, label]) => `<tr><th scope="row">${label}</th>${shareCell(`unaided.${key}`, unaided?.[key], tooFew)}${shareCell(`aided.${key}`, aided?.[key], tooFew)}</tr>`).join('');
   const auc = `<tr><th scope="row">AUC (0.5 chance, 1 perfect)</th>${numberCell('unaided.auc', unaided?.auc.estimate, 2, unaided?.auc)}${numberCell('aided.auc', aided?.auc.estimate, 2, aided?.auc)}</tr>`;
   return `<section><h2>Without and with the suggestion${title}</h2>${p(f.conditions_text)}
-${points.length > 0 ? inlinePlot(unaidedAidedPlot(points), document, 'Accuracy, sensitivity, specificity and AUC without (circles) and with (triangles) the suggestion, with 95% intervals') : ''}
+${points.length > 0 ? inlinePlot(unaidedAidedPlot(points), target, 'Accuracy, sensitivity, specificity and AUC without (circles) and with (triangles) the suggestion, with 95% intervals') : ''}
 <table><thead><tr><th scope="col"></th><th scope="col">Without the suggestion</th><th scope="col">With the suggestion</th></tr></thead><tbody>${rows}${auc}</tbody></table></section>`;
 };
 
@@ -90,7 +90,7 @@ ${p(s.woa_text)}</section>`;
 const calPoints = (bins: readonly ConfidenceBin[], condition: 'unaided' | 'aided'): CalibrationPoint[] =>
   bins.flatMap((b) => (b.expected_right === null || b.right.estimate === null ? [] : [{ condition, expected: b.expected_right, observed: b.right.estimate, lower: b.right.lower, upper: b.right.upper, n: b.n }]));
 
-const confidence = (f: FindingReport, document: Document, title: string): string => {
+const confidence = (f: FindingReport, target: PlotTarget, title: string): string => {
   const points = [...calPoints(f.calibration.unaided, 'unaided'), ...calPoints(f.calibration.aided, 'aided')];
   if (points.length === 0) return `<section><h2>How sure you were${title}</h2>${p('No confidence was asked in this study, so calibration cannot be shown.')}</section>`;
   const rows = f.calibration.unaided.map((u, i) => {
@@ -100,7 +100,7 @@ const confidence = (f: FindingReport, document: Document, title: string): string
   }).join('');
   const fc = f.followed_confidence;
   return `<section><h2>How sure you were${title}</h2>${p(f.calibration.text)}
-${inlinePlot(confidenceCalibrationPlot(points), document, 'Share right against the share your stated confidence implied, without (circles) and with (triangles) the suggestion')}
+${inlinePlot(confidenceCalibrationPlot(points), target, 'Share right against the share your stated confidence implied, without (circles) and with (triangles) the suggestion')}
 <table><thead><tr><th scope="col">Stated confidence</th><th scope="col">Right, without the suggestion</th><th scope="col">Right, with it</th><th scope="col">Expected if calibrated</th></tr></thead><tbody>${rows}</tbody></table>
 <h3>Confidence when you followed the suggestion</h3>${p(fc.text)}
 <table><tbody><tr><th scope="row">Followed a wrong suggestion: mean confidence</th>${numberCell('followed.wrong', fc.wrong.mean, 0)}<td class="num">${fc.wrong.n} reads</td></tr>
@@ -109,7 +109,7 @@ ${inlinePlot(confidenceCalibrationPlot(points), document, 'Share right against t
 
 const bandLabel = (lo: number, hi: number): string => `${lo.toFixed(1)}–${hi.toFixed(1)}`;
 
-const bands = (f: FindingReport, document: Document, title: string): string => {
+const bands = (f: FindingReport, target: PlotTarget, title: string): string => {
   const b = f.score_bands;
   if (b === null) return '';
   const labels = b.bands.map((x) => bandLabel(x.lower, x.upper));
@@ -121,11 +121,11 @@ const bands = (f: FindingReport, document: Document, title: string): string => {
   });
   const rows = b.bands.map((x, i) => `<tr><th scope="row">${labels[i]}</th>${shareCell(`bands.right.${i}`, x.followed_right, tooFew)}${shareCell(`bands.wrong.${i}`, x.followed_wrong, tooFew)}</tr>`).join('');
   return `<section><h2>Following by the score shown${title}</h2>${p(b.text)}
-${inlinePlot(scoreBandPlot(points, labels), document, 'Share of reads following the suggestion per shown score band, when it was right (circles) and wrong (triangles)')}
+${inlinePlot(scoreBandPlot(points, labels), target, 'Share of reads following the suggestion per shown score band, when it was right (circles) and wrong (triangles)')}
 <table><thead><tr><th scope="col">Score shown</th><th scope="col">Followed it, suggestion right</th><th scope="col">Followed it, suggestion wrong</th></tr></thead><tbody>${rows}</tbody></table></section>`;
 };
 
-const subgroups = (f: FindingReport, document: Document, title: string): string => {
+const subgroups = (f: FindingReport, target: PlotTarget, title: string): string => {
   if (f.subgroups.length === 0) return '';
   const parts = f.subgroups.map((g) => {
     const points: SubgroupPoint[] = [];
@@ -135,7 +135,7 @@ const subgroups = (f: FindingReport, document: Document, title: string): string 
     }
     const rows = g.rows.map((r) => `<tr><th scope="row">${esc(r.value || '(blank)')}</th>${shareCell(`subgroups|${g.attribute}|${r.value}|ai_accuracy`, r.ai_accuracy, () => false)}${shareCell(`subgroups|${g.attribute}|${r.value}|overreliance`, r.overreliance, tooFew)}</tr>`).join('');
     return `<h3>By ${esc(g.attribute)}</h3>${p(g.text)}
-${points.length > 0 ? inlinePlot(subgroupPlot(points), document, `The suggestion's accuracy (squares) and your over-reliance (triangles) for each ${g.attribute}`) : ''}
+${points.length > 0 ? inlinePlot(subgroupPlot(points), target, `The suggestion's accuracy (squares) and your over-reliance (triangles) for each ${g.attribute}`) : ''}
 <table><thead><tr><th scope="col">${esc(g.attribute)}</th><th scope="col">Suggestion right</th><th scope="col">You followed it when wrong</th></tr></thead><tbody>${rows}</tbody></table>`;
   }).join('');
   return `<section><h2>Where the suggestion is weaker${title}</h2>${parts}</section>`;

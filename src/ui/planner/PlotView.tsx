@@ -1,6 +1,7 @@
 /** An Observable Plot figure in the page, drawn by the shared renderer (src/io/plots/render.ts). */
 import { useEffect, useRef } from 'react';
 import { renderPlot, type PlotOptions } from '../../io/plots/render';
+import { liftStyleElements } from '../adopted-styles';
 
 export const PlotView = ({ options, label }: { options: PlotOptions; label: string }) => {
   const ref = useRef<HTMLDivElement>(null);
@@ -8,6 +9,7 @@ export const PlotView = ({ options, label }: { options: PlotOptions; label: stri
     const host = ref.current;
     if (!host) return;
     const node = renderPlot(options, document);
+    liftStyleElements(node); // the page's style policy blocks <style> elements; the CSS is adopted
     host.replaceChildren(node);
     return () => { host.replaceChildren(); };
   }, [options]);

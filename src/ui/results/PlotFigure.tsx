@@ -7,6 +7,7 @@ import { renderPlot, type PlotOptions } from '../../io/plots/render';
 import { getHost } from '../../host';
 import { signal } from '../signals';
 import { svgMarkup, svgToPng } from './plot-export';
+import { liftStyleElements } from '../adopted-styles';
 
 /** Window event that makes every plot on the page draw now (before printing). */
 export const DRAW_ALL_PLOTS = 'heed:draw-all-plots';
@@ -47,9 +48,12 @@ export const PlotFigure = ({ title, file, options, children, wide }: Props) => {
   const holder = useRef<HTMLDivElement>(null);
   const [status, setStatus] = useState('');
   const near = useNearViewport(holder);
+  const plotCss = useRef('');
   useEffect(() => {
     if (!near) return undefined;
     const node = renderPlot({ ...options, ariaLabel: title }, document);
+    // Plot's <style> elements would break the page's style policy; their CSS is adopted instead.
+    plotCss.current = liftStyleElements(node);
     node.setAttribute('role', 'img');
     // the whole figure is one image named by its title; Plot's labels on inner groups (no role) are not allowed there
     for (const inner of node.querySelectorAll('[aria-label]')) if (inner !== node) inner.removeAttribute('aria-label');
@@ -63,8 +67,8 @@ export const PlotFigure = ({ title, file, options, children, wide }: Props) => {
     try {
       const name = `${fileSafe(file)}.${kind}`;
       const result = kind === 'svg'
-        ? await getHost().saveFile(name, svgMarkup(node), 'image/svg+xml')
-        : await getHost().saveFile(name, await svgToPng(node), 'image/png');
+        ? await getHost().saveFile(name, svgMarkup(node, plotCss.current), 'image/svg+xml')
+        : await getHost().saveFile(name, await svgToPng(node, 2, plotCss.current), 'image/png');
       setStatus(result.handedTo === 'downloads' ? `${name} handed to the downloads.` : result.saved ? `Saved ${name}.` : 'Not saved.');
       signal('saved', { file: name });
     } catch (error) {

@@ -4,18 +4,27 @@
  */
 const SVG_NS = 'http://www.w3.org/2000/svg';
 
-/** The standalone markup of an SVG element (namespace added, white background kept). */
-export const svgMarkup = (svg: SVGSVGElement): string => {
+/**
+ * The standalone markup of an SVG element (namespace added, white background kept). `css` is the
+ * plot's own CSS, taken out of the page's copy (src/ui/adopted-styles.ts) and put back in the file.
+ */
+export const svgMarkup = (svg: SVGSVGElement, css = ''): string => {
   const copy = svg.cloneNode(true) as SVGSVGElement;
   copy.setAttribute('xmlns', SVG_NS);
+  if (css !== '') {
+    // The copy is never in the page, so this element is only written to the file.
+    const style = copy.ownerDocument.createElementNS(SVG_NS, 'style');
+    style.textContent = css;
+    copy.prepend(style);
+  }
   return `<?xml version="1.0" encoding="UTF-8"?>\n${new XMLSerializer().serializeToString(copy)}`;
 };
 
 /** PNG bytes of an SVG element, drawn at `scale` times its size. */
-export const svgToPng = async (svg: SVGSVGElement, scale = 2): Promise<Uint8Array> => {
+export const svgToPng = async (svg: SVGSVGElement, scale = 2, css = ''): Promise<Uint8Array> => {
   const width = Number(svg.getAttribute('width')) || svg.getBoundingClientRect().width;
   const height = Number(svg.getAttribute('height')) || svg.getBoundingClientRect().height;
-  const url = URL.createObjectURL(new Blob([svgMarkup(svg)], { type: 'image/svg+xml' }));
+  const url = URL.createObjectURL(new Blob([svgMarkup(svg, css)], { type: 'image/svg+xml' }));
   try {
     const image = new Image();
     image.decoding = 'sync';

@@ -31,6 +31,7 @@ describe('createMainWindow', () => {
       webPreferences: {
         sandbox: true, contextIsolation: true, nodeIntegration: false, webSecurity: true,
         nodeIntegrationInSubFrames: false, webviewTag: false, allowRunningInsecureContent: false,
+        disableBlinkFeatures: 'Auxclick',
         preload: '/app/dist-electron/preload.cjs',
       },
     });

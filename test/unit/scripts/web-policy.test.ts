@@ -11,7 +11,7 @@ describe('CONTENT_SECURITY_POLICY', () => {
       "default-src 'self'",
       "img-src 'self' blob: data:",
       "script-src 'self'",
-      "style-src 'self' 'unsafe-inline'",
+      "style-src 'self'",
       "object-src 'none'",
       "base-uri 'none'",
       "form-action 'none'",

@@ -4,7 +4,7 @@ import { describe, expect, it } from 'vitest';
 import { analyzeReads } from '../../../../src/analysis/engine';
 import { readerReport } from '../../../../src/analysis/reader-report/reader-report';
 import { plotDocument } from '../../../../src/cli/plot-document';
-import { reportPage } from '../../../../src/io/report/render-report';
+import { reportBody, reportPage } from '../../../../src/io/report/render-report';
 import { simulateReadRows } from '../../../../bench/simulate-log';
 
 const rows = simulateReadRows({ seed: 11, readers: 4, cases: 40 });
@@ -34,5 +34,19 @@ describe('reportPage', () => {
     expect(html).toMatch(/Reader R3/);
     for (const other of ['R1', 'R2', 'R4']) expect(html).not.toMatch(new RegExp(`\\b${other}\\b`));
     expect(html).toMatch(/Other readers \(3, not named\)/);
+  });
+  it('leaves the styles out of the markup for the app, handing each plot to the page first', () => {
+    const report = readerReport({ analysis, rows, readerId: 'R3', complete: true });
+    const inline = reportBody(report, { document: plotDocument() });
+    expect(inline).toContain('<style>');
+    const handed: string[] = [];
+    const outside = reportBody(report, {
+      document: plotDocument(), styles: 'outside',
+      beforeMarkup: (node) => { handed.push(node.tagName.toLowerCase()); for (const style of Array.from(node.querySelectorAll('style'))) style.remove(); },
+    });
+    expect(outside).not.toContain('<style');
+    expect(handed.length).toBe((inline.match(/<div class="plot">/g) ?? []).length);
+    expect(handed.length).toBeGreaterThan(2);
+    expect(outside).toContain('class="heed-plot"');
   });
 });
