@@ -20,6 +20,7 @@ import { plain, printResult, spread, spreadFigures, type Figure } from './suppor
 import { timedLaunch } from './support/launch-probe';
 import { loadNow, startCpuLoad } from './support/cpu-load';
 import { collectLatencyRecord, installLatencyProbe, pairTimings, resetLatencyRecord, type ReadTiming } from './support/latency-probe';
+import { measureIdbFloor, type IdbFloor } from './support/idb-floor';
 
 // reads per phase (quiet, then under load); the demo period has 120 main cases
 const READS = Number(process.env.HEED_BENCH_READS ?? 55);
@@ -83,14 +84,17 @@ try {
 
     const loadBefore = loadNow();
     const quiet = await phase('quiet', READS);
+    const floorQuiet = await measureIdbFloor(page, READS);
     const loadQuiet = loadNow();
     // Two CPU-bound processes beside the browser, started after a short settle so they count in the load
     const load = startCpuLoad(2);
     let loaded: ReadTiming[];
     let loadUnder: number;
+    let floorLoaded: IdbFloor;
     try {
       await new Promise((resolve) => { setTimeout(resolve, 3000); });
       loaded = await phase('under load', READS);
+      floorLoaded = await measureIdbFloor(page, READS);
       loadUnder = loadNow();
     } finally {
       load.stop();
@@ -102,11 +106,21 @@ try {
       ...spreadFigures(`${label}: Enter to saved (durable commit)`, spread(timings.map((t) => t.commitMs)), 'ms'),
       plain(`${label}: paint signal to frame after p50`, spread(timings.map((t) => t.frameAfterMs - t.paintedMs)).p50, 'ms'),
     ];
+    // The floor: bare IndexedDB transactions (strict durability) of an answer's size, same page (bench/support/idb-floor.ts)
+    const floorFigures = (label: string, floor: IdbFloor): Figure[] => [
+      ...spreadFigures(`${label} floor: one record, strict, to complete`, floor.one.commit, 'ms'),
+      ...spreadFigures(`${label} floor: one record, strict, to next frame`, floor.one.frame, 'ms'),
+      ...spreadFigures(`${label} floor: read + event, strict, to complete`, floor.two.commit, 'ms'),
+      ...spreadFigures(`${label} floor: read + event, relaxed, to complete`, floor.relaxed.commit, 'ms'),
+      ...spreadFigures(`${label} floor: 4 reads then read + event, strict, to complete`, floor.checked.commit, 'ms'),
+    ];
     const figures: Figure[] = [
       plain('first launch, fresh profile, to home ready (wall)', launch.wallMs, 'ms'),
       plain('first launch: navigation to ready (page)', launch.readyMs, 'ms'),
       ...phaseFigures('quiet', quiet, 25),
       ...phaseFigures('under load', loaded, 33),
+      ...floorFigures('quiet', floorQuiet),
+      ...floorFigures('under load', floorLoaded),
       plain('reads measured per phase', READS, 'reads'),
       plain('1-min load average after the quiet reads', loadQuiet, ''),
       plain('1-min load average after the reads under load', loadUnder, ''),
@@ -115,6 +129,7 @@ try {
       `reader ${reader}, sequence AU, period 1 (aided, concurrent); the ${practice} practice cases were read first and not measured`,
       `quiet: ${READS} reads with no load of our own (1-min load average ${loadBefore} before, ${loadQuiet} after; other work on the machine counts in it)`,
       `under load: the next ${READS} reads with 2 CPU-bound processes (node busy loops) running beside the browser; 1-min load average ${loadUnder} after`,
+      `floor: ${READS} bare IndexedDB transactions per shape after each phase, ${floorQuiet.bytes} bytes of JSON per answer (the last stored read and its event), spaced 60 ms; "to next frame" adds the wait for the first animation frame after the flush`,
       'first launch includes generating and storing the demo set; the cold-start target is for a stored profile (bench/cold-start.ts)',
       'screenshot of the reading view: bench-results/reading-view.png',
       machineNote('end'),

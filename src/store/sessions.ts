@@ -6,7 +6,7 @@
 import type { Bit } from '../core/read-log';
 import { applyCommit, currentPosition, positionAt, stepIndexOf, type CommittedAnswer, type Phase, type SessionItem, type SessionPosition } from '../core/session';
 import type { HeedDb } from './db';
-import { appendEvent } from './events';
+import { appendEvent, chainHead, chainKey, linkEvent } from './events';
 import type { StoredRead, StoredSession, StoredStudy, WashoutOverride } from './records';
 
 export const sessionId = (readerId: string, period: number): string => `${readerId}/${period}`;
@@ -82,22 +82,32 @@ const answered = (read: StoredRead | undefined, phase: Phase): boolean =>
  * plan, and a step is the current one exactly when it is unanswered and the step before it is
  * answered. Both are read inside the transaction, so a stale or repeated commit (a second window,
  * a double Enter) is refused there, with nothing written.
+ *
+ * Speed (the next case waits for this): every read the check needs (the stored session for its
+ * skips, this step's read, the step before's, the head of the study's hash chain) is issued at
+ * once, and the writes (read, event, a completed session) likewise, so the transaction costs two
+ * round trips to the database and one flush; none of the reads depends on another's result.
  */
 export const commitAnswerAndRead = (db: HeedDb, input: AnswerCommit): Promise<Committed> =>
   db.transaction('rw', db.reads, db.sessions, db.events, async () => {
     const { session } = input;
-    // skipped cases are read from the stored session: the caller's copy may predate a skip
-    const stored = await db.sessions.get(session.id);
-    const skipped = stored?.skipped;
-    const plan = { items: session.items, findings: input.findings, skipped };
-    const stepIndex = stepIndexOf(plan, input.step);
+    // the step and the one before it do not depend on skips (positionAt walks every item)
+    const stepIndex = stepIndexOf({ items: session.items, findings: input.findings }, input.step);
     const item = session.items[input.step.itemIndex];
     if (!item || stepIndex < 0) throw new Error(`session ${session.id} has no step ${input.step.itemIndex}/${input.step.finding}/${input.step.phase}`);
     const id = readId(session.id, item.caseId, input.step.finding);
-    const previous = await db.reads.get(id);
-    const before = stepIndex > 0 ? positionAt(plan, stepIndex - 1) : null;
+    const before = stepIndex > 0 ? positionAt({ items: session.items, findings: input.findings }, stepIndex - 1) : null;
     const beforeId = before && !before.done ? readId(session.id, before.item.caseId, before.step.finding) : null;
-    const beforeRead = beforeId === null ? undefined : beforeId === id ? previous : await db.reads.get(beforeId);
+    // skipped cases are read from the stored session: the caller's copy may predate a skip
+    const [stored, previous, beforeOther, head] = await Promise.all([
+      db.sessions.get(session.id),
+      db.reads.get(id),
+      beforeId === null || beforeId === id ? Promise.resolve(undefined) : db.reads.get(beforeId),
+      chainHead(db, chainKey(session.studyId)),
+    ]);
+    const beforeRead = beforeId === id ? previous : beforeOther;
+    const skipped = stored?.skipped;
+    const plan = { items: session.items, findings: input.findings, skipped };
     // the quick check: this step unanswered and the one before it answered; a skipped case, or a
     // step after one, takes the full walk (which knows the skips)
     const current = !(skipped ?? []).includes(item.caseId) && !answered(previous, input.step.phase)
@@ -116,18 +126,21 @@ export const commitAnswerAndRead = (db: HeedDb, input: AnswerCommit): Promise<Co
       aiPlanted: input.suggestion?.planted ?? false, cautionShown: input.cautionShown,
     };
     // The event carries the read as stored, so the chain covers the answer; the read keeps the link's hash.
-    const event = await appendEvent(db, session.studyId, input.step.phase === 'initial' ? 'initial-committed' : 'final-committed', {
+    const event = linkEvent(head, session.studyId, input.step.phase === 'initial' ? 'initial-committed' : 'final-committed', {
       sessionId: session.id, caseId: item.caseId, finding: input.step.finding, call: input.call, confidence: input.confidence, ms: input.ms,
       ...(input.rating == null ? {} : { rating: input.rating }),
       read: { ...read },
     });
     read.hash = event.hash;
-    await db.reads.put(read);
     const next = positionAt(plan, stepIndex + 1);
+    const writes: Promise<unknown>[] = [db.events.add(event), db.reads.put(read)];
     if (next.done) {
-      await db.sessions.update(session.id, { completedAt: new Date().toISOString() });
-      await appendEvent(db, session.studyId, 'session-completed', { sessionId: session.id });
+      writes.push(
+        db.sessions.update(session.id, { completedAt: new Date().toISOString() }),
+        db.events.add(linkEvent(event.hash, session.studyId, 'session-completed', { sessionId: session.id })),
+      );
     }
+    await Promise.all(writes);
     return { position: next, read };
   });
 
