@@ -21,10 +21,13 @@ import { timedLaunch } from './support/launch-probe';
 import { loadNow, startCpuLoad } from './support/cpu-load';
 import { collectLatencyRecord, installLatencyProbe, pairTimings, resetLatencyRecord, type ReadTiming } from './support/latency-probe';
 import { measureIdbFloor, type IdbFloor } from './support/idb-floor';
+import { commitPhases, installCommitPhases, resetCommitPhases, type CommitPhases } from './support/commit-phases';
 
 // reads per phase (quiet, then under load); the demo period has 120 main cases
 const READS = Number(process.env.HEED_BENCH_READS ?? 55);
 const SCREENSHOT_AT = Math.min(50, READS);
+// HEED_BENCH_PHASES=1 also splits each commit into its phases (bench/support/commit-phases.ts)
+const PHASES = Boolean(process.env.HEED_BENCH_PHASES);
 
 const app = await buildAndServe();
 const profile = benchProfileDir();
@@ -65,8 +68,11 @@ try {
       practice++;
     }
 
+    if (PHASES) await installCommitPhases(page);
+    const split = new Map<string, CommitPhases>();
     const phase = async (label: string, reads: number): Promise<ReadTiming[]> => {
       await resetLatencyRecord(page);
+      if (PHASES) await resetCommitPhases(page);
       for (let i = 1; i <= reads; i++) {
         if (await reading.isDone()) throw new Error(`the period ended during the ${label} reads, after ${i - 1} of ${reads}`);
         await reading.answerByKeys(i % 3 === 0 ? 1 : 0, 1 + (i % 9));
@@ -78,6 +84,7 @@ try {
       const timings = pairTimings(await collectLatencyRecord(page));
       if (timings.length !== reads) throw new Error(`recorded ${timings.length} Enter presses for ${reads} ${label} reads`);
       // HEED_BENCH_DUMP=1 prints every read: commit, paint and frame-after times in ms.
+      if (PHASES) split.set(label, await commitPhases(page, timings.map((t) => ({ enter: t.enterAt, saved: t.enterAt + t.commitMs, painted: t.enterAt + t.paintedMs }))));
       if (process.env.HEED_BENCH_DUMP) console.log(timings.map((t) => `${label} ${t.commitMs.toFixed(1)} ${t.paintedMs.toFixed(1)} ${t.frameAfterMs.toFixed(1)}`).join('\n'));
       return timings;
     };
@@ -105,7 +112,20 @@ try {
       ...spreadFigures(`${label}: Enter to frame after paint`, spread(timings.map((t) => t.frameAfterMs)), 'ms'),
       ...spreadFigures(`${label}: Enter to saved (durable commit)`, spread(timings.map((t) => t.commitMs)), 'ms'),
       plain(`${label}: paint signal to frame after p50`, spread(timings.map((t) => t.frameAfterMs - t.paintedMs)).p50, 'ms'),
+      ...phaseSplit(label),
     ];
+    const phaseSplit = (label: string): Figure[] => {
+      const p = split.get(label);
+      if (!p) return [];
+      const pair = (name: string, x: { p50: number; p95: number }): Figure[] => [plain(`${label}: ${name} p50`, x.p50, 'ms'), plain(`${label}: ${name} p95`, x.p95, 'ms')];
+      return [
+        ...pair('Enter to first request of the commit', p.toTransaction),
+        ...pair('first request to first write (step-check reads)', p.reads),
+        ...pair('first write to complete (writes + flush)', p.writeAndFlush),
+        ...pair('complete to saved signal', p.completeToSaved),
+        ...pair('saved to next case painted', p.savedToPainted),
+      ];
+    };
     // The floor: bare IndexedDB transactions (strict durability) of an answer's size, same page (bench/support/idb-floor.ts)
     const floorFigures = (label: string, floor: IdbFloor): Figure[] => [
       ...spreadFigures(`${label} floor: one record, strict, to complete`, floor.one.commit, 'ms'),
