@@ -2,7 +2,8 @@
  * Paired cold starts of two builds (diagnostic, not part of `npm run bench`): on a shared machine
  * the load moves a lot between runs, so two builds are compared launch by launch, alternating,
  * each on its own stored profile. Run: npx tsx bench/support/ab-cold.ts DIST_A DIST_B [rounds]
- * (two folders made by `vite build --outDir ...`). Prints the medians of each build's figures.
+ * (two folders made by `vite build --outDir ...`); HEED_AB_SERVER_A=path/to/static-server.mjs serves
+ * build A with another server module. Prints the medians of each build's figures.
  */
 import { median } from 'simple-statistics';
 import { startStaticServer } from '../../scripts/lib/static-server.mjs';
@@ -14,7 +15,15 @@ const [distA, distB] = process.argv.slice(2);
 const ROUNDS = Number(process.argv[4] ?? 6);
 if (!distA || !distB) throw new Error('usage: ab-cold.ts DIST_A DIST_B [rounds]');
 
-const sides = await Promise.all([distA, distB].map(async (root) => ({ root, server: await startStaticServer({ root }), profile: benchProfileDir(), runs: [] as Launch[] })));
+// HEED_AB_SERVER_A: another static-server module for build A (e.g. an older checkout's), so the
+// server's own headers are compared too
+type Serve = (options: { root: string }) => Promise<{ url: string; close: () => Promise<void> }>;
+const serverModule: unknown = process.env.HEED_AB_SERVER_A ? await import(process.env.HEED_AB_SERVER_A) : null;
+const serveA = serverModule !== null && typeof serverModule === 'object' && 'startStaticServer' in serverModule
+  ? (serverModule.startStaticServer as Serve) : startStaticServer;
+const sides = await Promise.all([distA, distB].map(async (root, i) => ({
+  root, server: await (i === 0 ? serveA : startStaticServer)({ root }), profile: benchProfileDir(), runs: [] as Launch[],
+})));
 console.log(machineNote('start'));
 try {
   // first launches: the demo set is generated on each profile

@@ -17,7 +17,21 @@ export const chainHead = async (db: HeedDb, key: string): Promise<string> =>
 export const appendEvent = async (db: HeedDb, studyId: string | null, type: string, detail: Record<string, unknown>): Promise<StoredEvent> => {
   const event = linkEvent(await chainHead(db, chainKey(studyId)), studyId, type, detail);
   event.seq = await db.events.add(event);
+  rememberHead(db, event.chain, event.hash);
   return event;
+};
+
+// The head each chain had after this connection's last append: a guess only (its transaction may
+// still abort, another window may append), which a caller must check against the stored head
+// inside its own transaction before relying on it.
+const heads = new WeakMap<HeedDb, Map<string, string>>();
+
+export const guessedHead = (db: HeedDb, chain: string): string | undefined => heads.get(db)?.get(chain);
+
+export const rememberHead = (db: HeedDb, chain: string, hash: string): void => {
+  const known = heads.get(db) ?? new Map<string, string>();
+  known.set(chain, hash);
+  heads.set(db, known);
 };
 
 /**

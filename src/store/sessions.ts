@@ -6,7 +6,7 @@
 import type { Bit } from '../core/read-log';
 import { applyCommit, currentPosition, positionAt, stepIndexOf, type CommittedAnswer, type Phase, type SessionItem, type SessionPosition } from '../core/session';
 import type { HeedDb } from './db';
-import { appendEvent, chainHead, chainKey, linkEvent } from './events';
+import { appendEvent, chainHead, chainKey, guessedHead, linkEvent, rememberHead } from './events';
 import type { StoredRead, StoredSession, StoredStudy, WashoutOverride } from './records';
 
 export const sessionId = (readerId: string, period: number): string => `${readerId}/${period}`;
@@ -88,7 +88,93 @@ const answered = (read: StoredRead | undefined, phase: Phase): boolean =>
  * once, and the writes (read, event, a completed session) likewise, so the transaction costs two
  * round trips to the database and one flush; none of the reads depends on another's result.
  */
-export const commitAnswerAndRead = (db: HeedDb, input: AnswerCommit): Promise<Committed> =>
+export const commitAnswerAndRead = async (db: HeedDb, input: AnswerCommit): Promise<Committed> => {
+  const item = input.session.items[input.step.itemIndex];
+  const head = guessedHead(db, chainKey(input.session.studyId));
+  // the first answer of a case (no earlier answer to carry over) with the chain's head known
+  if (item && head !== undefined && (input.step.phase === 'initial' || item.assistance !== 'sequential')) {
+    try {
+      return await commitInOneTrip(db, input, head);
+    } catch {
+      // the guess missed (or the commit is refused): nothing was written; the checked commit
+      // below decides, and gives the refusal its message
+    }
+  }
+  return commitChecked(db, input);
+};
+
+class GuessMissed extends Error {}
+
+/**
+ * The commit in one round trip to the database: the writes are issued together with the step
+ * check's reads, on the assumption that this is the current step, that the case has no answer yet
+ * and that the chain's head is the one this connection last wrote. The reads are issued first, so
+ * they see the database as it was before the writes; when any assumption proves wrong the
+ * transaction is aborted (nothing of it is stored) and the caller falls back to commitChecked.
+ */
+const commitInOneTrip = (db: HeedDb, input: AnswerCommit, guessed: string): Promise<Committed> =>
+  db.transaction('rw', db.reads, db.sessions, db.events, async () => {
+    const { session } = input;
+    const plan = { items: session.items, findings: input.findings, skipped: session.skipped };
+    const stepIndex = stepIndexOf(plan, input.step);
+    const item = session.items[input.step.itemIndex];
+    if (!item || stepIndex < 0) throw new GuessMissed();
+    const id = readId(session.id, item.caseId, input.step.finding);
+    const before = stepIndex > 0 ? positionAt(plan, stepIndex - 1) : null;
+    const beforeId = before && !before.done ? readId(session.id, before.item.caseId, before.step.finding) : null;
+    if (beforeId === id) throw new GuessMissed();
+    const chain = chainKey(session.studyId);
+    const checks = Promise.all([
+      db.sessions.get(session.id),
+      db.reads.get(id),
+      beforeId === null ? Promise.resolve(undefined) : db.reads.get(beforeId),
+      chainHead(db, chain),
+    ]);
+    const { read, events, next } = answerRecords(input, item, id, positionAt(plan, stepIndex), undefined, guessed, stepIndex);
+    const writes = Promise.all([
+      ...events.map((e) => db.events.add(e)), db.reads.put(read),
+      ...(next.done ? [db.sessions.update(session.id, { completedAt: new Date().toISOString() })] : []),
+    ]);
+    writes.catch(() => undefined); // when the check fails, the abort rejects them
+    const [stored, previous, beforeRead, head] = await checks;
+    const current = stored !== undefined && head === guessed && previous === undefined
+      && !(stored.skipped ?? []).includes(item.caseId)
+      && (before === null || before.done || answered(beforeRead, before.step.phase));
+    if (!current) throw new GuessMissed();
+    await writes;
+    rememberHead(db, chain, events[events.length - 1]?.hash ?? guessed);
+    return { position: next, read };
+  });
+
+/**
+ * The read and its chain links (the answer event, and the session-completed event after the last
+ * answer), linked after `head`. Throws what applyCommit throws for an answer the step refuses.
+ */
+const answerRecords = (input: AnswerCommit, item: SessionItem, id: string, position: SessionPosition, previous: StoredRead | undefined, head: string, stepIndex: number) => {
+  const { session } = input;
+  const answer = applyCommit(position, input.step, previous ? toAnswer(previous) : null, {
+    call: input.call, confidence: input.confidence, ms: input.ms, ...(input.rating == null ? {} : { rating: input.rating }),
+  });
+  const read: StoredRead = {
+    id, sessionId: session.id, studyId: session.studyId, readerId: session.readerId, period: session.period,
+    caseId: item.caseId, finding: input.step.finding, initial: answer.initial, final: answer.final,
+    shownAt: previous?.shownAt ?? input.shownAt,
+    aiCall: input.suggestion?.call ?? null, aiScore: input.suggestion?.score ?? null,
+    aiPlanted: input.suggestion?.planted ?? false, cautionShown: input.cautionShown,
+  };
+  // The event carries the read as stored, so the chain covers the answer; the read keeps the link's hash.
+  const event = linkEvent(head, session.studyId, input.step.phase === 'initial' ? 'initial-committed' : 'final-committed', {
+    sessionId: session.id, caseId: item.caseId, finding: input.step.finding, call: input.call, confidence: input.confidence, ms: input.ms,
+    ...(input.rating == null ? {} : { rating: input.rating }),
+    read: { ...read },
+  });
+  read.hash = event.hash;
+  const next = positionAt({ items: session.items, findings: input.findings }, stepIndex + 1);
+  const events = next.done ? [event, linkEvent(event.hash, session.studyId, 'session-completed', { sessionId: session.id })] : [event];
+  return { read, events, next };
+};
+
+const commitChecked = (db: HeedDb, input: AnswerCommit): Promise<Committed> =>
   db.transaction('rw', db.reads, db.sessions, db.events, async () => {
     const { session } = input;
     // the step and the one before it do not depend on skips (positionAt walks every item)
@@ -115,32 +201,11 @@ export const commitAnswerAndRead = (db: HeedDb, input: AnswerCommit): Promise<Co
     // otherwise the position comes from all the session's answers (and its skips): applyCommit then
     // refuses any step but that one, naming the step that is current
     const position = current ? positionAt(plan, stepIndex) : await sessionPosition(db, stored ?? session, input.findings);
-    const answer = applyCommit(position, input.step, previous ? toAnswer(previous) : null, {
-      call: input.call, confidence: input.confidence, ms: input.ms, ...(input.rating == null ? {} : { rating: input.rating }),
-    });
-    const read: StoredRead = {
-      id, sessionId: session.id, studyId: session.studyId, readerId: session.readerId, period: session.period,
-      caseId: item.caseId, finding: input.step.finding, initial: answer.initial, final: answer.final,
-      shownAt: previous?.shownAt ?? input.shownAt,
-      aiCall: input.suggestion?.call ?? null, aiScore: input.suggestion?.score ?? null,
-      aiPlanted: input.suggestion?.planted ?? false, cautionShown: input.cautionShown,
-    };
-    // The event carries the read as stored, so the chain covers the answer; the read keeps the link's hash.
-    const event = linkEvent(head, session.studyId, input.step.phase === 'initial' ? 'initial-committed' : 'final-committed', {
-      sessionId: session.id, caseId: item.caseId, finding: input.step.finding, call: input.call, confidence: input.confidence, ms: input.ms,
-      ...(input.rating == null ? {} : { rating: input.rating }),
-      read: { ...read },
-    });
-    read.hash = event.hash;
-    const next = positionAt(plan, stepIndex + 1);
-    const writes: Promise<unknown>[] = [db.events.add(event), db.reads.put(read)];
-    if (next.done) {
-      writes.push(
-        db.sessions.update(session.id, { completedAt: new Date().toISOString() }),
-        db.events.add(linkEvent(event.hash, session.studyId, 'session-completed', { sessionId: session.id })),
-      );
-    }
+    const { read, events, next } = answerRecords(input, item, id, position, previous, head, stepIndex);
+    const writes: Promise<unknown>[] = [...events.map((e) => db.events.add(e)), db.reads.put(read)];
+    if (next.done) writes.push(db.sessions.update(session.id, { completedAt: new Date().toISOString() }));
     await Promise.all(writes);
+    rememberHead(db, chainKey(session.studyId), events[events.length - 1]?.hash ?? head);
     return { position: next, read };
   });
 
