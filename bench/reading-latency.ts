@@ -26,6 +26,7 @@ import { commitPhases, installCommitPhases, resetCommitPhases, type CommitPhases
 // reads per phase (quiet, then under load); the demo period has 120 main cases
 const READS = Number(process.env.HEED_BENCH_READS ?? 55);
 const SCREENSHOT_AT = Math.min(50, READS);
+// HEED_BENCH_TRACE=file.json also records a Chrome trace of the quiet reads.
 // HEED_BENCH_PHASES=1 also splits each commit into its phases (bench/support/commit-phases.ts)
 const PHASES = Boolean(process.env.HEED_BENCH_PHASES);
 
@@ -90,7 +91,11 @@ try {
     };
 
     const loadBefore = loadNow();
+    // HEED_BENCH_TRACE=file.json records a Chrome trace of the quiet reads (CDP Tracing)
+    const trace = process.env.HEED_BENCH_TRACE;
+    if (trace) await launch.chrome.browser.startTracing(page, { path: trace, categories: ['devtools.timeline', 'disabled-by-default-devtools.timeline', 'blink.user_timing', 'IndexedDB', 'toplevel', 'v8.execute'] });
     const quiet = await phase('quiet', READS);
+    if (trace) await launch.chrome.browser.stopTracing();
     const floorQuiet = await measureIdbFloor(page, READS);
     const loadQuiet = loadNow();
     // Two CPU-bound processes beside the browser, started after a short settle so they count in the load
