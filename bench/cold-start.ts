@@ -40,6 +40,12 @@ try {
     plain(`relaunch: navigation to ready (page), median`, med((l) => l.readyMs), 'ms'),
     plain(`relaunch: navigation to app mounted (page), median`, med((l) => l.mountedMs ?? Number.NaN), 'ms'),
     plain(`relaunch to ready, slowest of ${RUNS} (wall)`, Math.max(...runs.map((l) => l.wallMs)), 'ms'),
+    // where the page's part goes (page time after navigation start, medians)
+    plain('relaunch: navigation to scripts and styles loaded, median', med((l) => l.breakdown.scriptsLoadedMs), 'ms'),
+    plain('relaunch: script and style bytes over the network, median', med((l) => l.breakdown.scriptBytesFromNetwork), 'bytes'),
+    plain('relaunch: navigation to entry module run (DOMContentLoaded), median', med((l) => l.breakdown.domContentLoadedMs), 'ms'),
+    plain('relaunch: navigation to first indexedDB.open, median', med((l) => l.breakdown.dbOpenCalledMs ?? Number.NaN), 'ms'),
+    plain('relaunch: navigation to database open, median', med((l) => l.breakdown.dbOpenedMs ?? Number.NaN), 'ms'),
   ];
   notes.push(
     `relaunch wall times: ${runs.map((l) => Math.round(l.wallMs)).join(', ')} ms`,

@@ -20,10 +20,15 @@ import { plain, printResult, spread, spreadFigures, type Figure } from './suppor
 import { timedLaunch } from './support/launch-probe';
 import { loadNow, startCpuLoad } from './support/cpu-load';
 import { collectLatencyRecord, installLatencyProbe, pairTimings, resetLatencyRecord, type ReadTiming } from './support/latency-probe';
+import { measureIdbFloor, type IdbFloor } from './support/idb-floor';
+import { commitPhases, installCommitPhases, resetCommitPhases, type CommitPhases } from './support/commit-phases';
 
 // reads per phase (quiet, then under load); the demo period has 120 main cases
 const READS = Number(process.env.HEED_BENCH_READS ?? 55);
 const SCREENSHOT_AT = Math.min(50, READS);
+// HEED_BENCH_TRACE=file.json also records a Chrome trace of the quiet reads.
+// HEED_BENCH_PHASES=1 also splits each commit into its phases (bench/support/commit-phases.ts)
+const PHASES = Boolean(process.env.HEED_BENCH_PHASES);
 
 const app = await buildAndServe();
 const profile = benchProfileDir();
@@ -64,8 +69,11 @@ try {
       practice++;
     }
 
+    if (PHASES) await installCommitPhases(page);
+    const split = new Map<string, CommitPhases>();
     const phase = async (label: string, reads: number): Promise<ReadTiming[]> => {
       await resetLatencyRecord(page);
+      if (PHASES) await resetCommitPhases(page);
       for (let i = 1; i <= reads; i++) {
         if (await reading.isDone()) throw new Error(`the period ended during the ${label} reads, after ${i - 1} of ${reads}`);
         await reading.answerByKeys(i % 3 === 0 ? 1 : 0, 1 + (i % 9));
@@ -77,20 +85,28 @@ try {
       const timings = pairTimings(await collectLatencyRecord(page));
       if (timings.length !== reads) throw new Error(`recorded ${timings.length} Enter presses for ${reads} ${label} reads`);
       // HEED_BENCH_DUMP=1 prints every read: commit, paint and frame-after times in ms.
+      if (PHASES) split.set(label, await commitPhases(page, timings.map((t) => ({ enter: t.enterAt, saved: t.enterAt + t.commitMs, painted: t.enterAt + t.paintedMs }))));
       if (process.env.HEED_BENCH_DUMP) console.log(timings.map((t) => `${label} ${t.commitMs.toFixed(1)} ${t.paintedMs.toFixed(1)} ${t.frameAfterMs.toFixed(1)}`).join('\n'));
       return timings;
     };
 
     const loadBefore = loadNow();
+    // HEED_BENCH_TRACE=file.json records a Chrome trace of the quiet reads (CDP Tracing)
+    const trace = process.env.HEED_BENCH_TRACE;
+    if (trace) await launch.chrome.browser.startTracing(page, { path: trace, categories: ['devtools.timeline', 'disabled-by-default-devtools.timeline', 'blink.user_timing', 'IndexedDB', 'toplevel', 'v8.execute'] });
     const quiet = await phase('quiet', READS);
+    if (trace) await launch.chrome.browser.stopTracing();
+    const floorQuiet = await measureIdbFloor(page, READS);
     const loadQuiet = loadNow();
     // Two CPU-bound processes beside the browser, started after a short settle so they count in the load
     const load = startCpuLoad(2);
     let loaded: ReadTiming[];
     let loadUnder: number;
+    let floorLoaded: IdbFloor;
     try {
       await new Promise((resolve) => { setTimeout(resolve, 3000); });
       loaded = await phase('under load', READS);
+      floorLoaded = await measureIdbFloor(page, READS);
       loadUnder = loadNow();
     } finally {
       load.stop();
@@ -101,12 +117,35 @@ try {
       ...spreadFigures(`${label}: Enter to frame after paint`, spread(timings.map((t) => t.frameAfterMs)), 'ms'),
       ...spreadFigures(`${label}: Enter to saved (durable commit)`, spread(timings.map((t) => t.commitMs)), 'ms'),
       plain(`${label}: paint signal to frame after p50`, spread(timings.map((t) => t.frameAfterMs - t.paintedMs)).p50, 'ms'),
+      ...phaseSplit(label),
+    ];
+    const phaseSplit = (label: string): Figure[] => {
+      const p = split.get(label);
+      if (!p) return [];
+      const pair = (name: string, x: { p50: number; p95: number }): Figure[] => [plain(`${label}: ${name} p50`, x.p50, 'ms'), plain(`${label}: ${name} p95`, x.p95, 'ms')];
+      return [
+        ...pair('Enter to first request of the commit', p.toTransaction),
+        ...pair('first request to first write (step-check reads)', p.reads),
+        ...pair('first write to complete (writes + flush)', p.writeAndFlush),
+        ...pair('complete to saved signal', p.completeToSaved),
+        ...pair('saved to next case painted', p.savedToPainted),
+      ];
+    };
+    // The floor: bare IndexedDB transactions (strict durability) of an answer's size, same page (bench/support/idb-floor.ts)
+    const floorFigures = (label: string, floor: IdbFloor): Figure[] => [
+      ...spreadFigures(`${label} floor: one record, strict, to complete`, floor.one.commit, 'ms'),
+      ...spreadFigures(`${label} floor: one record, strict, to next frame`, floor.one.frame, 'ms'),
+      ...spreadFigures(`${label} floor: read + event, strict, to complete`, floor.two.commit, 'ms'),
+      ...spreadFigures(`${label} floor: read + event, relaxed, to complete`, floor.relaxed.commit, 'ms'),
+      ...spreadFigures(`${label} floor: 4 reads then read + event, strict, to complete`, floor.checked.commit, 'ms'),
     ];
     const figures: Figure[] = [
       plain('first launch, fresh profile, to home ready (wall)', launch.wallMs, 'ms'),
       plain('first launch: navigation to ready (page)', launch.readyMs, 'ms'),
       ...phaseFigures('quiet', quiet, 25),
       ...phaseFigures('under load', loaded, 33),
+      ...floorFigures('quiet', floorQuiet),
+      ...floorFigures('under load', floorLoaded),
       plain('reads measured per phase', READS, 'reads'),
       plain('1-min load average after the quiet reads', loadQuiet, ''),
       plain('1-min load average after the reads under load', loadUnder, ''),
@@ -115,6 +154,7 @@ try {
       `reader ${reader}, sequence AU, period 1 (aided, concurrent); the ${practice} practice cases were read first and not measured`,
       `quiet: ${READS} reads with no load of our own (1-min load average ${loadBefore} before, ${loadQuiet} after; other work on the machine counts in it)`,
       `under load: the next ${READS} reads with 2 CPU-bound processes (node busy loops) running beside the browser; 1-min load average ${loadUnder} after`,
+      `floor: ${READS} bare IndexedDB transactions per shape after each phase, ${floorQuiet.bytes} bytes of JSON per answer (the last stored read and its event), spaced 60 ms; "to next frame" adds the wait for the first animation frame after the flush`,
       'first launch includes generating and storing the demo set; the cold-start target is for a stored profile (bench/cold-start.ts)',
       'screenshot of the reading view: bench-results/reading-view.png',
       machineNote('end'),

@@ -35,7 +35,7 @@ const recordSchema = z.object({
 export type LatencyRecord = z.infer<typeof recordSchema>;
 
 /** One committed read: Enter to saved, Enter to the next case painted, Enter to the frame after. */
-export type ReadTiming = { commitMs: number; paintedMs: number; frameAfterMs: number; nextCase: string };
+export type ReadTiming = { commitMs: number; paintedMs: number; frameAfterMs: number; nextCase: string; enterAt: number };
 
 export const installLatencyProbe = async (page: Page): Promise<void> => { await page.evaluate(INSTALL); };
 
@@ -72,5 +72,5 @@ export const pairTimings = (r: LatencyRecord): ReadTiming[] =>
     if (saved === undefined || saved > nextEnter) throw new Error(`read ${i + 1}: no "saved" signal between this Enter and the next`);
     if (!painted || painted.at > nextEnter) throw new Error(`read ${i + 1}: no "case-painted" signal between this Enter and the next`);
     if (!frame) throw new Error(`read ${i + 1}: the frame after the paint was never recorded`);
-    return { commitMs: saved - enter, paintedMs: painted.at - enter, frameAfterMs: frame.at - enter, nextCase: painted.caseId };
+    return { commitMs: saved - enter, paintedMs: painted.at - enter, frameAfterMs: frame.at - enter, nextCase: painted.caseId, enterAt: enter };
   });

@@ -12,8 +12,18 @@ const PROBE_KEY = '__heedLaunchProbe';
 
 // A string, not a function: it must run before the app's own scripts, untouched by any transpiler.
 const INIT_SCRIPT = `(() => {
-  const probe = { mountedAt: null, readyAt: null, readyScreen: null, workers: 0 };
+  const probe = { mountedAt: null, readyAt: null, readyScreen: null, workers: 0, dbOpenCalledAt: null, dbOpenedAt: null };
   Reflect.set(window, ${JSON.stringify(PROBE_KEY)}, probe);
+  // when the app first asks IndexedDB for its database, and when that open succeeds
+  const nativeOpen = IDBFactory.prototype.open;
+  IDBFactory.prototype.open = function (...args) {
+    const request = nativeOpen.apply(this, args);
+    if (probe.dbOpenCalledAt === null) {
+      probe.dbOpenCalledAt = performance.now();
+      request.addEventListener('success', () => { if (probe.dbOpenedAt === null) probe.dbOpenedAt = performance.now(); });
+    }
+    return request;
+  };
   window.addEventListener('heed:mounted', (e) => { if (probe.mountedAt === null) probe.mountedAt = e.detail.at; });
   window.addEventListener('heed:ready', (e) => {
     if (probe.readyAt === null) { probe.readyAt = e.detail.at; probe.readyScreen = e.detail.screen; }
@@ -27,8 +37,26 @@ const probeSchema = z.object({
   readyAt: z.number(),
   readyScreen: z.string(),
   workers: z.number().int(),
+  dbOpenCalledAt: z.number().nullable(),
+  dbOpenedAt: z.number().nullable(),
   timeOrigin: z.number(),
+  scriptsLoadedAt: z.number(),
+  scriptBytesFromNetwork: z.number(),
+  domContentLoadedAt: z.number(),
 });
+
+/** The page's part of a launch, in page time (ms after navigation start), for the breakdown. */
+export type LaunchBreakdown = {
+  /** the last of the app's scripts and styles fetched (resource timing responseEnd) */
+  scriptsLoadedMs: number;
+  /** bytes of them that came over the network (0 when all came from the browser's cache) */
+  scriptBytesFromNetwork: number;
+  /** DOMContentLoaded: the entry module evaluated */
+  domContentLoadedMs: number;
+  /** the app's first indexedDB.open, and its success */
+  dbOpenCalledMs: number | null;
+  dbOpenedMs: number | null;
+};
 
 export type Launch = {
   chrome: RunningChromium;
@@ -42,6 +70,7 @@ export type Launch = {
   readyMs: number;
   /** Workers the page created (1 when the demo set was generated) */
   workers: number;
+  breakdown: LaunchBreakdown;
 };
 
 export const timedLaunch = async (profileDir: string, url: string): Promise<Launch> => {
@@ -51,12 +80,23 @@ export const timedLaunch = async (profileDir: string, url: string): Promise<Laun
   await chrome.page.goto(url);
   await waitForSignal(chrome.page, 'ready');
   const seenAt = Date.now();
-  const probe = probeSchema.parse(await chrome.page.evaluate(
-    (key) => ({ ...Reflect.get(window, key), timeOrigin: performance.timeOrigin }), PROBE_KEY,
-  ));
+  const probe = probeSchema.parse(await chrome.page.evaluate((key) => {
+    const resources = performance.getEntriesByType('resource').filter((e): e is PerformanceResourceTiming => e instanceof PerformanceResourceTiming && /\.(js|css)$/.test(new URL(e.name).pathname));
+    const nav = performance.getEntriesByType('navigation')[0];
+    return {
+      ...Reflect.get(window, key), timeOrigin: performance.timeOrigin,
+      scriptsLoadedAt: resources.reduce((m, e) => Math.max(m, e.responseEnd), 0),
+      scriptBytesFromNetwork: resources.reduce((sum, e) => sum + e.transferSize, 0),
+      domContentLoadedAt: nav instanceof PerformanceNavigationTiming ? nav.domContentLoadedEventStart : 0,
+    };
+  }, PROBE_KEY));
   if (probe.readyScreen !== 'home') throw new Error(`expected the home screen to be ready first, got "${probe.readyScreen}"`);
   return {
     chrome, wallMs: seenAt - spawnedAt, browserStartMs: probe.timeOrigin - spawnedAt,
     mountedMs: probe.mountedAt, readyMs: probe.readyAt, workers: probe.workers,
+    breakdown: {
+      scriptsLoadedMs: probe.scriptsLoadedAt, scriptBytesFromNetwork: probe.scriptBytesFromNetwork,
+      domContentLoadedMs: probe.domContentLoadedAt, dbOpenCalledMs: probe.dbOpenCalledAt, dbOpenedMs: probe.dbOpenedAt,
+    },
   };
 };

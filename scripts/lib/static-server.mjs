@@ -22,6 +22,12 @@ const hostAllowed = (hostHeader, port) =>
 
 const isInside = (root, file) => file === root || file.startsWith(root + path.sep);
 
+// Vite names built assets after their content (assets/name-HASH.js), so a name never changes
+// meaning: the browser may keep them, which also lets it reuse its compiled code on the next
+// launch. Everything else (index.html) is asked for again each time.
+const HASHED_ASSET = /^\/assets\/[^/]+-[A-Za-z0-9_-]{8,}\.[a-z0-9]+$/;
+export const cacheControlFor = (pathname) => (HASHED_ASSET.test(pathname) ? 'public, max-age=31536000, immutable' : 'no-cache');
+
 const handler = (root, realRoot, getPort, token, backups) => async (req, res) => {
   if (!hostAllowed(req.headers.host, getPort())) return send(res, 421, 'wrong host\n');
   if (backups && (req.url === BACKUP_PATH || req.url?.startsWith(`${BACKUP_PATH}?`) || req.url?.startsWith(`${BACKUP_PATH}/`))) {
@@ -52,7 +58,7 @@ const handler = (root, realRoot, getPort, token, backups) => async (req, res) =>
       ...securityHeaders(),
       'Content-Type': contentTypeFor(real),
       'Content-Length': String(info.size),
-      'Cache-Control': 'no-cache',
+      'Cache-Control': cacheControlFor(pathname),
     });
     if (req.method === 'HEAD') return res.end();
     createReadStream(real).on('error', () => res.destroy()).pipe(res);

@@ -25,8 +25,7 @@ const lockRecord = async (db: HeedDb): Promise<LockRecord | undefined> => {
 };
 
 export const readLock = async (db: HeedDb): Promise<LockInfo> => {
-  const record = await lockRecord(db);
-  const state = await db.settings.get('lock-state');
+  const [record, state] = await Promise.all([lockRecord(db), db.settings.get('lock-state')]);
   return {
     hasPassphrase: record !== undefined,
     locked: record !== undefined && state?.key === 'lock-state' && state.locked,

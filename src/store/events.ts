@@ -15,12 +15,33 @@ export const chainHead = async (db: HeedDb, key: string): Promise<string> =>
  * written in that one transaction, so two windows can never fork a chain.
  */
 export const appendEvent = async (db: HeedDb, studyId: string | null, type: string, detail: Record<string, unknown>): Promise<StoredEvent> => {
-  const chain = chainKey(studyId);
-  const prev = await chainHead(db, chain);
-  const at = new Date().toISOString();
-  const event: StoredEvent = { at, studyId, type, detail, chain, prev, hash: linkHash(prev, { at, type, detail }) };
+  const event = linkEvent(await chainHead(db, chainKey(studyId)), studyId, type, detail);
   event.seq = await db.events.add(event);
+  rememberHead(db, event.chain, event.hash);
   return event;
+};
+
+// The head each chain had after this connection's last append: a guess only (its transaction may
+// still abort, another window may append), which a caller must check against the stored head
+// inside its own transaction before relying on it.
+const heads = new WeakMap<HeedDb, Map<string, string>>();
+
+export const guessedHead = (db: HeedDb, chain: string): string | undefined => heads.get(db)?.get(chain);
+
+export const rememberHead = (db: HeedDb, chain: string, hash: string): void => {
+  const known = heads.get(db) ?? new Map<string, string>();
+  known.set(chain, hash);
+  heads.set(db, known);
+};
+
+/**
+ * The next link of a chain whose head `prev` was read in the current transaction, not yet stored:
+ * a caller that must be quick (the answer commit) reads the head beside its other reads and adds
+ * the event beside its other writes, all inside that one transaction.
+ */
+export const linkEvent = (prev: string, studyId: string | null, type: string, detail: Record<string, unknown>): StoredEvent => {
+  const at = new Date().toISOString();
+  return { at, studyId, type, detail, chain: chainKey(studyId), prev, hash: linkHash(prev, { at, type, detail }) };
 };
 
 export const eventsOfStudy = (db: HeedDb, studyId: string): Promise<StoredEvent[]> =>

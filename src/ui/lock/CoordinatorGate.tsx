@@ -5,9 +5,10 @@
  * passphrase nothing is locked, and the start page asks for one.
  */
 import { useCallback, useEffect, useState, type ReactNode } from 'react';
-import { engageLock, readLock, type LockInfo } from '../../store/coordinator-lock';
+import { engageLock, type LockInfo } from '../../store/coordinator-lock';
 import { useDb } from '../db-context';
 import type { Screen } from '../state/app-state';
+import { lockAtLaunch } from '../startup';
 import { createIdleTimer } from './idle-timer';
 import { LockScreen } from './LockScreen';
 import { LockSetup } from './LockSetup';
@@ -21,7 +22,8 @@ export const CoordinatorGate = ({ screen, children }: { screen: Screen; children
   const db = useDb();
   const [info, setInfo] = useState<LockInfo | null>(null);
   const [dismissed, setDismissed] = useState(setupDismissed);
-  const refresh = useCallback(() => { readLock(db).then(setInfo, () => setInfo(null)); }, [db]);
+  // the first read is the one started at launch (src/ui/startup.ts)
+  const refresh = useCallback(() => { lockAtLaunch(db).then(setInfo, () => setInfo(null)); }, [db]);
   const readerFlow = isReaderFlow(screen);
 
   // read again on every change of screen: another window may have locked in between

@@ -4,10 +4,10 @@
  * them never redraws pixels.
  */
 import { useLayoutEffect, useRef, useState, type PointerEvent, type WheelEvent } from 'react';
-import { applyWindow, type GrayImage } from './gray-image';
+import { DEFAULT_LEVEL, DEFAULT_WIDTH, windowedPixels, type GrayImage } from './gray-image';
 
 export type View = { zoom: number; panX: number; panY: number; level: number; width: number };
-export const DEFAULT_VIEW: View = { zoom: 1, panX: 0, panY: 0, level: 128, width: 256 };
+export const DEFAULT_VIEW: View = { zoom: 1, panX: 0, panY: 0, level: DEFAULT_LEVEL, width: DEFAULT_WIDTH };
 
 type Props = {
   image: GrayImage | null;
@@ -22,30 +22,32 @@ export const ImageViewport = ({ image, view, onView, hidden, onDrawn }: Props) =
   const canvas = useRef<HTMLCanvasElement>(null);
   const frame = useRef<HTMLDivElement>(null);
   const drag = useRef<{ x: number; y: number; panX: number; panY: number } | null>(null);
-  const [fit, setFit] = useState(1);
+  // the frame's size, kept by a ResizeObserver: a new case reads no layout (no forced reflow)
+  const [box, setBox] = useState<{ width: number; height: number } | null>(null);
 
   useLayoutEffect(() => {
     const element = canvas.current;
     if (!element || !image) return;
-    element.width = image.width;
-    element.height = image.height;
+    // resizing a canvas clears and reallocates it: only when the size changes
+    if (element.width !== image.width) element.width = image.width;
+    if (element.height !== image.height) element.height = image.height;
     const context = element.getContext('2d');
     if (!context) return;
-    const pixels = context.createImageData(image.width, image.height);
-    applyWindow(image, view.level, view.width, pixels.data);
-    context.putImageData(pixels, 0, 0);
+    context.putImageData(windowedPixels(image, view.level, view.width), 0, 0);
     onDrawn();
   }, [image, view.level, view.width, onDrawn]);
 
   useLayoutEffect(() => {
     const element = frame.current;
-    if (!element || !image) return;
-    const measure = () => setFit(Math.min(element.clientWidth / image.width, element.clientHeight / image.height));
-    measure();
-    const observer = new ResizeObserver(measure);
+    if (!element) return;
+    const observer = new ResizeObserver((entries) => {
+      const size = entries[entries.length - 1]?.contentRect;
+      if (size) setBox((old) => (old && old.width === size.width && old.height === size.height ? old : { width: size.width, height: size.height }));
+    });
     observer.observe(element);
     return () => observer.disconnect();
-  }, [image]);
+  }, []);
+  const fit = image && box ? Math.min(box.width / image.width, box.height / image.height) : 1;
 
   const onWheel = (event: WheelEvent) => {
     const factor = event.deltaY < 0 ? 1.15 : 1 / 1.15;

@@ -4,6 +4,7 @@
  * when the case's pixels are drawn.
  */
 import { useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState } from 'react';
+import { flushSync } from 'react-dom';
 import { elapsedMs, pauseClock, resumeClock, startClock, type ActiveClock } from '../../core/active-clock';
 import { callFromRating, defaultAnswerScale } from '../../core/answer-scale';
 import type { Bit } from '../../core/read-log';
@@ -31,6 +32,9 @@ import { useReadingSession } from './use-reading-session';
 
 type Props = { studyId: string; sessionId: string; notice: Notice | null };
 
+/** A save that takes longer than this shows the answer buttons as busy; a quicker one renders nothing until it is done. */
+const SHOW_BUSY_AFTER_MS = 150;
+
 /** Logs a session moment; a failed log line must not interrupt reading, so it is reported, not thrown. */
 const logMoment = (...args: Parameters<typeof logSessionMoment>): void => {
   logSessionMoment(...args).catch((e: unknown) => actions.notify({ kind: 'error', text: `Could not log ${args[2]}: ${String(e)}` }));
@@ -49,7 +53,10 @@ export const ReadingScreen = ({ studyId, sessionId, notice }: Props) => {
   const [call, setCall] = useState<Bit | null>(null);
   const [confidence, setConfidence] = useState<number | null>(null);
   const [rating, setRating] = useState<number | null>(null);
+  // busy while an answer or a skip is being stored: the ref guards at once, the state (buttons
+  // shown disabled) only when a save takes long enough to be seen, so a quick commit renders once
   const [busy, setBusy] = useState(false);
+  const busyNow = useRef(false);
   const [paused, setPaused] = useState(false);
   const pausedNow = useRef(false);
   // interludes already continued from, keyed `${kind}/${caseId}`
@@ -92,17 +99,25 @@ export const ReadingScreen = ({ studyId, sessionId, notice }: Props) => {
 
   // Each new case loads the next case's images ahead, so they can be drawn in its first render.
   const itemIndex = position && !position.done ? position.step.itemIndex : -1;
+  // Started after this case's frame is painted, so decoding the next image never delays it.
   useEffect(() => {
     if (!caseRecord || !cache || !loaded || itemIndex < 0) return;
-    const next = loaded.session.items[itemIndex + 1];
-    const nextPaths = next ? loaded.cases.get(next.caseId)?.images ?? [] : [];
-    cache.forget(new Set([...caseRecord.images, ...nextPaths]));
-    for (const path of nextPaths) cache.get(path).catch(() => undefined); // a failure shows when that case is reached
+    let timer: ReturnType<typeof setTimeout> | undefined;
+    const frame = requestAnimationFrame(() => {
+      timer = setTimeout(() => {
+        const next = loaded.session.items[itemIndex + 1];
+        const nextPaths = next ? loaded.cases.get(next.caseId)?.images ?? [] : [];
+        cache.forget(new Set([...caseRecord.images, ...nextPaths]));
+        for (const path of nextPaths) cache.get(path).catch(() => undefined); // a failure shows when that case is reached
+      }, 0);
+    });
+    return () => { cancelAnimationFrame(frame); clearTimeout(timer); };
   }, [caseRecord, cache, loaded, itemIndex]);
 
   const imagePath = caseRecord?.images[imageIndex] ?? caseRecord?.images[0];
   useEffect(() => {
-    if (!cache || !imagePath) return;
+    // a prefetched image is drawn from the cache in the case's first render: nothing to wait for
+    if (!cache || !imagePath || cache.peek(imagePath)) return;
     let live = true;
     cache.get(imagePath).then((decoded) => { if (live) setLoadedImage({ path: imagePath, image: decoded }); }, (e: unknown) => { if (live) setFailed({ path: imagePath, message: e instanceof Error ? e.message : String(e) }); });
     return () => { live = false; };
@@ -144,42 +159,53 @@ export const ReadingScreen = ({ studyId, sessionId, notice }: Props) => {
   // `keyAt`: the committing key's event.timeStamp (same clock as performance.now), so the time ends
   // at the key press itself, not when the main thread got round to handling it
   const doCommit = useCallback(async (keyAt?: number) => {
-    if (busy || paused || breakFor || feedback || problem !== null || !clock.current || !item || !loaded) return;
+    if (busyNow.current || paused || breakFor || feedback || problem !== null || !clock.current || !item || !loaded) return;
     const committedCall = ratingScale && rating !== null ? callFromRating(scale, rating) : call;
     if (committedCall === null) return;
     const end = Math.min(keyAt ?? performance.now(), performance.now());
     const ms = elapsedMs(clock.current, Math.max(end, clock.current.runningSince ?? end));
-    setBusy(true);
+    busyNow.current = true;
+    const showBusy = setTimeout(() => setBusy(true), SHOW_BUSY_AFTER_MS);
     try {
       const result = await commit({
         call: committedCall, confidence: askConfidence ? confidence : null, rating: ratingScale ? rating : null, ms, shownAt: shownAt.current,
       });
+      signal('saved');
       const next = result?.next;
       const caseFinished = !next || next.done || next.item.caseId !== item.caseId;
       if (!next || next.done || next.item.caseId !== clockCase.current) {
         // a new case: no answer is taken until its own image is drawn and its clock starts
         clock.current = null;
-        setClockStarted(false);
       }
       // the answer is committed before the truth shows: after a crash, reading resumes at the next question
-      if (result && caseFinished && caseRecord && shouldShowTruth(loaded.study.design.training, item.practice)) {
-        setFeedback({ caseId: item.caseId, practice: item.practice, lines: truthLines(caseRecord, result.reads, loaded.study.design.findings) });
-        logMoment(db, loaded.session, 'truth-shown', { caseId: item.caseId, practice: item.practice, training: loaded.study.design.training });
-      }
-      setCall(null);
-      setConfidence(null);
-      setRating(null);
-      signal('saved');
+      const truth = result && caseFinished && caseRecord && shouldShowTruth(loaded.study.design.training, item.practice)
+        ? { caseId: item.caseId, practice: item.practice, lines: truthLines(caseRecord, result.reads, loaded.study.design.findings) } : null;
+      // One synchronous render for everything the answer changes: the next case is rendered, and
+      // its prefetched image drawn, in this task, so it is painted in the next frame.
+      flushSync(() => {
+        result?.show();
+        if (clock.current === null) setClockStarted(false);
+        if (truth) setFeedback(truth);
+        setCall(null);
+        setConfidence(null);
+        setRating(null);
+        setBusy(false);
+      });
+      // logged after the render: the log line is not what the reader waits for
+      if (truth) logMoment(db, loaded.session, 'truth-shown', { caseId: truth.caseId, practice: truth.practice, training: loaded.study.design.training });
     } catch (e) {
       actions.notify({ kind: 'error', text: `Not saved: ${e instanceof Error ? e.message : String(e)}` });
-    } finally {
       setBusy(false);
+    } finally {
+      clearTimeout(showBusy);
+      busyNow.current = false;
     }
-  }, [busy, paused, breakFor, feedback, problem, call, confidence, rating, ratingScale, scale, askConfidence, commit, item, loaded, caseRecord, db]);
+  }, [paused, breakFor, feedback, problem, call, confidence, rating, ratingScale, scale, askConfidence, commit, item, loaded, caseRecord, db]);
 
   // A case that cannot be shown is skipped in the store (logged with its reason); its clock never ran.
   const skipUndecodable = useCallback(async () => {
-    if (busy || !undecodable) return;
+    if (busyNow.current || !undecodable) return;
+    busyNow.current = true;
     setBusy(true);
     try {
       await skip(`${undecodable.path}: ${undecodable.message}`);
@@ -194,9 +220,10 @@ export const ReadingScreen = ({ studyId, sessionId, notice }: Props) => {
     } catch (e) {
       actions.notify({ kind: 'error', text: `Could not skip the case: ${e instanceof Error ? e.message : String(e)}` });
     } finally {
+      busyNow.current = false;
       setBusy(false);
     }
-  }, [busy, undecodable, skip]);
+  }, [undecodable, skip]);
 
   // Pausing works at any moment of a case: before its image is drawn (the clock then starts
   // paused) and while a save finishes (that answer's time was already taken).
@@ -232,7 +259,7 @@ export const ReadingScreen = ({ studyId, sessionId, notice }: Props) => {
       }
       // the truth on screen: Enter continues (once not paused); other keys wait
       if (feedback) { if (action.kind === 'commit' && !pausedNow.current) endFeedback(); return; }
-      if (paused || busy) return;
+      if (paused || busyNow.current) return;
       if (breakFor) { if (action.kind === 'commit') endBreak(); return; }
       switch (action.kind) {
         case 'call': setCall(action.call); break;
@@ -248,7 +275,7 @@ export const ReadingScreen = ({ studyId, sessionId, notice }: Props) => {
     };
     window.addEventListener('keydown', onKey);
     return () => window.removeEventListener('keydown', onKey);
-  }, [paused, busy, breakFor, feedback, scale.kind, doCommit, togglePause, toggleFullscreen, endBreak, endFeedback, caseRecord, setView, setImageIndex]);
+  }, [paused, breakFor, feedback, scale.kind, doCommit, togglePause, toggleFullscreen, endBreak, endFeedback, caseRecord, setView, setImageIndex]);
 
   if (error) return <main className="reading"><p role="alert">Cannot open this session: {error}</p></main>;
   if (!loaded || !position) return <main className="reading" aria-busy="true"><p>Opening the session…</p></main>;

@@ -17,6 +17,29 @@ export const decodeGray = async (bytes: Uint8Array, mime: string): Promise<GrayI
   return { width: canvas.width, height: canvas.height, gray };
 };
 
+/** The window a case opens with: the full 8-bit range. */
+export const DEFAULT_LEVEL = 128;
+export const DEFAULT_WIDTH = 256;
+
+// one prepared frame per image (the last window drawn, or the default one made ahead)
+const prepared = new WeakMap<GrayImage, { level: number; width: number; pixels: ImageData }>();
+
+/**
+ * The image's RGBA pixels at this window, made once and kept with the image: the next case's are
+ * made ahead (prepareWindow after its image is decoded), so drawing it is a single putImageData.
+ */
+export const windowedPixels = (image: GrayImage, level: number, width: number): ImageData => {
+  const kept = prepared.get(image);
+  if (kept && kept.level === level && kept.width === width) return kept.pixels;
+  const pixels = kept?.pixels ?? new ImageData(image.width, image.height);
+  applyWindow(image, level, width, pixels.data);
+  prepared.set(image, { level, width, pixels });
+  return pixels;
+};
+
+/** Makes the default window's pixels ahead of time (see windowedPixels). */
+export const prepareWindow = (image: GrayImage): void => { windowedPixels(image, DEFAULT_LEVEL, DEFAULT_WIDTH); };
+
 /**
  * Window/level: grey values in [level - width/2, level + width/2] are stretched over the
  * display range; below is black, above is white. Writes RGBA into `out`.

@@ -1,7 +1,7 @@
 /** Decoded images of a case set, loaded ahead so the next case paints in the next frame. */
 import type { HeedDb } from '../../store/db';
 import { getImage } from '../../store/case-sets';
-import { decodeGray, type GrayImage } from './gray-image';
+import { decodeGray, prepareWindow, type GrayImage } from './gray-image';
 
 export type ImageCache = {
   get: (path: string) => Promise<GrayImage>;
@@ -19,6 +19,8 @@ export const createImageCache = (db: HeedDb, setId: string): ImageCache => {
       let entry = entries.get(path);
       if (!entry) {
         entry = getImage(db, setId, path).then((stored) => decodeGray(stored.bytes, stored.mime)).then((image) => {
+          // its pixels at the opening window too, so the case's first draw is one copy
+          prepareWindow(image);
           decoded.set(path, image);
           return image;
         });

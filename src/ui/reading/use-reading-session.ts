@@ -24,7 +24,12 @@ export type LoadedSession = {
   readerCode: string;
 };
 
-export type CommitResult = { next: SessionPosition; reads: StoredRead[] };
+/**
+ * A committed answer. `show` puts the next position and the reads into React state: the caller
+ * runs it in the same synchronous render as its own updates (flushSync), so the next case is
+ * rendered and drawn in the task the commit resolved in, once.
+ */
+export type CommitResult = { next: SessionPosition; reads: StoredRead[]; show: () => void };
 
 export const useReadingSession = (db: HeedDb, studyId: string, sessionId: string) => {
   const [loaded, setLoaded] = useState<LoadedSession | null>(null);
@@ -74,13 +79,11 @@ export const useReadingSession = (db: HeedDb, studyId: string, sessionId: string
     // the stored read comes back from the transaction: no second query before the next case
     const updated = [...readsNow.current.filter((r) => r.id !== read.id), read];
     readsNow.current = updated;
-    setReadsState(updated);
-    setPosition(next);
-    // the period's last answer is committed: back the study up (never awaited, never blocking).
-    // Loaded on use, so the reading view's bundle carries no zip or bundle code; backUpStudy logs
-    // its own failures as backup-failed events.
-    if (next.done) void import('../services/backup').then(({ backUpStudy }) => backUpStudy(db, loaded.study.id, 'period-complete'));
-    return { next, reads: updated };
+    // the period's last answer is committed: back the study up (never awaited, never blocking),
+    // after the screen has shown it. Loaded on use, so the reading view's bundle carries no zip or
+    // bundle code; backUpStudy logs its own failures as backup-failed events.
+    if (next.done) setTimeout(() => { void import('../services/backup').then(({ backUpStudy }) => backUpStudy(db, loaded.study.id, 'period-complete')); }, 0);
+    return { next, reads: updated, show: () => { setReadsState(updated); setPosition(next); } };
   }, [db, loaded, position]);
 
   /** Lets the reader past the case on screen when it cannot be shown (logged with the reason). */

@@ -1,15 +1,10 @@
 /** The start screen: the caution, the case sets, the studies, and any reading left unfinished. */
 import { useCallback, useEffect } from 'react';
-import { listCaseSets } from '../../store/case-sets';
-import { listStudies } from '../../store/studies';
-import { statusOfStudy } from '../../store/study-lifecycle';
-import { STATUS_WORDS } from '../../core/study-status';
-import { unfinishedSessions } from '../../store/progress';
 import { CautionLine } from '../components/CautionLine';
 import { useDb } from '../db-context';
 import { LockSetupSlot } from '../lock/lock-setup-slot';
-import { ensureDemoCaseSet } from '../services/demo-set';
 import { signal } from '../signals';
+import { homeAtLaunch } from '../startup';
 import { actions } from '../state/app-state';
 import { useAsync } from '../use-async';
 import { BackupsPanel } from './BackupsPanel';
@@ -19,13 +14,8 @@ import { OpenBundle } from './OpenBundle';
 
 export const HomeScreen = () => {
   const db = useDb();
-  const home = useAsync(useCallback(async () => {
-    await ensureDemoCaseSet(db);
-    const [caseSets, studies, unfinished] = await Promise.all([listCaseSets(db), listStudies(db), unfinishedSessions(db)]);
-    const statuses = new Map<string, string>();
-    for (const study of studies) statuses.set(study.id, STATUS_WORDS[await statusOfStudy(db, study)]);
-    return { caseSets, studies, unfinished, statuses };
-  }, [db]));
+  // the first load is the one started at launch (src/ui/startup.ts)
+  const home = useAsync(useCallback(() => homeAtLaunch(db), [db]));
 
   useEffect(() => {
     if (home.value) signal('ready', { screen: 'home' });

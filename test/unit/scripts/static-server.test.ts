@@ -34,6 +34,7 @@ beforeAll(async () => {
   mkdirSync(path.join(dist, 'empty'));
   writeFileSync(path.join(dist, 'index.html'), '<!doctype html><title>Heed</title>');
   writeFileSync(path.join(dist, 'assets', 'app.js'), 'console.log(1);');
+  writeFileSync(path.join(dist, 'assets', 'index-B4x_9kQz.js'), 'console.log(2);');
   writeFileSync(path.join(base, 'secret.txt'), 'outside');
   symlinkSync(path.join(base, 'secret.txt'), path.join(dist, 'link.txt'));
   server = await startStaticServer({ root: dist, port: 0 });
@@ -45,6 +46,14 @@ afterAll(async () => {
 });
 
 describe('startStaticServer', () => {
+  it('lets the browser keep content-named assets, and asks again for everything else', async () => {
+    const hashed = await fetch(`${server.url}assets/index-B4x_9kQz.js`);
+    expect(hashed.status).toBe(200);
+    expect(hashed.headers.get('cache-control')).toBe('public, max-age=31536000, immutable');
+    expect((await fetch(`${server.url}assets/app.js`)).headers.get('cache-control')).toBe('no-cache');
+    expect((await fetch(server.url)).headers.get('cache-control')).toBe('no-cache');
+  });
+
   it('listens on 127.0.0.1 only, on the port it reports', () => {
     expect(server.url).toBe(`http://127.0.0.1:${server.port}/`);
     expect(server.port).toBeGreaterThan(0);

@@ -4,7 +4,7 @@ import { openHeedDb, SCHEMA_V1, type HeedDb } from '../../../src/store/db';
 import { saveCaseSet, listCaseSets } from '../../../src/store/case-sets';
 import { enrolReader, listReaders } from '../../../src/store/readers';
 import { createStudy, updateStudyDesign, getStudy } from '../../../src/store/studies';
-import { commitAnswer, sessionPosition, startSession } from '../../../src/store/sessions';
+import { commitAnswer, logSessionMoment, sessionPosition, startSession } from '../../../src/store/sessions';
 import { studyReadRows } from '../../../src/store/read-log-rows';
 import { eventsOfStudy } from '../../../src/store/events';
 import { tinyDesign, tinyImages, tinyItems, tinyManifest, tinySuggestions } from '../support/tiny-study';
@@ -103,6 +103,30 @@ describe('store', () => {
     expect((await eventsOfStudy(db, study.id)).length).toBe(after.events + 1);
     const next = await commitAnswer(db, { ...base, step: step(1, 'initial') });
     expect(next.done ? null : [next.stepIndex, next.step.phase]).toEqual([3, 'final']);
+  });
+
+  it('links every answer to the stored head of the chain, also when another connection appended in between', async () => {
+    const name = `heed-test-${process.pid}-${++counter}`;
+    const db = openHeedDb(name);
+    const { manifest, study } = await setUpStudy(db);
+    const reader = await enrolReader(db, study.id, { code: 'R01', role: 'radiologist', years: 3 }, () => 0);
+    const session = await startSession(db, { study, readerId: reader.id, period: 1, items: tinyItems(manifest, 'concurrent'), orderSeed: 's1', override: null });
+    const base = { session, findings: ['target'], shownAt: '2026-12-01T10:00:00.000Z', suggestion: null, cautionShown: false, call: 1 as const, confidence: 50, ms: 800 };
+    const step = (itemIndex: number) => ({ itemIndex, finding: 'target', phase: 'final' as const });
+    await commitAnswer(db, { ...base, step: step(0) });
+    await commitAnswer(db, { ...base, step: step(1) });
+    // a second window (its own connection) logs a moment: this connection's last known head is now stale
+    const other = openHeedDb(name);
+    await logSessionMoment(other, session, 'paused', { caseId: 'k3', by: 'reader' });
+    other.close();
+    await commitAnswer(db, { ...base, step: step(2) });
+    // and the same step again, after the commit: refused, nothing written
+    await expect(commitAnswer(db, { ...base, step: step(2) })).rejects.toThrow(/not the current one/);
+    const events = await eventsOfStudy(db, study.id);
+    expect(events.map((e) => e.type).slice(-4)).toEqual(['final-committed', 'final-committed', 'paused', 'final-committed']);
+    // each link's prev is the hash of the event stored before it on the chain
+    for (let i = 1; i < events.length; i++) expect(events[i]?.prev).toBe(events[i - 1]?.hash);
+    expect((await db.reads.get(`${session.id}/k3/target`))?.hash).toBe(events[events.length - 1]?.hash);
   });
 
   it('marks the session complete on its last answer and exports read-log rows', async () => {

@@ -1,0 +1,19 @@
+/** What the start screen shows, loaded in one go: its queries run side by side, not one after another. */
+import { STATUS_WORDS } from '../../core/study-status';
+import { listCaseSets } from '../../store/case-sets';
+import type { HeedDb } from '../../store/db';
+import { unfinishedSessions, type Unfinished } from '../../store/progress';
+import type { StoredCaseSet, StoredStudy } from '../../store/records';
+import { statusOfStudy } from '../../store/study-lifecycle';
+import { listStudies } from '../../store/studies';
+import { DEMO_SET_ID, ensureDemoCaseSet } from '../services/demo-set';
+
+export type HomeData = { caseSets: StoredCaseSet[]; studies: StoredStudy[]; unfinished: Unfinished[]; statuses: Map<string, string> };
+
+export const loadHome = async (db: HeedDb): Promise<HomeData> => {
+  const [listed, studies, unfinished] = await Promise.all([listCaseSets(db), listStudies(db), unfinishedSessions(db)]);
+  // the demo set is generated once, on first launch; a relaunch only sees it in the list
+  const caseSets = listed.some((s) => s.id === DEMO_SET_ID) ? listed : await ensureDemoCaseSet(db).then(() => listCaseSets(db));
+  const statuses = new Map(await Promise.all(studies.map(async (s) => [s.id, STATUS_WORDS[await statusOfStudy(db, s)]] as const)));
+  return { caseSets, studies, unfinished, statuses };
+};
