@@ -6,16 +6,22 @@ import * as f from './fields';
 import { ReadLogError } from './read-log-error';
 
 /**
- * Where each required column sits in the header, the case_<name> columns, and `same`, which
- * hands back one shared copy of each distinct id text: a log repeats a few reader, case and
- * finding ids many thousand times, and one copy each keeps the heap small and makes the
- * engine's lookups by id cheap (a shared string carries its hash).
+ * Where each column sits in the header (-1 when an optional one is missing), the case_<name>
+ * columns, `same`, which hands back one shared copy of each distinct id text (a log repeats a few
+ * reader, case and finding ids many thousand times: one copy each keeps the heap small and makes
+ * the engine's lookups by id cheap), and `sameAttributes`, one shared frozen case_attributes
+ * object per distinct combination of values (a million reads of a thousand cases need a thousand).
  */
-export type RowLayout = { at: Readonly<Record<string, number>>; attrs: { name: string; i: number }[]; same: (text: string) => string };
+export type RowLayout = {
+  at: Readonly<Record<ReadLogColumn | ReadLogOptionalColumn, number>>;
+  attrs: { name: string; i: number }[];
+  same: (text: string) => string;
+  sameAttributes: (values: readonly string[]) => Readonly<Record<string, string>>;
+};
 
 /** The layout of a header whose required columns are known to be present. */
 export const rowLayout = (header: readonly string[]): RowLayout => {
-  const at = Object.fromEntries([...READ_LOG_COLUMNS, ...READ_LOG_OPTIONAL_COLUMNS].map((col) => [col, header.indexOf(col)]));
+  const at = Object.fromEntries([...READ_LOG_COLUMNS, ...READ_LOG_OPTIONAL_COLUMNS].map((col) => [col, header.indexOf(col)])) as Record<ReadLogColumn | ReadLogOptionalColumn, number>;
   const attrs = header.flatMap((name, i) => (name.startsWith('case_') && name !== 'case_id' ? [{ name: name.slice(5), i }] : []));
   const shared = new Map<string, string>();
   const same = (text: string): string => {
@@ -24,7 +30,29 @@ export const rowLayout = (header: readonly string[]): RowLayout => {
     shared.set(text, text);
     return text;
   };
-  return { at, attrs, same };
+  const attributeSets = new Map<string, Readonly<Record<string, string>>>();
+  const sameAttributes = (values: readonly string[]): Readonly<Record<string, string>> => {
+    // JSON of the values is an unambiguous key whatever characters they hold
+    const key = values.length === 1 ? (values[0] as string) : JSON.stringify(values);
+    const known = attributeSets.get(key);
+    if (known !== undefined) return known;
+    // null prototype: a case___proto__ or case_constructor column is an ordinary key, not the prototype
+    const made: Record<string, string> = Object.create(null);
+    attrs.forEach((a, k) => {
+      made[a.name] = same(values[k] as string);
+    });
+    Object.freeze(made);
+    attributeSets.set(key, made);
+    return made;
+  };
+  return { at, attrs, same, sameAttributes };
+};
+
+// The cell at index i ('' for a column missing from the header, i = -1); restoreCell takes off
+// the quote that Heed's export puts before formula-looking text (only a cell starting with ').
+const cellAt = (cells: readonly string[], i: number): string => {
+  const raw = cells[i] ?? '';
+  return raw.charCodeAt(0) === 39 ? restoreCell(raw) : raw;
 };
 
 /**
@@ -33,9 +61,7 @@ export const rowLayout = (header: readonly string[]): RowLayout => {
  */
 export const parseRow = (cells: readonly string[], line: number, layout: RowLayout): ReadRow => {
   const { at, same } = layout;
-  // an optional column missing from the header reads as empty; restoreCell takes off the quote
-  // that Heed's export puts before formula-looking text
-  const cell = (column: ReadLogColumn | ReadLogOptionalColumn): string => restoreCell(cells[at[column] ?? -1] ?? '');
+  const cell = (column: ReadLogColumn | ReadLogOptionalColumn): string => cellAt(cells, at[column]);
   const assistance = f.assistance(cell('assistance'), line, 'assistance');
   const aiCall = f.optionalBit(cell('ai_call'), line, 'ai_call');
   if (assistance === 'none' && aiCall !== null) throw new ReadLogError(line, 'ai_call', 'must be empty when assistance is none');
@@ -43,9 +69,10 @@ export const parseRow = (cells: readonly string[], line: number, layout: RowLayo
   const initialCall = f.optionalBit(cell('initial_call'), line, 'initial_call');
   if (assistance === 'sequential' && initialCall === null) throw new ReadLogError(line, 'initial_call', 'must be 0 or 1 when assistance is sequential');
   const scale = f.scale(cell('scale'), line, 'scale');
-  // null prototype: a case___proto__ or case_constructor column is an ordinary key, not the prototype
-  const case_attributes: Record<string, string> = Object.create(null);
-  for (const a of layout.attrs) case_attributes[a.name] = same(restoreCell(cells[a.i] ?? ''));
+  const values: string[] = [];
+  for (const a of layout.attrs) values.push(cellAt(cells, a.i));
+  // shared and frozen: every read of a case with the same attribute values holds the same object
+  const case_attributes = layout.sameAttributes(values) as Record<string, string>;
   // the property order below is the order cells are checked in (and the ReadRow field order)
   const read: ReadRow = {
     study_id: same(f.text(cell('study_id'), line, 'study_id')),
