@@ -54,7 +54,7 @@ const lineEnd = (text: string, start: number): number => {
 
 // Takes the records of a read log in order (the header first), checking and typing each row;
 // done() hands back the reads. Throws ReadLogError at the first problem.
-const rowReader = (): { take: (cells: string[], line: number) => void; done: () => ReadRow[] } => {
+const rowReader = (): { take: (cells: string[], line: number) => void; shownAtColumn: () => number; done: () => ReadRow[] } => {
   let header: string[] | null = null;
   let layout: RowLayout | null = null;
   const earlierRead = repeatedReads();
@@ -81,7 +81,7 @@ const rowReader = (): { take: (cells: string[], line: number) => void; done: () 
     if (header === null) throw new ReadLogError(1, null, 'the file is empty');
     return rows;
   };
-  return { take, done };
+  return { take, shownAtColumn: () => (layout === null ? -1 : layout.at.shown_at), done };
 };
 
 // Papaparse reports each row's end offset; a row starts where the previous ended, and its line
@@ -152,7 +152,12 @@ export const parseReadLogBytes = (bytes: Uint8Array): ReadRow[] => {
     }
     if (rowProblem === null) {
       try {
-        rows.take(text.split(','), line);
+        const cells = text.split(',');
+        // V8 keeps a cut of 13 or more characters as a view of the text it was cut from, so a
+        // kept shown_at would keep its whole line (160 bytes a read): decode it on its own
+        const k = rows.shownAtColumn();
+        if (k >= 0 && k < cells.length && (cells[k] as string).length >= 13) cells[k] = decoder.decode(cellBytes(bytes, start, end, k));
+        rows.take(cells, line);
       } catch (error) {
         if (!(error instanceof ReadLogError)) throw error;
         rowProblem = error;
@@ -162,6 +167,14 @@ export const parseReadLogBytes = (bytes: Uint8Array): ReadRow[] => {
   }
   if (rowProblem !== null) throw rowProblem;
   return rows.done();
+};
+
+// The bytes of cell k of the line bytes[start, end) (a line without quotes, with more than k cells).
+const cellBytes = (bytes: Uint8Array, start: number, end: number, k: number): Uint8Array => {
+  let from = start;
+  for (let j = 0; j < k; j++) from = bytes.indexOf(0x2c, from) + 1;
+  const comma = bytes.indexOf(0x2c, from);
+  return bytes.subarray(from, comma === -1 || comma > end ? end : comma);
 };
 
 // Where the lines of a file that parseReadLog would split directly start (after up to two
