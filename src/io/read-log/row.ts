@@ -61,48 +61,47 @@ const cellAt = (cells: readonly string[], i: number): string => {
  */
 export const parseRow = (cells: readonly string[], line: number, layout: RowLayout): ReadRow => {
   const { at, same } = layout;
-  const cell = (column: ReadLogColumn | ReadLogOptionalColumn): string => cellAt(cells, at[column]);
-  const assistance = f.assistance(cell('assistance'), line, 'assistance');
-  const aiCall = f.optionalBit(cell('ai_call'), line, 'ai_call');
+  const assistance = f.assistance(cellAt(cells, at.assistance), line, 'assistance');
+  const aiCall = f.optionalBit(cellAt(cells, at.ai_call), line, 'ai_call');
   if (assistance === 'none' && aiCall !== null) throw new ReadLogError(line, 'ai_call', 'must be empty when assistance is none');
   if (assistance !== 'none' && aiCall === null) throw new ReadLogError(line, 'ai_call', `must be 0 or 1 when assistance is ${assistance}`);
-  const initialCall = f.optionalBit(cell('initial_call'), line, 'initial_call');
+  const initialCall = f.optionalBit(cellAt(cells, at.initial_call), line, 'initial_call');
   if (assistance === 'sequential' && initialCall === null) throw new ReadLogError(line, 'initial_call', 'must be 0 or 1 when assistance is sequential');
-  const scale = f.scale(cell('scale'), line, 'scale');
+  const scale = f.scale(cellAt(cells, at.scale), line, 'scale');
   const values: string[] = [];
   for (const a of layout.attrs) values.push(cellAt(cells, a.i));
   // shared and frozen: every read of a case with the same attribute values holds the same object
   const case_attributes = layout.sameAttributes(values) as Record<string, string>;
   // the property order below is the order cells are checked in (and the ReadRow field order)
   const read: ReadRow = {
-    study_id: same(f.text(cell('study_id'), line, 'study_id')),
-    reader_id: same(f.text(cell('reader_id'), line, 'reader_id')),
-    reader_role: same(cell('reader_role')),
-    reader_years: f.optionalNumber(cell('reader_years'), line, 'reader_years', 0, 100, 'a number of years in 0..100'),
-    sequence: f.optionalText(same(cell('sequence'))),
-    period: f.positiveInteger(cell('period'), line, 'period'),
+    study_id: same(f.text(cellAt(cells, at.study_id), line, 'study_id')),
+    reader_id: same(f.text(cellAt(cells, at.reader_id), line, 'reader_id')),
+    reader_role: same(cellAt(cells, at.reader_role)),
+    reader_years: f.optionalNumber(cellAt(cells, at.reader_years), line, 'reader_years', 0, 100, 'a number of years in 0..100'),
+    sequence: f.optionalText(same(cellAt(cells, at.sequence))),
+    period: f.positiveInteger(cellAt(cells, at.period), line, 'period'),
     assistance,
-    case_id: same(f.text(cell('case_id'), line, 'case_id')),
-    finding: same(f.text(cell('finding'), line, 'finding')),
-    practice: f.bit(cell('practice'), line, 'practice'),
-    order: f.positiveInteger(cell('order'), line, 'order'),
-    truth: f.bit(cell('truth'), line, 'truth'),
+    case_id: same(f.text(cellAt(cells, at.case_id), line, 'case_id')),
+    finding: same(f.text(cellAt(cells, at.finding), line, 'finding')),
+    practice: f.bit(cellAt(cells, at.practice), line, 'practice'),
+    order: f.positiveInteger(cellAt(cells, at.order), line, 'order'),
+    truth: f.bit(cellAt(cells, at.truth), line, 'truth'),
     ai_call: aiCall,
-    ai_score: f.optionalNumber(cell('ai_score'), line, 'ai_score', 0, 1, 'a score in [0,1]'),
-    ai_planted: f.bit(cell('ai_planted'), line, 'ai_planted'),
-    caution_shown: f.bit(cell('caution_shown'), line, 'caution_shown'),
+    ai_score: f.optionalNumber(cellAt(cells, at.ai_score), line, 'ai_score', 0, 1, 'a score in [0,1]'),
+    ai_planted: f.bit(cellAt(cells, at.ai_planted), line, 'ai_planted'),
+    caution_shown: f.bit(cellAt(cells, at.caution_shown), line, 'caution_shown'),
     initial_call: initialCall,
-    initial_confidence: f.optionalNumber(cell('initial_confidence'), line, 'initial_confidence', 0, 100, 'a confidence in 0..100'),
-    initial_ms: f.optionalNumber(cell('initial_ms'), line, 'initial_ms', 0, Infinity, 'a time in ms >= 0'),
-    final_call: f.bit(cell('final_call'), line, 'final_call'),
-    final_confidence: f.optionalNumber(cell('final_confidence'), line, 'final_confidence', 0, 100, 'a confidence in 0..100'),
-    total_ms: f.number(cell('total_ms'), line, 'total_ms', 0, Infinity, 'a time in ms >= 0'),
-    shown_at: f.isoUtc(cell('shown_at'), line, 'shown_at'),
+    initial_confidence: f.optionalNumber(cellAt(cells, at.initial_confidence), line, 'initial_confidence', 0, 100, 'a confidence in 0..100'),
+    initial_ms: f.optionalNumber(cellAt(cells, at.initial_ms), line, 'initial_ms', 0, Infinity, 'a time in ms >= 0'),
+    final_call: f.bit(cellAt(cells, at.final_call), line, 'final_call'),
+    final_confidence: f.optionalNumber(cellAt(cells, at.final_confidence), line, 'final_confidence', 0, 100, 'a confidence in 0..100'),
+    total_ms: f.number(cellAt(cells, at.total_ms), line, 'total_ms', 0, Infinity, 'a time in ms >= 0'),
+    shown_at: f.isoUtc(cellAt(cells, at.shown_at), line, 'shown_at'),
     scale,
-    initial_rating: f.rating(cell('initial_rating'), line, 'initial_rating', scale, assistance === 'sequential'),
-    final_rating: f.rating(cell('final_rating'), line, 'final_rating', scale, true),
-    training: f.optionalBit(cell('training'), line, 'training') ?? 0,
-    withdrawn: f.optionalBit(cell('withdrawn'), line, 'withdrawn') ?? 0,
+    initial_rating: f.rating(cellAt(cells, at.initial_rating), line, 'initial_rating', scale, assistance === 'sequential'),
+    final_rating: f.rating(cellAt(cells, at.final_rating), line, 'final_rating', scale, true),
+    training: f.optionalBit(cellAt(cells, at.training), line, 'training') ?? 0,
+    withdrawn: f.optionalBit(cellAt(cells, at.withdrawn), line, 'withdrawn') ?? 0,
     case_attributes,
   };
   if (read.initial_ms !== null && read.initial_ms > read.total_ms) {
