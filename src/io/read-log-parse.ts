@@ -125,58 +125,77 @@ const NOT_UTF8 = 'the file is not UTF-8 text (first bad byte on this line); save
 /**
  * parseReadLog on a file's bytes, decoded as strict UTF-8: a file in another encoding (e.g.
  * Latin-1) is refused, naming the line of the first bad byte, instead of its letters silently
- * becoming U+FFFD. A leading byte-order mark is dropped.
+ * becoming U+FFFD. A leading byte-order mark is dropped. options.blockBytes (tests only) sets how
+ * many bytes of whole lines are decoded at a time.
  */
-export const parseReadLogBytes = (bytes: Uint8Array): ReadRow[] => {
+export const parseReadLogBytes = (bytes: Uint8Array, options: { blockBytes?: number } = {}): ReadRow[] => {
   const begin = plainLinesFrom(bytes);
   if (begin === -1) {
     const decoded = decodeUtf8(bytes);
     if (!decoded.ok) throw new ReadLogError(decoded.line, null, NOT_UTF8);
     return parseReadLog(decoded.text);
   }
-  // One line at a time, so the text of the whole file never exists beside the reads (a million
-  // reads are 140 MB of text). A bad byte anywhere wins over a problem in a row, as when the
-  // whole file was decoded first; a multi-byte character never holds a newline byte.
+  // A block of whole lines at a time (about 64 kB), so the text of the whole file never exists
+  // beside the reads (a million reads are 140 MB of text). A bad byte anywhere wins over a
+  // problem in a row, as when the whole file was decoded first; a multi-byte character never
+  // holds a newline byte, so a block boundary never splits one.
   const decoder = new TextDecoder('utf-8', { fatal: true, ignoreBOM: true });
   const rows = rowReader();
   let rowProblem: ReadLogError | null = null;
   let line = 1;
-  for (let start = begin; start <= bytes.length; line++) {
-    // plain loops: a builtin indexOf call per line (and per cell below) costs more than the scan
-    let end = start;
-    while (end < bytes.length && bytes[end] !== 0x0a) end++;
+  for (let start = begin; start <= bytes.length; ) {
+    const end = blockEnd(bytes, start, options.blockBytes ?? BLOCK_BYTES);
+    const block = bytes.subarray(start, end);
     let text: string;
     try {
-      text = decoder.decode(bytes.subarray(start, end));
+      text = decoder.decode(block);
     } catch {
-      throw new ReadLogError(line, null, NOT_UTF8);
+      const bad = decodeUtf8(block);
+      throw new ReadLogError(line + (bad.ok ? 0 : bad.line - 1), null, NOT_UTF8);
     }
+    const lines = text.split('\n');
     if (rowProblem === null) {
-      try {
-        const cells = text.split(',');
-        // V8 keeps a cut of 13 or more characters as a view of the text it was cut from, so a
-        // kept shown_at would keep its whole line (160 bytes a read): decode it on its own
-        const k = rows.shownAtColumn();
-        if (k >= 0 && k < cells.length && (cells[k] as string).length >= 13) cells[k] = decoder.decode(cellBytes(bytes, start, end, k));
-        rows.take(cells, line);
-      } catch (error) {
-        if (!(error instanceof ReadLogError)) throw error;
-        rowProblem = error;
+      // in an all-ASCII block a character's index is its byte's index
+      const ascii = text.length === block.length;
+      let at = 0;
+      for (let i = 0; i < lines.length; i++) {
+        const lineText = lines[i] as string;
+        try {
+          const cells = lineText.split(',');
+          // V8 keeps a cut of 13 or more characters as a view of the text it was cut from, so a
+          // kept shown_at would keep its whole block alive: it is decoded on its own
+          const k = rows.shownAtColumn();
+          if (ascii && k >= 0 && k < cells.length && (cells[k] as string).length >= 13) {
+            let from = start + at;
+            for (let j = 0; j < k; j++) from += (cells[j] as string).length + 1;
+            cells[k] = decoder.decode(bytes.subarray(from, from + (cells[k] as string).length));
+          }
+          rows.take(cells, line + i);
+        } catch (error) {
+          if (!(error instanceof ReadLogError)) throw error;
+          rowProblem = error;
+          break;
+        }
+        at += lineText.length + 1;
       }
     }
+    line += lines.length;
     start = end + 1;
   }
   if (rowProblem !== null) throw rowProblem;
   return rows.done();
 };
 
-// The bytes of cell k of the line bytes[start, end) (a line without quotes, with more than k cells).
-const cellBytes = (bytes: Uint8Array, start: number, end: number, k: number): Uint8Array => {
-  let from = start;
-  for (let commas = 0; commas < k; from++) if (bytes[from] === 0x2c) commas++;
-  let to = from;
-  while (to < end && bytes[to] !== 0x2c) to++;
-  return bytes.subarray(from, to);
+const BLOCK_BYTES = 1 << 16;
+
+// The end of the block of whole lines starting at `start`: the last newline within `size` bytes
+// (the block excludes it), the next newline when one line is longer, else the end of the file.
+const blockEnd = (bytes: Uint8Array, start: number, size: number): number => {
+  if (bytes.length - start <= size) return bytes.length;
+  const last = bytes.lastIndexOf(0x0a, start + size - 1);
+  if (last >= start) return last;
+  const next = bytes.indexOf(0x0a, start + size);
+  return next === -1 ? bytes.length : next;
 };
 
 // Where the lines of a file that parseReadLog would split directly start (after up to two

@@ -37,6 +37,8 @@ describe('direct line splitting', () => {
     const expected = outcome(() => parseReadLog(general(text)));
     expect(outcome(() => parseReadLog(text))).toEqual(expected);
     expect(outcome(() => parseReadLogBytes(utf8(text)))).toEqual(expected);
+    // blocks smaller than a line, and of a few lines, so lines meet block boundaries everywhere
+    for (const blockBytes of [1, 7, 150, 400]) expect(outcome(() => parseReadLogBytes(utf8(text), { blockBytes }))).toEqual(expected);
   });
 
   it('reports a bad byte after a bad row at the bad byte, as the whole-file decoding does', () => {
@@ -45,7 +47,9 @@ describe('direct line splitting', () => {
     bytes[bytes.lastIndexOf(0x48)] = 0xe9; // a Latin-1 letter on line 6
     const decoded = decodeUtf8(bytes);
     expect(decoded.ok).toBe(false);
-    expect(outcome(() => parseReadLogBytes(bytes))).toEqual({ line: decoded.ok ? 0 : decoded.line, column: null, problem: expect.stringMatching(/not UTF-8/) });
+    for (const blockBytes of [undefined, 1, 100, 300]) {
+      expect(outcome(() => parseReadLogBytes(bytes, { blockBytes }))).toEqual({ line: decoded.ok ? 0 : decoded.line, column: null, problem: expect.stringMatching(/not UTF-8/) });
+    }
     expect(decoded.ok ? 0 : decoded.line).toBe(6);
   });
 
