@@ -1,7 +1,8 @@
 // Benchmark: `heed analyze FILE --json` against the same per-reader figures computed with numpy +
 // scikit-learn + statsmodels (bench/analysis-vs-python.py), on a simulated 100,000-read log
 // (50 readers x 1000 cases x 2 periods, bench/simulate-log.ts). Also times the
-// Obuchowski-Rockette analysis alone (target: 10 readers x 1000 cases <= 1 s).
+// Obuchowski-Rockette analysis alone (target: 10 readers x 1000 cases <= 1 s), and the same
+// command on 1,000,000 reads (500 readers): time against the 100,000-read time, and peak RSS.
 // Prints figures; no pass/fail. Needs Debian's python3-{numpy,scipy,sklearn,statsmodels,pandas}
 // and /usr/bin/time (package `time`). Usage: npx tsx bench/analysis-vs-python.ts
 import { spawnSync } from 'node:child_process';
@@ -62,6 +63,27 @@ try {
       if (e.unaided && o?.unaided) worst = Math.max(worst, Math.abs(e.unaided.auc.estimate - o.unaided.auc.estimate), Math.abs(e.unaided.auc.se - o.unaided.auc.se));
     }
     console.log(`largest |heed − python| over unaided AUC and SE: ${worst.toExponential(2)}`);
+  }
+
+  // Scale (issue 10): 1,000,000 reads (500 readers x 1000 cases x 2 periods), the same command;
+  // targets: time <= 10.5 x the 100,000-read time, peak RSS <= 600 MB. The two runs are taken
+  // one after the other, so they see about the same machine load.
+  const bigFile = join(dir, 'reads-1m.csv');
+  writeFileSync(bigFile, simulateReadLog({ seed: 1, readers: 500, cases: 1000 }));
+  const small = timed(process.execPath, ['bin/heed.js', 'analyze', file, '--json', '--boot', '0']);
+  const million = timed(process.execPath, ['bin/heed.js', 'analyze', bigFile, '--json', '--boot', '0']);
+  rmSync(bigFile, { force: true });
+  // lines shaped `label  value unit` are the runner's figures (scripts/bench.mjs)
+  if (!million.ok) console.log(`heed analyze on 1,000,000 reads FAILED: ${million.stderr.split('\n')[0]}`);
+  if (million.ok && million.wallS !== null) console.log(`heed analyze --boot 0 on 1,000,000 reads, wall  ${million.wallS.toFixed(2)} s`);
+  if (million.ok && small.ok && million.wallS !== null && small.wallS !== null) {
+    const ratio = million.wallS / small.wallS;
+    console.log(`ratio of 1,000,000 to 100,000 reads, wall  ${ratio.toFixed(2)} x`);
+    console.log(`  target <= 10.5 x: ${ratio <= 10.5 ? 'met' : 'NOT met'} (100,000 reads took ${small.wallS.toFixed(2)} s in this pair)`);
+  }
+  if (million.peakMb !== null) {
+    console.log(`heed analyze on 1,000,000 reads, peak RSS  ${million.peakMb.toFixed(0)} MB`);
+    console.log(`  target <= 600 MB: ${million.peakMb <= 600 ? 'met' : 'NOT met'}`);
   }
 
   // Obuchowski-Rockette alone, median of 5 runs

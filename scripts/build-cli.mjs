@@ -1,10 +1,11 @@
 #!/usr/bin/env node
-// Bundles the `heed` command (src/cli/main.ts and everything it imports) into one ES module,
-// dist-cli/heed.mjs, so a run skips transpiling TypeScript on the fly. bin/heed.js calls
+// Bundles the `heed` command (src/cli/main.ts and everything it imports) into the ES module
+// dist-cli/heed.mjs and the chunks it loads per verb (dist-cli/chunks/), so a run skips
+// transpiling TypeScript on the fly and compiles only the code of its verb. bin/heed.js calls
 // ensureCliBundle() on every run: it rebuilds only when the bundle is missing or one of the
 // files that went into it (esbuild's own list, kept in dist-cli/heed.inputs.json) is newer.
 // Run by hand: node scripts/build-cli.mjs
-import { mkdirSync, readFileSync, renameSync, rmSync, statSync, utimesSync, writeFileSync } from 'node:fs';
+import { mkdirSync, readdirSync, readFileSync, renameSync, rmSync, statSync, utimesSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 
@@ -68,7 +69,13 @@ export const buildCli = async (root = ROOT) => {
     format: 'esm',
     write: false,
     metafile: true,
-    outfile: bundle,
+    // Each verb's code in its own chunks, loaded when the verb runs: `heed analyze` does not
+    // compile the bundle reader, the demo generator or the planner (a third of its start-up).
+    splitting: true,
+    outdir: path.dirname(bundle),
+    entryNames: path.basename(bundle, '.mjs'),
+    chunkNames: 'chunks/[name]-[hash]',
+    outExtension: { '.js': '.mjs' },
     logLevel: 'silent',
     legalComments: 'none',
     // Bundled CommonJS dependencies (papaparse, pngjs) call require(); give ESM output one.
@@ -83,6 +90,18 @@ export const buildCli = async (root = ROOT) => {
   const list = [...own, ...deps, path.relative(root, SCRIPT)];
   mkdirSync(path.dirname(bundle), { recursive: true });
   const tag = `${process.pid}-${Math.random().toString(36).slice(2)}`;
+  // Chunks are named by their content, so one already there holds these very bytes; new ones
+  // are written (and dated like the bundle) before the entry that imports them is renamed in.
+  const chunks = result.outputFiles.filter((f) => f !== code);
+  for (const chunk of chunks) {
+    if (mtimeOf(chunk.path) !== null) continue;
+    mkdirSync(path.dirname(chunk.path), { recursive: true });
+    writeFileSync(`${chunk.path}.${tag}`, chunk.contents);
+    utimesSync(`${chunk.path}.${tag}`, started, started);
+    renameSync(`${chunk.path}.${tag}`, chunk.path);
+  }
+  // the chunks count as inputs: one missing makes the bundle stale
+  for (const chunk of chunks) list.push(path.relative(root, chunk.path));
   try {
     writeFileSync(`${inputs}.${tag}`, JSON.stringify(list));
     writeFileSync(`${bundle}.${tag}`, code.contents);
@@ -93,7 +112,24 @@ export const buildCli = async (root = ROOT) => {
     rmSync(`${inputs}.${tag}`, { force: true });
     rmSync(`${bundle}.${tag}`, { force: true });
   }
+  pruneChunks(path.join(path.dirname(bundle), 'chunks'), new Set(chunks.map((c) => c.path)));
   return { bundle, inputs: list.length };
+};
+
+// Chunks of earlier builds, once an hour old (a command started before this build may still be
+// loading them), are removed so the folder does not grow with every rebuild.
+const pruneChunks = (dir, keep) => {
+  let names;
+  try {
+    names = readdirSync(dir);
+  } catch {
+    return;
+  }
+  for (const name of names) {
+    const file = path.join(dir, name);
+    const t = mtimeOf(file);
+    if (!keep.has(file) && t !== null && t < Date.now() - 3_600_000) rmSync(file, { force: true });
+  }
 };
 
 /**

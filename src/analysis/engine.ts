@@ -61,9 +61,16 @@ export const analyzeReads = (rows: readonly ReadRow[], options: AnalyzeOptions =
     else reads.push(r);
   }
   const attributes: string[] = [];
+  // a parsed log shares one case_attributes object between reads of equal values: each object's
+  // names are looked at once (in order of first appearance, so the attribute order is unchanged);
+  // rows each with their own object (from the store) only fill the set up to a bound
+  const attributeSets = new Set<Readonly<Record<string, string>>>();
   const byFinding = new Map<string, Map<string, ReadRow[]>>();
   for (const r of reads) {
-    for (const a of Object.keys(r.case_attributes)) if (!attributes.includes(a)) attributes.push(a);
+    if (!attributeSets.has(r.case_attributes)) {
+      if (attributeSets.size < 4096) attributeSets.add(r.case_attributes);
+      for (const a of Object.keys(r.case_attributes)) if (!attributes.includes(a)) attributes.push(a);
+    }
     let f = byFinding.get(r.finding);
     if (f === undefined) {
       f = new Map();

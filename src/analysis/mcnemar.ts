@@ -25,8 +25,24 @@ export const mcnemar = (b: number, c: number): McNemar => {
   const n = b + c;
   if (n === 0) return { b, c, p: 1, mid_p: 1, chi_square: null };
   const x = Math.min(b, c);
-  const tail = binomialCdf(x, n, 0.5);
+  const { tail, pmf } = binomialHalf(x, n);
   const p = Math.min(1, 2 * tail);
-  const mid = Math.min(1, 2 * tail - binomialPmf(x, n, 0.5));
+  const mid = Math.min(1, 2 * tail - pmf);
   return { b, c, p, mid_p: mid, chi_square: ((b - c) * (b - c)) / n };
+};
+
+// P(X <= x) and P(X = x) for X ~ Binomial(n, 1/2). The engine asks for the same few (x, n) many
+// times (every reader, subgroup and pooled crossover) and the incomplete beta behind them is slow,
+// so answers are kept: the same function of the same two whole numbers, so the same bits.
+const halfTails = new Map<number, { tail: number; pmf: number }>();
+const binomialHalf = (x: number, n: number): { tail: number; pmf: number } => {
+  const key = n < 1 << 20 ? n * (1 << 20) + x : -1;
+  const known = key === -1 ? undefined : halfTails.get(key);
+  if (known !== undefined) return known;
+  const made = { tail: binomialCdf(x, n, 0.5), pmf: binomialPmf(x, n, 0.5) };
+  if (key !== -1) {
+    if (halfTails.size >= 65536) halfTails.clear();
+    halfTails.set(key, made);
+  }
+  return made;
 };

@@ -57,10 +57,10 @@ export const parseAnalyzeArgs = (args: string[]): AnalyzeArgs => {
 
 export const runAnalyze = async (args: string[]): Promise<number> => {
   const { file, json, seed, boot, covariance, includeWithdrawn } = parseAnalyzeArgs(args);
-  const bytes = await readAnalyzeInput(file);
   let rows;
   try {
-    rows = parseReadLogBytes(bytes);
+    // the bytes are not kept: only the parse holds them, and only until its last line
+    rows = parseReadLogBytes(await readAnalyzeInput(file));
   } catch (error) {
     if (error instanceof ReadLogError) {
       throw new CliError(`${file}:${error.line}: ${error.column === null ? '' : `column ${error.column}: `}${error.problem}`);

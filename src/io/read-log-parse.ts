@@ -18,13 +18,45 @@ export { ReadLogError } from './read-log/read-log-error';
 export const parseReadLog = (input: string): ReadRow[] => {
   const textIn = input.charCodeAt(0) === 0xfeff ? input.slice(1) : input;
   if (textIn.trim() === '') throw new ReadLogError(1, null, 'the file is empty');
-  // Rows are typed as the CSV parser hands them over, so their cells die young instead of all
-  // 100,000 rows of strings living until the end. A CSV-level problem anywhere in the file still
-  // wins over a problem in a row, as when the whole file was split first, so the first row
-  // problem is only kept until the parse ends.
+  const rows = rowReader();
+  // Without a quote or a carriage return a record is exactly one line and a cell exactly the
+  // text between commas (what papaparse itself does then), so the lines are split directly.
+  if (textIn.indexOf('"') === -1 && textIn.indexOf('\r') === -1) {
+    let line = 1;
+    for (let start = 0; start <= textIn.length; line++) {
+      const end = lineEnd(textIn, start);
+      rows.take(textIn.slice(start, end).split(','), line);
+      start = end + 1;
+    }
+    return rows.done();
+  }
+  // Rows are typed as the CSV parser hands them over, so their cells die young. A CSV-level
+  // problem anywhere in the file still wins over a problem in a row, as when the whole file was
+  // split first, so the first row problem is only kept until the parse ends.
+  let rowProblem: ReadLogError | null = null;
+  splitRecords(textIn, (cells, line) => {
+    if (rowProblem !== null) return;
+    try {
+      rows.take(cells, line);
+    } catch (error) {
+      if (!(error instanceof ReadLogError)) throw error;
+      rowProblem = error;
+    }
+  });
+  if (rowProblem !== null) throw rowProblem;
+  return rows.done();
+};
+
+const lineEnd = (text: string, start: number): number => {
+  const end = text.indexOf('\n', start);
+  return end === -1 ? text.length : end;
+};
+
+// Takes the records of a read log in order (the header first), checking and typing each row;
+// done() hands back the reads. Throws ReadLogError at the first problem.
+const rowReader = (): { take: (cells: string[], line: number) => void; shownAtColumn: () => number; done: () => ReadRow[] } => {
   let header: string[] | null = null;
   let layout: RowLayout | null = null;
-  let rowProblem: ReadLogError | null = null;
   const earlierRead = repeatedReads();
   const rows: ReadRow[] = [];
   const take = (cells: string[], line: number): void => {
@@ -45,18 +77,11 @@ export const parseReadLog = (input: string): ReadRow[] => {
     if (earlier !== undefined) throw new ReadLogError(line, 'case_id', `repeats the read of line ${earlier} (same reader, case, finding and period)`);
     rows.push(row);
   };
-  splitRecords(textIn, (cells, line) => {
-    if (rowProblem !== null) return;
-    try {
-      take(cells, line);
-    } catch (error) {
-      if (!(error instanceof ReadLogError)) throw error;
-      rowProblem = error;
-    }
-  });
-  if (rowProblem !== null) throw rowProblem;
-  if (header === null) throw new ReadLogError(1, null, 'the file is empty');
-  return rows;
+  const done = (): ReadRow[] => {
+    if (header === null) throw new ReadLogError(1, null, 'the file is empty');
+    return rows;
+  };
+  return { take, shownAtColumn: () => (layout === null ? -1 : layout.at.shown_at), done };
 };
 
 // Papaparse reports each row's end offset; a row starts where the previous ended, and its line
@@ -95,15 +120,98 @@ const splitRecords = (text: string, take: (cells: string[], line: number) => voi
 /** A read log needs about 25 columns plus case_<name> ones; a wider header is refused at once. */
 export const MAX_READ_LOG_COLUMNS = 1000;
 
+const NOT_UTF8 = 'the file is not UTF-8 text (first bad byte on this line); save it as UTF-8 CSV';
+
 /**
  * parseReadLog on a file's bytes, decoded as strict UTF-8: a file in another encoding (e.g.
  * Latin-1) is refused, naming the line of the first bad byte, instead of its letters silently
- * becoming U+FFFD. A leading byte-order mark is dropped.
+ * becoming U+FFFD. A leading byte-order mark is dropped. options.blockBytes (tests only) sets how
+ * many bytes of whole lines are decoded at a time.
  */
-export const parseReadLogBytes = (bytes: Uint8Array): ReadRow[] => {
-  const decoded = decodeUtf8(bytes);
-  if (!decoded.ok) throw new ReadLogError(decoded.line, null, 'the file is not UTF-8 text (first bad byte on this line); save it as UTF-8 CSV');
-  return parseReadLog(decoded.text);
+export const parseReadLogBytes = (bytes: Uint8Array, options: { blockBytes?: number } = {}): ReadRow[] => {
+  const begin = plainLinesFrom(bytes);
+  if (begin === -1) {
+    const decoded = decodeUtf8(bytes);
+    if (!decoded.ok) throw new ReadLogError(decoded.line, null, NOT_UTF8);
+    return parseReadLog(decoded.text);
+  }
+  // A block of whole lines at a time (about 64 kB), so the text of the whole file never exists
+  // beside the reads (a million reads are 140 MB of text). A bad byte anywhere wins over a
+  // problem in a row, as when the whole file was decoded first; a multi-byte character never
+  // holds a newline byte, so a block boundary never splits one.
+  const decoder = new TextDecoder('utf-8', { fatal: true, ignoreBOM: true });
+  const rows = rowReader();
+  let rowProblem: ReadLogError | null = null;
+  let line = 1;
+  for (let start = begin; start <= bytes.length; ) {
+    const end = blockEnd(bytes, start, options.blockBytes ?? BLOCK_BYTES);
+    const block = bytes.subarray(start, end);
+    let text: string;
+    try {
+      text = decoder.decode(block);
+    } catch {
+      const bad = decodeUtf8(block);
+      throw new ReadLogError(line + (bad.ok ? 0 : bad.line - 1), null, NOT_UTF8);
+    }
+    const lines = text.split('\n');
+    if (rowProblem === null) {
+      // in an all-ASCII block a character's index is its byte's index
+      const ascii = text.length === block.length;
+      let at = 0;
+      for (let i = 0; i < lines.length; i++) {
+        const lineText = lines[i] as string;
+        try {
+          const cells = lineText.split(',');
+          // V8 keeps a cut of 13 or more characters as a view of the text it was cut from, so a
+          // kept shown_at would keep its whole block alive: it is decoded on its own
+          const k = rows.shownAtColumn();
+          if (ascii && k >= 0 && k < cells.length && (cells[k] as string).length >= 13) {
+            let from = start + at;
+            for (let j = 0; j < k; j++) from += (cells[j] as string).length + 1;
+            cells[k] = decoder.decode(bytes.subarray(from, from + (cells[k] as string).length));
+          }
+          rows.take(cells, line + i);
+        } catch (error) {
+          if (!(error instanceof ReadLogError)) throw error;
+          rowProblem = error;
+          break;
+        }
+        at += lineText.length + 1;
+      }
+    }
+    line += lines.length;
+    start = end + 1;
+  }
+  if (rowProblem !== null) throw rowProblem;
+  return rows.done();
+};
+
+const BLOCK_BYTES = 1 << 16;
+
+// The end of the block of whole lines starting at `start`: the last newline within `size` bytes
+// (the block excludes it), the next newline when one line is longer, else the end of the file.
+const blockEnd = (bytes: Uint8Array, start: number, size: number): number => {
+  if (bytes.length - start <= size) return bytes.length;
+  const last = bytes.lastIndexOf(0x0a, start + size - 1);
+  if (last >= start) return last;
+  const next = bytes.indexOf(0x0a, start + size);
+  return next === -1 ? bytes.length : next;
+};
+
+// Where the lines of a file that parseReadLog would split directly start (after up to two
+// byte-order marks: the decoder drops one and parseReadLog another), or -1 for every other file:
+// one with a quote or a carriage return, and one whose first non-blank byte is not plain ASCII
+// (blank or not is then the decoded text's question).
+const plainLinesFrom = (bytes: Uint8Array): number => {
+  if (bytes.indexOf(0x22) !== -1 || bytes.indexOf(0x0d) !== -1) return -1;
+  let begin = 0;
+  for (let k = 0; k < 2 && bytes[begin] === 0xef && bytes[begin + 1] === 0xbb && bytes[begin + 2] === 0xbf; k++) begin += 3;
+  for (let i = begin; i < bytes.length; i++) {
+    const b = bytes[i] as number;
+    if (b === 0x20 || (b >= 0x09 && b <= 0x0d)) continue;
+    return b < 0x80 ? begin : -1;
+  }
+  return -1;
 };
 
 const checkHeader = (cells: string[], line: number): void => {

@@ -83,22 +83,50 @@ export const assistance = (raw: string, line: number, column: string): Assistanc
   return found;
 };
 
-const ISO_UTC = /^(\d{4})-(\d{2})-(\d{2})T(\d{2}):(\d{2})(?::(\d{2})(\.\d+)?)?Z$/;
+// The shape ISO 8601 UTC times take in a log: YYYY-MM-DDTHH:MM, optionally :SS and a fraction,
+// then Z (the pattern /^(\d{4})-(\d{2})-(\d{2})T(\d{2}):(\d{2})(?::(\d{2})(\.\d+)?)?Z$/),
+// checked by character codes: a log has one such cell per read.
+const isDigit = (raw: string, i: number): boolean => {
+  const d = raw.charCodeAt(i) - 48;
+  return d >= 0 && d <= 9;
+};
+const digitsIn = (raw: string, from: number, to: number): boolean => {
+  for (let i = from; i < to; i++) if (!isDigit(raw, i)) return false;
+  return true;
+};
+const twoDigits = (raw: string, i: number): number => (raw.charCodeAt(i) - 48) * 10 + raw.charCodeAt(i + 1) - 48;
 
-/**
- * A real calendar time: Date.parse rolls 2026-02-30 over to March 2 instead of refusing it, so
- * the fields are checked against the date they make (hours 0-23, minutes and seconds 0-59).
- */
+// Whether YYYY-MM-DD is a real calendar day: Date.UTC rolls 2026-02-30 over to March 2 instead
+// of refusing it, so the day is checked against the date it makes. A log has few distinct days,
+// so the answers are kept (a bounded cache).
+const realDays = new Map<string, boolean>();
+const realDay = (day: string): boolean => {
+  const known = realDays.get(day);
+  if (known !== undefined) return known;
+  const year = Number(day.slice(0, 4));
+  const month = Number(day.slice(5, 7));
+  const date = Number(day.slice(8, 10));
+  const made = new Date(Date.UTC(year, month - 1, date));
+  const real = made.getUTCFullYear() === year && made.getUTCMonth() === month - 1 && made.getUTCDate() === date;
+  if (realDays.size >= 4096) realDays.clear();
+  realDays.set(day, real);
+  return real;
+};
+
+/** A real calendar time in the shape above: hours 0-23, minutes and seconds 0-59, a real day. */
 const realTime = (raw: string): boolean => {
-  const m = ISO_UTC.exec(raw);
-  if (m === null) return false;
-  const part = (i: number): number => Number(m[i] ?? '0');
-  const year = part(1);
-  const month = part(2);
-  const day = part(3);
-  if (part(4) > 23 || part(5) > 59 || part(6) > 59) return false;
-  const date = new Date(Date.UTC(year, month - 1, day));
-  return date.getUTCFullYear() === year && date.getUTCMonth() === month - 1 && date.getUTCDate() === day;
+  const n = raw.length;
+  if (n < 17 || raw.charCodeAt(n - 1) !== 90 /* Z */) return false;
+  if (!digitsIn(raw, 0, 4) || raw.charCodeAt(4) !== 45 || !digitsIn(raw, 5, 7) || raw.charCodeAt(7) !== 45 || !digitsIn(raw, 8, 10)) return false;
+  if (raw.charCodeAt(10) !== 84 /* T */ || !digitsIn(raw, 11, 13) || raw.charCodeAt(13) !== 58 || !digitsIn(raw, 14, 16)) return false;
+  let seconds = 0;
+  if (n !== 17) {
+    if (n < 20 || raw.charCodeAt(16) !== 58 || !digitsIn(raw, 17, 19)) return false;
+    seconds = twoDigits(raw, 17);
+    if (n !== 20 && (n < 22 || raw.charCodeAt(19) !== 46 || !digitsIn(raw, 20, n - 1))) return false;
+  }
+  if (twoDigits(raw, 11) > 23 || twoDigits(raw, 14) > 59 || seconds > 59) return false;
+  return realDay(raw.slice(0, 10));
 };
 
 export const isoUtc = (raw: string, line: number, column: string): string => {

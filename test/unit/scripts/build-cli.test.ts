@@ -44,6 +44,18 @@ describe('the pre-built CLI bundle', () => {
     rmSync(path.join(root, 'dist-cli', 'heed.inputs.json'));
     expect(cliBundleIsFresh(root)).toBe(false);
   });
+  it('puts a lazily imported module in a chunk that counts as an input: the bundle is stale without it', async () => {
+    put('src/cli/main.ts', "const { word } = await import('./word');\nconsole.log(word satisfies string);\n");
+    const bundle = await ensureCliBundle(root);
+    expect(runBundle(bundle as string)).toBe('first');
+    const inputs: string[] = JSON.parse(readFileSync(cliPaths(root).inputs, 'utf8'));
+    const chunks = inputs.filter((f) => f.startsWith('dist-cli/chunks/'));
+    expect(chunks.length).toBeGreaterThan(0);
+    expect(cliBundleIsFresh(root)).toBe(true);
+    rmSync(path.join(root, chunks[0] as string));
+    expect(cliBundleIsFresh(root)).toBe(false);
+    expect(runBundle((await ensureCliBundle(root)) as string)).toBe('first');
+  });
   it('gives null (so bin/heed.js falls back to the TypeScript loader) when it cannot build', async () => {
     put('src/cli/main.ts', 'this is not ( TypeScript');
     expect(await ensureCliBundle(root)).toBeNull();
