@@ -10,8 +10,9 @@ import { neutraliseCell } from '../core/formula-text';
 import { READ_LOG_COLUMNS, READ_LOG_OPTIONAL_COLUMNS, type ReadRow } from '../core/read-log';
 import { csvCell, csvLine } from './csv-line';
 
-// Text that a spreadsheet could run as a formula gets a leading ' (core/formula-text); numbers never do.
-const cell = (value: string | number | null): string => (value === null ? '' : csvCell(neutraliseCell(String(value))));
+// Text that a spreadsheet could run as a formula gets a leading ' (core/formula-text). A number's
+// text ("-3.5", "1e-7", "NaN") is never formula-looking and holds nothing CSV quotes, so it is written as it is.
+const cell = (value: string | number | null): string => (value === null ? '' : typeof value === 'number' ? String(value) : csvCell(neutraliseCell(value)));
 
 /** Columns a caller adds after all others (the bundle's read id and chain hash): names, and the cells of row i. */
 export type ExtraColumns = { names: readonly string[]; cells: (index: number) => readonly string[] };
