@@ -21,7 +21,19 @@ export const CHAIN_PREFIX = 'heed-chain/1';
 
 export type Sha256Hex = (data: Uint8Array | string) => string;
 
-const nobleSha256Hex: Sha256Hex = (data) => bytesToHex(sha256(typeof data === 'string' ? utf8ToBytes(data) : data));
+// Link texts (a few hundred bytes, tens of thousands per bundle) are encoded into one reused
+// buffer instead of a new array each: the allocation cost more than the hashing. The digest is
+// taken synchronously and keeps no reference, so reusing the buffer is safe; long texts (whole
+// files) get their own array, so the buffer stays small.
+const encoder = new TextEncoder();
+const SHORT_TEXT = 1 << 16;
+const scratch = new Uint8Array(SHORT_TEXT * 3);
+const utf8Of = (text: string): Uint8Array => {
+  if (text.length > SHORT_TEXT) return utf8ToBytes(text);
+  return scratch.subarray(0, encoder.encodeInto(text, scratch).written);
+};
+
+const nobleSha256Hex: Sha256Hex = (data) => bytesToHex(sha256(typeof data === 'string' ? utf8Of(data) : data));
 let active: Sha256Hex = nobleSha256Hex;
 
 /** SHA-256 as 64 lower-case hex digits. */
