@@ -29,6 +29,9 @@ export const formulaProblem = (value: string): string | null => {
  * exactly).
  */
 const needsQuote = (value: string): boolean => {
+  const first = value.charCodeAt(0);
+  // most cells start with none of ' = + - @ tab CR: answered without a regular expression (export of large logs)
+  if (first !== 39 && first !== 61 && first !== 43 && first !== 45 && first !== 64 && first !== 9 && first !== 13) return false;
   let i = 0;
   while (value.charCodeAt(i) === 39) i += 1;
   return looksLikeFormula(value.slice(i));

@@ -1,20 +1,37 @@
 import type { AnalysisReport, CovarianceMethod } from '../../analysis/engine';
 import type { FindingRoc } from '../../analysis/roc-curves';
 import type { ReadRow } from '../../core/read-log';
+import type { HeedDb } from '../../store/db';
+import type { AnalysisRequest } from './analysis-worker';
 
 export type AnalysisOutput = { report: AnalysisReport; roc: FindingRoc[] };
 
-type Reply = ({ ok: true } & AnalysisOutput) | { ok: false; error: string };
+type Reply = ({ ok: true; empty?: false } & AnalysisOutput) | { ok: true; empty: true } | { ok: false; error: string };
 
-/** The analysis engine in a worker; covariance picks the Obuchowski-Rockette covariance method. */
-export const runAnalysis = (rows: ReadRow[], seed: number, boot: number, covariance: CovarianceMethod = 'jackknife'): Promise<AnalysisOutput> =>
+const inWorker = (request: AnalysisRequest): Promise<AnalysisOutput | null> =>
   new Promise((resolve, reject) => {
     const worker = new Worker(new URL('./analysis-worker.ts', import.meta.url), { type: 'module' });
     worker.onmessage = (event: MessageEvent<Reply>) => {
       worker.terminate();
-      if (event.data.ok) resolve({ report: event.data.report, roc: event.data.roc });
-      else reject(new Error(event.data.error));
+      const reply = event.data;
+      if (!reply.ok) reject(new Error(reply.error));
+      else resolve(reply.empty ? null : { report: reply.report, roc: reply.roc });
     };
     worker.onerror = (event) => { worker.terminate(); reject(new Error(event.message)); };
-    worker.postMessage({ rows, seed, boot, covariance });
+    worker.postMessage(request);
   });
+
+/** The analysis engine in a worker, on rows the caller has; covariance picks the Obuchowski-Rockette covariance method. */
+export const runAnalysis = async (rows: ReadRow[], seed: number, boot: number, covariance: CovarianceMethod = 'jackknife'): Promise<AnalysisOutput> => {
+  const output = await inWorker({ rows, seed, boot, covariance });
+  if (!output) throw new Error('no reads to analyse');
+  return output;
+};
+
+/**
+ * A stored study's analysis, its rows read from the database by the worker itself, so the page's
+ * main thread neither loads nor copies them (a large study stays responsive). Null when the study
+ * has no reads yet.
+ */
+export const runStudyAnalysis = (db: HeedDb, studyId: string, seed: number, boot: number, covariance: CovarianceMethod = 'jackknife'): Promise<AnalysisOutput | null> =>
+  inWorker({ dbName: db.name, studyId, seed, boot, covariance });

@@ -2,14 +2,13 @@
 import { useCallback, useEffect, useState } from 'react';
 import { DEFAULT_BOOT, DEFAULT_SEED } from '../../analysis/engine';
 import { getHost } from '../../host';
-import { studyReadRows } from '../../store/read-log-rows';
 import { getStudy } from '../../store/studies';
 import { CautionLine } from '../components/CautionLine';
 import { useDb } from '../db-context';
 import { AnalysisOptions } from '../results/AnalysisOptions';
 import { drawAllPlotsThen } from '../results/PlotFigure';
 import { ResultsPage } from '../results/ResultsPage';
-import { runAnalysis } from '../results/run-analysis';
+import { runStudyAnalysis } from '../results/run-analysis';
 import { signal } from '../signals';
 import { actions } from '../state/app-state';
 import { useAsync } from '../use-async';
@@ -19,8 +18,9 @@ export const ResultsScreen = ({ studyId }: { studyId: string }) => {
   const [seed, setSeed] = useState(DEFAULT_SEED);
   const [boot, setBoot] = useState(DEFAULT_BOOT);
   const results = useAsync(useCallback(async () => {
-    const [study, rows] = await Promise.all([getStudy(db, studyId), studyReadRows(db, studyId)]);
-    return { study, seed, boot, output: rows.length > 0 ? await runAnalysis(rows, seed, boot) : null };
+    // the worker reads the study's rows itself: the page's main thread stays free on a large study
+    const [study, output] = await Promise.all([getStudy(db, studyId), runStudyAnalysis(db, studyId, seed, boot)]);
+    return { study, seed, boot, output };
   }, [db, studyId, seed, boot]));
   const value = results.value;
   useEffect(() => { if (value || results.error) signal('ready', { screen: 'results', seed: value?.seed, boot: value?.boot }); }, [value, results.error]);

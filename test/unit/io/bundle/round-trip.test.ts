@@ -1,5 +1,7 @@
 import { unzipSync } from 'fflate';
+import { chainLinks, genesisHash } from '../../../../src/core/chain';
 import { readBundle } from '../../../../src/io/bundle/read';
+import { ANSWER_EVENTS } from '../../../../src/io/bundle/snapshot';
 import { writeBundle } from '../../../../src/io/bundle/write';
 import { gatherStudySnapshot, restoreStudy } from '../../../../src/store/bundle';
 import { studyReadRows } from '../../../../src/store/read-log-rows';
@@ -38,5 +40,17 @@ describe('study bundle round trip', () => {
     const csvHashes = first['reads.csv']!.trim().split('\n').slice(1).map((l) => l.split(',').at(-1)).sort();
     expect(storedHashes).toEqual(csvHashes);
     await expect(restoreStudy(other, withImages.snapshot)).rejects.toThrow(/already on this workstation/);
+  });
+
+  it('verifies a bundle of a study with no answers yet (reads.csv holds its header only)', async () => {
+    const db = freshDb();
+    const { study } = await readTinyStudy(db);
+    const full = await gatherStudySnapshot(db, study.id);
+    const events = chainLinks(genesisHash(study.id), full.events.filter((e) => !ANSWER_EVENTS.has(e.type)));
+    const zip = writeBundle({ ...full, events });
+    const read = readBundle(zip);
+    if (!read.ok) throw new Error(`verify failed: ${read.fault.file} ${read.fault.line} ${read.fault.message}`);
+    expect(read.manifest.chain.reads).toBe(0);
+    expect(files(zip)['reads.csv']!.split('\n')).toHaveLength(2);
   });
 });
