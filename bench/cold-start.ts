@@ -10,8 +10,8 @@
  */
 import { median } from 'simple-statistics';
 import { removeProfileDir } from '../test/e2e/support/chromium';
-import { benchProfileDir, buildAndServe, machineNote } from './support/app-under-test';
-import { atMost, plain, printResult, type Figure } from './support/figures';
+import { benchProfileDir, buildAndServe } from './support/app-under-test';
+import { atMost, machineNote, plain, printResult, type Figure } from './support/figures';
 import { timedLaunch, type Launch } from './support/launch-probe';
 
 const RUNS = Number(process.env.HEED_BENCH_COLD_RUNS ?? 5);

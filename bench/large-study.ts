@@ -34,8 +34,7 @@ import { loadStudyProgress } from '../src/ui/screens/study-progress';
 import { startStaticServer } from '../scripts/lib/static-server.mjs';
 import { newProfileDir, removeProfileDir, startChromium } from '../test/e2e/support/chromium';
 import type { Built, Measured } from './large-study/main';
-import { machineNote } from './support/app-under-test';
-import { atMost, plain, printResult, type Figure } from './support/figures';
+import { atMost, machineNote, plain, printResult, type Figure } from './support/figures';
 
 const READERS = Number(process.env.HEED_BENCH_READERS ?? 50);
 const CASES = Number(process.env.HEED_BENCH_CASES ?? 2000);

@@ -7,32 +7,27 @@
 // Run: npx tsx bench/reader-report.ts
 import { spawnSync } from 'node:child_process';
 import { mkdtempSync, rmSync, statSync, writeFileSync } from 'node:fs';
-import { loadavg, tmpdir } from 'node:os';
+import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { analyzeReads } from '../src/analysis/engine';
 import { readerReport } from '../src/analysis/reader-report/reader-report';
 import { plotDocument } from '../src/cli/plot-document';
 import { reportPage } from '../src/io/report/render-report';
-import { atMost, plain, printResult, spread, type Figure } from './support/figures';
+import { atMost, machineNote, plain, printResult, spread, timeOnce, type Figure } from './support/figures';
 import { simulateReadLog, simulateReadRows } from './simulate-log';
 
-const time = (f: () => unknown): number => {
-  const t = performance.now();
-  f();
-  return performance.now() - t;
-};
 
 const figures: Figure[] = [];
-const notes: string[] = [`load average at start ${loadavg().map((v) => v.toFixed(2)).join(' ')} on this machine`];
+const notes: string[] = [machineNote('start')];
 
 const rows = simulateReadRows({ seed: 4, readers: 10, cases: 500 });
 const analysis = analyzeReads(rows, { boot: 0 });
 const render = () => reportPage(readerReport({ analysis, rows, readerId: 'R1', complete: true }), { document: plotDocument() });
-const firstRender = time(render);
-const renders = spread(Array.from({ length: 5 }, () => time(render)));
+const firstRender = timeOnce(render);
+const renders = spread(Array.from({ length: 5 }, () => timeOnce(render)));
 figures.push(plain('report of a reader with 500 cases to HTML, first run', firstRender, 'ms'));
 figures.push(atMost('report of a reader with 500 cases to HTML, median of 5', renders.p50, 'ms', 1000));
-const withAnalysis = spread(Array.from({ length: 3 }, () => time(() => {
+const withAnalysis = spread(Array.from({ length: 3 }, () => timeOnce(() => {
   const a = analyzeReads(rows, { boot: 0, readersOnly: true });
   return reportPage(readerReport({ analysis: a, rows, readerId: 'R1', complete: true }), { document: plotDocument() });
 })));

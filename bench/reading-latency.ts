@@ -15,9 +15,10 @@ import { mkdirSync } from 'node:fs';
 import { join } from 'node:path';
 import { removeProfileDir } from '../test/e2e/support/chromium';
 import { homePage, readingPage, studyPage } from '../test/e2e/support/pages';
-import { benchProfileDir, buildAndServe, machineNote, RESULTS_DIR } from './support/app-under-test';
-import { plain, printResult, spread, spreadFigures, type Figure } from './support/figures';
+import { benchProfileDir, buildAndServe, RESULTS_DIR } from './support/app-under-test';
+import { machineNote, plain, printResult, spread, spreadFigures, type Figure } from './support/figures';
 import { timedLaunch } from './support/launch-probe';
+import { enrolAidedFirstReader, readPracticeCases } from './support/reading-setup';
 import { loadNow, startCpuLoad } from './support/cpu-load';
 import { collectLatencyRecord, installLatencyProbe, pairTimings, resetLatencyRecord, type ReadTiming } from './support/latency-probe';
 import { measureIdbFloor, type IdbFloor } from './support/idb-floor';
@@ -41,17 +42,8 @@ try {
     await homePage(page).waitUntilReady();
     await homePage(page).newStudy({ name: 'Latency bench', aidedMode: 'concurrent' });
 
-    // Sequences are UA (unaided first) and AU (aided first), assigned in permuted blocks of two:
-    // enrol until one reader has AU.
     const study = studyPage(page);
-    let reader = '';
-    for (const code of ['B01', 'B02', 'B03', 'B04']) {
-      await study.enrol(code);
-      await study.enrolled(code);
-      const sequence = await study.sequenceOf(code);
-      if (sequence === 'AU') { reader = code; break; }
-    }
-    if (reader === '') throw new Error('no enrolled reader was given the aided-first sequence AU');
+    const reader = await enrolAidedFirstReader(study, ['B01', 'B02', 'B03', 'B04']);
 
     await installLatencyProbe(page);
     const paintedBefore = await study.startPeriod(reader, 1);
@@ -61,13 +53,7 @@ try {
     if (first.assistance !== 'concurrent') throw new Error(`period 1 of ${reader} is "${first.assistance}", expected concurrent`);
     if ((await reading.suggestionText()) === null) throw new Error('the aided period shows no model suggestion');
 
-    // The practice cases come first, each followed by its truth, then the practice-over cover:
-    // they are read before measuring, so every measured Enter commits a main case.
-    let practice = 0;
-    while ((await page.getByText('Practice case').count()) > 0) {
-      await reading.answerByKeys(0, 5);
-      practice++;
-    }
+    const practice = await readPracticeCases(page, reading);
 
     if (PHASES) await installCommitPhases(page);
     const split = new Map<string, CommitPhases>();

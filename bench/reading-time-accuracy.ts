@@ -22,9 +22,10 @@ import { median } from 'simple-statistics';
 import { z } from 'zod';
 import { removeProfileDir, signalCount, waitForSignal } from '../test/e2e/support/chromium';
 import { homePage, readingPage, studyPage } from '../test/e2e/support/pages';
-import { benchProfileDir, buildAndServe, machineNote } from './support/app-under-test';
-import { atMost, plain, printResult, spread, type Figure } from './support/figures';
+import { benchProfileDir, buildAndServe } from './support/app-under-test';
+import { atMost, machineNote, plain, printResult, spread, type Figure } from './support/figures';
 import { timedLaunch } from './support/launch-probe';
+import { enrolAidedFirstReader, readPracticeCases } from './support/reading-setup';
 
 const CASES = Number(process.env.HEED_BENCH_CASES ?? 16);
 const INITIAL_AT = 800;
@@ -84,18 +85,12 @@ try {
     await homePage(page).waitUntilReady();
     await homePage(page).newStudy({ name: 'Timing bench', aidedMode: 'sequential' });
     const study = studyPage(page);
-    let reader = '';
-    for (const code of ['T01', 'T02', 'T03', 'T04']) {
-      await study.enrol(code);
-      await study.enrolled(code);
-      if ((await study.sequenceOf(code)) === 'AU') { reader = code; break; }
-    }
-    if (reader === '') throw new Error('no enrolled reader was given the aided-first sequence AU');
+    const reader = await enrolAidedFirstReader(study, ['T01', 'T02', 'T03', 'T04']);
     await installProbe(page);
     const reading = readingPage(page);
     await reading.waitForCase(await study.startPeriod(reader, 1));
     if ((await reading.state()).assistance !== 'sequential') throw new Error('period 1 is not read with the sequential aided condition');
-    while ((await page.getByText('Practice case').count()) > 0) await reading.answerByKeys(0, 5);
+    await readPracticeCases(page, reading);
 
     const planned: { caseId: string; paintedAt: number; initialAt: number; finalAt: number }[] = [];
     for (let i = 0; i < CASES; i++) {

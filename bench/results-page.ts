@@ -17,8 +17,8 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { newProfileDir, removeProfileDir, startChromium } from '../test/e2e/support/chromium';
 import { startStaticServer } from '../scripts/lib/static-server.mjs';
-import { machineNote, ROOT } from './support/app-under-test';
-import { atMost, plain, printResult } from './support/figures';
+import { ROOT } from './support/app-under-test';
+import { atMost, machineNote, plain, printResult } from './support/figures';
 
 const readers = Number(process.env.HEED_BENCH_READERS ?? 20);
 const cases = Number(process.env.HEED_BENCH_CASES ?? 500);

@@ -8,7 +8,8 @@
 import { median } from 'simple-statistics';
 import { startStaticServer } from '../../scripts/lib/static-server.mjs';
 import { removeProfileDir } from '../../test/e2e/support/chromium';
-import { benchProfileDir, machineNote } from './app-under-test';
+import { benchProfileDir } from './app-under-test';
+import { machineNote } from './figures';
 import { timedLaunch, type Launch } from './launch-probe';
 
 const [distA, distB] = process.argv.slice(2);

@@ -4,7 +4,7 @@
  */
 import { execFileSync } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
-import { availableParallelism, loadavg, tmpdir } from 'node:os';
+import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { startStaticServer } from '../../scripts/lib/static-server.mjs';
 
@@ -27,8 +27,3 @@ export const buildAndServe = async (): Promise<ServedApp> => {
 
 export const benchProfileDir = (): string => mkdtempSync(join(tmpdir(), 'heed-bench-profile-'));
 
-/** The machine's state beside the figures: other work on a 2-core box moves them a lot. */
-export const machineNote = (when: string): string => {
-  const [one = 0, five = 0] = loadavg();
-  return `${when}: load average ${one.toFixed(2)} (1 min), ${five.toFixed(2)} (5 min) on ${availableParallelism()} cores`;
-};

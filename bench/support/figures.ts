@@ -3,6 +3,7 @@
  * `BENCH_RESULT {json}` that scripts/bench.mjs collects into bench-results/summary.json.
  * Targets are reported beside the figure, never asserted (speed targets are not tests).
  */
+import { availableParallelism, loadavg } from 'node:os';
 import { max, quantileSorted } from 'simple-statistics';
 
 export type Figure = {
@@ -47,4 +48,17 @@ export const printResult = (result: BenchResult): void => {
   }
   for (const note of result.notes) console.log(`  note: ${note}`);
   console.log(`BENCH_RESULT ${JSON.stringify(result)}`);
+};
+
+/** The machine's state beside the figures: other work on a 2-core box moves them a lot. */
+export const machineNote = (when: string): string => {
+  const [one = 0, five = 0] = loadavg();
+  return `${when}: load average ${one.toFixed(2)} (1 min), ${five.toFixed(2)} (5 min) on ${availableParallelism()} cores`;
+};
+
+/** Milliseconds one synchronous call takes. */
+export const timeOnce = (f: () => unknown): number => {
+  const t = performance.now();
+  f();
+  return performance.now() - t;
 };

@@ -8,31 +8,38 @@ import { readLock, type LockInfo } from '../store/coordinator-lock';
 import type { HeedDb } from '../store/db';
 import { loadHome, type HomeData } from './screens/home-data';
 
-let lock: Promise<LockInfo> | null = null;
-let home: Promise<HomeData> | null = null;
 let startedAt = 0;
 const FRESH_MS = 3000;
 
 const fresh = (): boolean => performance.now() - startedAt < FRESH_MS;
 
+// One query started at launch and handed to the first screen that asks while it is still fresh.
+const launchQuery = <T>(load: (db: HeedDb) => Promise<T>) => {
+  let started: Promise<T> | null = null;
+  return {
+    start: (db: HeedDb): void => {
+      started = load(db);
+      // a failure is reported by the screen that takes the promise
+      started.catch(() => undefined);
+    },
+    take: (db: HeedDb): Promise<T> => {
+      const taken = started;
+      started = null;
+      return taken && fresh() ? taken : load(db);
+    },
+  };
+};
+
+const lock = launchQuery<LockInfo>(readLock);
+const home = launchQuery<HomeData>(loadHome);
+
 export const startLoading = (db: HeedDb): void => {
   startedAt = performance.now();
   // the database opens on the first query; these start it now
-  lock = readLock(db);
-  home = loadHome(db);
-  // a failure is reported by the screen that takes the promise
-  lock.catch(() => undefined);
-  home.catch(() => undefined);
+  lock.start(db);
+  home.start(db);
 };
 
-export const lockAtLaunch = (db: HeedDb): Promise<LockInfo> => {
-  const started = lock;
-  lock = null;
-  return started && fresh() ? started : readLock(db);
-};
+export const lockAtLaunch = (db: HeedDb): Promise<LockInfo> => lock.take(db);
 
-export const homeAtLaunch = (db: HeedDb): Promise<HomeData> => {
-  const started = home;
-  home = null;
-  return started && fresh() ? started : loadHome(db);
-};
+export const homeAtLaunch = (db: HeedDb): Promise<HomeData> => home.take(db);
