@@ -4,6 +4,8 @@
 // and style="" attributes that the browser parses, but not style sheets built through the CSSOM,
 // nor element.style set by script (how React and Plot set styles on elements they create).
 
+import { renderPlot, type PlotOptions } from '../io/plots/render';
+
 const adoptedBy = new WeakMap<Document, Set<string>>();
 
 /** Adds the CSS to the document as a constructed style sheet, once per text. */
@@ -30,6 +32,15 @@ export const liftStyleElements = (node: Element): string => {
     style.remove();
   }
   return texts.join('\n');
+};
+
+/**
+ * A plot drawn for this page: Plot's <style> elements taken out and their CSS adopted (the page's
+ * style policy would block them). `css` is that CSS, for a saved copy of the plot.
+ */
+export const renderPlotInPage = (options: PlotOptions): { node: SVGSVGElement | HTMLElement; css: string } => {
+  const node = renderPlot(options, document);
+  return { node, css: liftStyleElements(node) };
 };
 
 /** A short stable name for a declaration block (FNV-1a, 32 bits), so equal styles share a class. */

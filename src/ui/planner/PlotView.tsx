@@ -1,15 +1,14 @@
 /** An Observable Plot figure in the page, drawn by the shared renderer (src/io/plots/render.ts). */
 import { useEffect, useRef } from 'react';
-import { renderPlot, type PlotOptions } from '../../io/plots/render';
-import { liftStyleElements } from '../adopted-styles';
+import type { PlotOptions } from '../../io/plots/render';
+import { renderPlotInPage } from '../adopted-styles';
 
 export const PlotView = ({ options, label }: { options: PlotOptions; label: string }) => {
   const ref = useRef<HTMLDivElement>(null);
   useEffect(() => {
     const host = ref.current;
     if (!host) return;
-    const node = renderPlot(options, document);
-    liftStyleElements(node); // the page's style policy blocks <style> elements; the CSS is adopted
+    const { node } = renderPlotInPage(options);
     host.replaceChildren(node);
     return () => { host.replaceChildren(); };
   }, [options]);

@@ -3,11 +3,11 @@
  * with a title, a sentence saying what it shows, and buttons that save it as SVG or PNG.
  */
 import { useEffect, useRef, useState, type ReactNode, type RefObject } from 'react';
-import { renderPlot, type PlotOptions } from '../../io/plots/render';
+import type { PlotOptions } from '../../io/plots/render';
 import { getHost } from '../../host';
 import { signal } from '../signals';
 import { svgMarkup, svgToPng } from './plot-export';
-import { liftStyleElements } from '../adopted-styles';
+import { renderPlotInPage } from '../adopted-styles';
 
 /** Window event that makes every plot on the page draw now (before printing). */
 export const DRAW_ALL_PLOTS = 'heed:draw-all-plots';
@@ -51,9 +51,8 @@ export const PlotFigure = ({ title, file, options, children, wide }: Props) => {
   const plotCss = useRef('');
   useEffect(() => {
     if (!near) return undefined;
-    const node = renderPlot({ ...options, ariaLabel: title }, document);
-    // Plot's <style> elements would break the page's style policy; their CSS is adopted instead.
-    plotCss.current = liftStyleElements(node);
+    const { node, css } = renderPlotInPage({ ...options, ariaLabel: title });
+    plotCss.current = css;
     node.setAttribute('role', 'img');
     // the whole figure is one image named by its title; Plot's labels on inner groups (no role) are not allowed there
     for (const inner of node.querySelectorAll('[aria-label]')) if (inner !== node) inner.removeAttribute('aria-label');
