@@ -1,7 +1,9 @@
 // Wires the Electron app: privileged heed:// scheme, session policy, guards on every web
 // contents, IPC handlers, then the one window. Heed is a research and training tool, not a
 // medical device.
+import { mkdirSync } from 'node:fs';
 import { app, ipcMain, protocol, session } from 'electron';
+import { settleStoreEngine, SQLITE_FEATURE } from '../scripts/lib/store-engine.mjs';
 import { APP_SCHEME, APP_SCHEME_PRIVILEGES, appResponse } from './app-protocol';
 import { registerIpc } from './ipc-main';
 import { applySessionPolicy, createMainWindow, guardContents } from './window';
@@ -28,6 +30,12 @@ export const startApp = ({ distRoot, preload }: AppPaths, env: Record<string, st
     app.quit();
     return;
   }
+  // Chromium's SQLite IndexedDB engine for a new profile: its default engine can delete the whole
+  // database after a crash (scripts/lib/store-engine.mjs). Unverified in Electron here: its binary
+  // cannot be downloaded on these machines, and a Chromium without the feature ignores the switch.
+  const userData = app.getPath('userData');
+  mkdirSync(userData, { recursive: true });
+  if (settleStoreEngine(userData).engine === 'sqlite') app.commandLine.appendSwitch('enable-features', SQLITE_FEATURE);
   app.on('web-contents-created', (_event, contents) => guardContents(contents));
   app.on('window-all-closed', () => app.quit());
 

@@ -14,6 +14,7 @@ import {
 import { ELECTRON, RENDERER, targetIsStale } from './lib/freshness.mjs';
 import { profileToken, provesHeed } from './lib/launch-token.mjs';
 import { acquireLaunchLock } from './lib/launch-lock.mjs';
+import { settleStoreEngine, storeEngineNote } from './lib/store-engine.mjs';
 import { startStaticServer } from './lib/static-server.mjs';
 import { backupSecretFor, createBackupFolder, defaultBackupRoot } from './lib/backup-folder.mjs';
 
@@ -145,8 +146,10 @@ if (choice.mode === 'electron') {
   } else {
     mkdirSync(profileDir, { recursive: true });
     const isRoot = typeof process.getuid === 'function' && process.getuid() === 0;
-    const args = chromiumArgs({ url: appUrl(server.url, 'chromium', profileDir, backupSecret), profileDir, isRoot, debugPort: debugPort.port });
+    const store = settleStoreEngine(profileDir);
+    const args = chromiumArgs({ url: appUrl(server.url, 'chromium', profileDir, backupSecret, store.engine), profileDir, isRoot, debugPort: debugPort.port, engine: store.engine });
     say(`opening a Chromium app window (profile ${profileDir})`);
+    say(`${storeEngineNote(store.engine, profileDir)} (${store.reason})`);
     const verbose = Boolean(env.HEED_VERBOSE);
     const child = spawn(chromium, args, { stdio: ['ignore', verbose ? 'inherit' : 'ignore', verbose ? 'inherit' : 'pipe'], env });
     const lastLines = child.stderr ? tail(child.stderr) : () => [];

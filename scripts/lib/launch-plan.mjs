@@ -2,6 +2,7 @@
 // Chromium command line. Kept free of side effects so they are unit-tested.
 import { existsSync, readFileSync, accessSync, constants } from 'node:fs';
 import path from 'node:path';
+import { storeEngineArgs } from './store-engine.mjs';
 
 export const MODES = Object.freeze(['electron', 'chromium', 'serve']);
 export const DEFAULT_PORT = 5178;
@@ -54,13 +55,15 @@ export const parsePort = (name, value) => {
  * The address the launcher opens: the served root with the launch mode (and, for the Chromium
  * window, its profile folder) in the query string, so the start screen can say where this
  * window's data lives. The query does not change the origin, so the database is the same.
- * `backupSecret`, when given, lets the page write backups through the launcher (backup-endpoint.mjs).
- * @param {string} url @param {'chromium' | 'serve'} mode @param {string | null} profileDir @param {string | null} [backupSecret]
+ * `backupSecret`, when given, lets the page write backups through the launcher (backup-endpoint.mjs);
+ * `engine`, the Chromium window's IndexedDB engine, which the start screen names.
+ * @param {string} url @param {'chromium' | 'serve'} mode @param {string | null} profileDir @param {string | null} [backupSecret] @param {'sqlite' | 'leveldb' | null} [engine]
  */
-export const appUrl = (url, mode, profileDir, backupSecret = null) => {
+export const appUrl = (url, mode, profileDir, backupSecret = null, engine = null) => {
   const address = new URL(url);
   address.searchParams.set('mode', mode);
   if (profileDir !== null) address.searchParams.set('profile', profileDir);
+  if (engine !== null) address.searchParams.set('store', engine);
   if (backupSecret !== null) address.searchParams.set('backup', backupSecret);
   return address.href;
 };
@@ -79,9 +82,10 @@ export const chromiumProfileDir = (env, home) => {
 /**
  * Chromium's command line for an app window on `url`. Background services that would reach the
  * network are switched off. `--no-sandbox` only as root, where Chromium refuses to start otherwise.
- * @param {{ url: string; profileDir: string; isRoot: boolean; debugPort: number | null }} o
+ * `engine` is the profile's IndexedDB engine (store-engine.mjs).
+ * @param {{ url: string; profileDir: string; isRoot: boolean; debugPort: number | null; engine: 'sqlite' | 'leveldb' }} o
  */
-export const chromiumArgs = ({ url, profileDir, isRoot, debugPort }) => [
+export const chromiumArgs = ({ url, profileDir, isRoot, debugPort, engine }) => [
   `--app=${url}`,
   `--user-data-dir=${profileDir}`,
   '--no-first-run',
@@ -90,6 +94,7 @@ export const chromiumArgs = ({ url, profileDir, isRoot, debugPort }) => [
   '--disable-component-update',
   '--disable-sync',
   '--disable-quic',
+  ...storeEngineArgs(engine),
   ...(isRoot ? ['--no-sandbox'] : []),
   ...(debugPort !== null ? [`--remote-debugging-port=${debugPort}`] : []),
 ];

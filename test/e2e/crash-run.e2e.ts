@@ -77,7 +77,6 @@ describe('crash run: 200 answers, Chromium killed at 22 random moments', () => {
     let given = 0;
     let session = 0;
     let kills = 0;
-    let missingStudy = 0;
     const started = Date.now();
 
     /** From the study page: opens the current session, or moves past it when it is complete. */
@@ -100,15 +99,12 @@ describe('crash run: 200 answers, Chromium killed at 22 random moments', () => {
       chrome = await browser.launch();
       page = chrome.page;
       await homePage(page).waitUntilReady();
-      // Once in about six full runs the start page came up without the study's button after a
-      // relaunch (cause not found yet; answers were never affected). The page's text is printed
-      // and the page reloaded once, and the count is printed, so the anomaly stays visible.
+      // With Chromium's default LevelDB engine, a kill sometimes left a checksum mismatch and Chromium
+      // deleted the whole database on the next open (the start page came up empty). The profile
+      // runs on the SQLite engine as npm start's do; an empty start page is a lost store, a failure.
       const studyButton = page.getByRole('button', { name: STUDY, exact: true });
       if (!(await studyButton.waitFor({ timeout: 20_000 }).then(() => true, () => false))) {
-        missingStudy++;
-        console.log(`crash run: after kill ${kills} the start page showed no "${STUDY}" button; its text: ${(await page.locator('main').innerText()).slice(0, 600)}`);
-        await page.reload();
-        await homePage(page).waitUntilReady();
+        throw new Error(`after kill ${kills} the start page showed no "${STUDY}" button, the store is lost; its text: ${(await page.locator('main').innerText()).slice(0, 600)}`);
       }
       await homePage(page).openStudy(STUDY);
     };
@@ -152,7 +148,7 @@ describe('crash run: 200 answers, Chromium killed at 22 random moments', () => {
       }
     }
     const seconds = Math.round((Date.now() - started) / 1000);
-    console.log(`crash run: ${kills} kills, ${given} answers given (${confirmed.size} seen saved, ${uncertain.size} cut off at the kill) in ${seconds} s; start page without the study after a relaunch: ${missingStudy}`);
+    console.log(`crash run: ${kills} kills, ${given} answers given (${confirmed.size} seen saved, ${uncertain.size} cut off at the kill) in ${seconds} s`);
     expect(kills).toBe(KILLS);
 
     // The store, as exported: every case of every session answered exactly once.

@@ -13,6 +13,7 @@ export const DataPanel = () => {
     <section className="panel" aria-labelledby="data-head">
       <h2 id="data-head">Where the data is</h2>
       <p>{location.here}</p>
+      <p aria-label="Storage engine">{location.engine}</p>
       <p className="muted">Other ways of starting Heed keep their own data: {location.elsewhere.join('; ')}.</p>
       <p aria-label="Persistent storage">
         {s === undefined ? 'Asking the browser for persistent storage…'

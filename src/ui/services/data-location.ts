@@ -3,7 +3,16 @@
  * own database: IndexedDB lives in one browser profile, per address. The launcher passes the mode
  * (and the Chromium profile folder) in the query string (scripts/lib/launch-plan.mjs appUrl).
  */
-export type DataLocation = { here: string; elsewhere: string[] };
+export type DataLocation = { here: string; elsewhere: string[]; engine: string };
+
+// Chromium's default IndexedDB engine can delete a whole database after a crash; the launcher
+// starts new profiles on its SQLite engine instead (scripts/lib/store-engine.mjs).
+const ENGINE_WORDS = {
+  sqlite: 'Answers are written with Chromium’s SQLite storage engine, which kept every saved answer when the browser was killed in Heed’s tests.',
+  leveldb: 'Warning: this profile uses Chromium’s LevelDB storage engine, which can delete the whole database after a crash. Save a study bundle of each study, then move to a new profile as the terminal that started Heed says.',
+  unknown: 'Heed cannot choose this browser’s storage engine; Chromium’s default one can delete the whole database after a crash, so save a study bundle after each session, or start Heed with npm start.',
+  electron: 'A new Electron profile is started on Chromium’s SQLite storage engine, where its Chromium has one.',
+} as const;
 
 const CHROMIUM_PROFILE = '~/.config/heed/chromium-profile (or $XDG_CONFIG_HOME/heed/chromium-profile)';
 const ELECTRON_DATA = 'the Electron shell keeps its own database in its user-data folder (on Linux ~/.config/heed when started by npm start, ~/.config/Heed for a packaged build)';
@@ -13,19 +22,23 @@ export const dataLocation = (hostKind: 'electron' | 'browser', search: string, o
     return {
       here: 'Data of this window: the Electron shell’s own profile, in its user-data folder (on Linux ~/.config/heed when started by npm start, ~/.config/Heed for a packaged build).',
       elsewhere: [`the Chromium app window of npm start keeps its data in the profile ${CHROMIUM_PROFILE}`, 'a browser opened on the served address keeps it in that browser’s own profile'],
+      engine: ENGINE_WORDS.electron,
     };
   }
   const query = new URLSearchParams(search);
   const mode = query.get('mode');
   const profile = query.get('profile');
+  const store = query.get('store');
   if (mode === 'chromium') {
     return {
       here: `Data of this window: the Chromium profile at ${profile ?? CHROMIUM_PROFILE}, for the address ${origin}.`,
       elsewhere: [ELECTRON_DATA, `another browser, or another address or port, starts with an empty database of its own`],
+      engine: store === 'sqlite' || store === 'leveldb' ? ENGINE_WORDS[store] : ENGINE_WORDS.unknown,
     };
   }
   return {
     here: `Data of this window: this browser’s own profile, for the address ${origin} only${mode === 'serve' ? ' (npm start in serve mode)' : ''}.`,
     elsewhere: [`the Chromium app window of npm start keeps its data in the profile ${CHROMIUM_PROFILE}`, ELECTRON_DATA],
+    engine: ENGINE_WORDS.unknown,
   };
 };

@@ -8,6 +8,7 @@ import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { chromium, type Browser, type Page } from 'playwright-core';
+import { storeEngineArgs, type StoreEngine } from '../../../scripts/lib/store-engine.mjs';
 
 export const CHROMIUM = process.env.HEED_CHROMIUM ?? '/usr/bin/chromium';
 
@@ -24,8 +25,12 @@ export const removeProfileDir = (dir: string): void => rmSync(dir, { recursive: 
 const waitForExit = (child: ChildProcess): Promise<void> =>
   child.exitCode !== null || child.signalCode !== null ? Promise.resolve() : new Promise((resolve) => child.once('exit', () => resolve()));
 
-export const startChromium = async (profileDir: string, url: string): Promise<RunningChromium> => {
-  const child = spawn(CHROMIUM, [...FLAGS, `--user-data-dir=${profileDir}`, 'about:blank'], { stdio: ['ignore', 'ignore', 'pipe'], detached: true });
+/**
+ * `engine` is the IndexedDB engine: SQLite by default, as npm start gives a new profile
+ * (scripts/lib/store-engine.mjs); LevelDB only for the benchmark that compares the two.
+ */
+export const startChromium = async (profileDir: string, url: string, engine: StoreEngine = 'sqlite'): Promise<RunningChromium> => {
+  const child = spawn(CHROMIUM, [...FLAGS, ...storeEngineArgs(engine), `--user-data-dir=${profileDir}`, 'about:blank'], { stdio: ['ignore', 'ignore', 'pipe'], detached: true });
   const wsUrl = await new Promise<string>((resolve, reject) => {
     let buffered = '';
     const timer = setTimeout(() => reject(new Error(`Chromium did not start: ${buffered.slice(-500)}`)), 30_000);

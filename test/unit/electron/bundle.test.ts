@@ -37,6 +37,7 @@ export const app = {
   on: (n, f) => { listeners[n] = f; },
   whenReady: () => Promise.resolve().then(() => log('ready')),
   commandLine: { appendSwitch: (...a) => log('switch', ...a) },
+  getPath: (name) => name === 'userData' ? ${JSON.stringify(path.join(dir, 'user-data'))} : '/nonexistent',
 };
 export const protocol = {
   registerSchemesAsPrivileged: (s) => log('privileged', s),
@@ -71,6 +72,7 @@ export const shell = {};
     expect(names.indexOf('privileged')).toBeLessThan(names.indexOf('ready'));
     expect(calls.find((c) => c[0] === 'privileged')?.[1]).toEqual([{ scheme: 'heed', privileges: expect.objectContaining({ standard: true, secure: true }) }]);
     expect(calls).toContainEqual(['switch', 'remote-debugging-port', '9555']);
+    expect(calls).toContainEqual(['switch', 'enable-features', 'IdbSqliteBackingStore']); // a new user-data folder
     expect(names.filter((n) => n === 'ipc')).toHaveLength(8); // one per IPC channel (electron/channels.ts)
     expect(calls).toContainEqual(['handle', 'heed']);
     expect(calls).toContainEqual(['load', 'heed://app/index.html']);

@@ -1,9 +1,11 @@
 const electron = vi.hoisted(() => {
+  const userData = { dir: '' };
   const listeners = new Map<string, (...args: unknown[]) => void>();
   let resolveReady: () => void = () => {};
   const ready = new Promise<void>((r) => { resolveReady = r; });
   return {
     listeners,
+    userData,
     fireReady: () => resolveReady(),
     app: {
       enableSandbox: vi.fn(),
@@ -12,6 +14,7 @@ const electron = vi.hoisted(() => {
       on: vi.fn((name: string, fn: (...args: unknown[]) => void) => { listeners.set(name, fn); }),
       whenReady: vi.fn(() => ready),
       commandLine: { appendSwitch: vi.fn() },
+      getPath: vi.fn(() => userData.dir),
       isPackaged: false,
     },
     protocol: { registerSchemesAsPrivileged: vi.fn(), handle: vi.fn() },
@@ -27,10 +30,16 @@ const window = vi.hoisted(() => ({
 }));
 vi.mock('../../../electron/window', () => window);
 
+import { mkdirSync, mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
 import { CHANNELS } from '../../../electron/channels';
 import { debugPortFrom, startApp } from '../../../electron/start-app';
 
 describe('startApp', () => {
+  beforeEach(() => { electron.userData.dir = mkdtempSync(path.join(tmpdir(), 'heed-userdata-')); });
+  afterEach(() => rmSync(electron.userData.dir, { recursive: true, force: true }));
+
   it('registers heed:// as privileged before ready, then wires policy, scheme, IPC and the window', async () => {
     startApp({ distRoot: '/app/dist', preload: '/app/dist-electron/preload.cjs' }, { HEED_DEBUG_PORT: '9444' });
     expect(electron.protocol.registerSchemesAsPrivileged).toHaveBeenCalledWith([
@@ -62,6 +71,23 @@ describe('startApp', () => {
     expect(electron.app.quit).toHaveBeenCalled();
     expect(electron.app.commandLine.appendSwitch).not.toHaveBeenCalled();
     expect(electron.app.on).not.toHaveBeenCalled();
+  });
+});
+
+describe('the IndexedDB engine', () => {
+  beforeEach(() => { vi.clearAllMocks(); electron.userData.dir = mkdtempSync(path.join(tmpdir(), 'heed-userdata-')); });
+  afterEach(() => rmSync(electron.userData.dir, { recursive: true, force: true }));
+
+  it('turns on Chromium\'s SQLite engine for a new user-data folder, and records it', () => {
+    startApp({ distRoot: '/d', preload: '/p' }, {});
+    expect(electron.app.commandLine.appendSwitch).toHaveBeenCalledWith('enable-features', 'IdbSqliteBackingStore');
+    expect(readFileSync(path.join(electron.userData.dir, 'heed-store-engine'), 'utf8')).toBe('sqlite\n');
+  });
+
+  it('leaves a user-data folder that holds LevelDB data on LevelDB', () => {
+    mkdirSync(path.join(electron.userData.dir, 'IndexedDB', 'heed_app_0.indexeddb.leveldb'), { recursive: true });
+    startApp({ distRoot: '/d', preload: '/p' }, {});
+    expect(electron.app.commandLine.appendSwitch).not.toHaveBeenCalledWith('enable-features', expect.anything());
   });
 });
 

@@ -66,7 +66,7 @@ describe('chromiumProfileDir', () => {
 });
 
 describe('chromiumArgs', () => {
-  const base = { url: 'http://127.0.0.1:5178/', profileDir: '/p/heed/chromium-profile', isRoot: false, debugPort: null };
+  const base = { url: 'http://127.0.0.1:5178/', profileDir: '/p/heed/chromium-profile', isRoot: false, debugPort: null, engine: 'sqlite' as const };
 
   it('opens an app window on the URL with the persistent profile and background services off', () => {
     const args = chromiumArgs(base);
@@ -82,6 +82,11 @@ describe('chromiumArgs', () => {
   it('adds --no-sandbox only as root, and a debugging port only when asked', () => {
     expect(chromiumArgs({ ...base, isRoot: true })).toContain('--no-sandbox');
     expect(chromiumArgs({ ...base, debugPort: 9333 })).toContain('--remote-debugging-port=9333');
+  });
+
+  it('turns on Chromium\'s SQLite IndexedDB engine for a SQLite profile only', () => {
+    expect(chromiumArgs(base)).toContain('--enable-features=IdbSqliteBackingStore');
+    expect(chromiumArgs({ ...base, engine: 'leveldb' }).some((a) => a.startsWith('--enable-features'))).toBe(false);
   });
 });
 
@@ -121,5 +126,6 @@ describe('appUrl', () => {
     expect(new URL(url).searchParams.get('mode')).toBe('chromium');
     expect(new URL(url).searchParams.get('profile')).toBe('/home/ana/.config/heed/chromium-profile');
     expect(new URL(appUrl('http://127.0.0.1:5178/', 'serve', null)).search).toBe('?mode=serve');
+    expect(new URL(appUrl('http://127.0.0.1:5178/', 'chromium', '/p', null, 'leveldb')).searchParams.get('store')).toBe('leveldb');
   });
 });

@@ -12,6 +12,12 @@ describe('where the data of each launch mode lives', () => {
     expect(dataLocation('browser', '', 'http://127.0.0.1:5178').elsewhere.join(' ')).toMatch(/chromium-profile.*Electron/);
   });
 
+  it('says which storage engine holds the answers, and warns where it may lose them', () => {
+    expect(dataLocation('browser', '?mode=chromium&store=sqlite', 'http://127.0.0.1:5178').engine).toMatch(/SQLite storage engine/);
+    expect(dataLocation('browser', '?mode=chromium&store=leveldb', 'http://127.0.0.1:5178').engine).toMatch(/^Warning: .*LevelDB.*Save a study bundle/);
+    expect(dataLocation('browser', '?mode=serve', 'http://127.0.0.1:5178').engine).toMatch(/cannot choose this browser’s storage engine/);
+  });
+
   it('Electron says it keeps its own', () => {
     expect(dataLocation('electron', '', 'heed://app').here).toMatch(/Electron shell’s own profile/);
   });

@@ -1,0 +1,10 @@
+export type StoreEngine = 'sqlite' | 'leveldb';
+export type StoreEngineChoice = { engine: StoreEngine; reason: string; record: boolean };
+export declare const SQLITE_FEATURE: string;
+export declare const ENGINE_FILE: string;
+export declare const ENGINES: readonly StoreEngine[];
+export declare const chooseStoreEngine: (facts: { marker: string | null; levelDbStores: string[] }) => StoreEngineChoice;
+export declare const readStoreEngineFacts: (profileDir: string) => { marker: string | null; levelDbStores: string[] };
+export declare const settleStoreEngine: (profileDir: string) => StoreEngineChoice;
+export declare const storeEngineArgs: (engine: StoreEngine) => string[];
+export declare const storeEngineNote: (engine: StoreEngine, profileDir: string) => string;
