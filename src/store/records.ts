@@ -111,8 +111,10 @@ export type StoredEvent = {
 
 /**
  * A workstation setting, by key. `coordinator-lock`: the passphrase's salted hash (never the
- * passphrase) and the idle minutes; `lock-state`: whether the coordinator's side is locked.
+ * passphrase) and the idle minutes; `lock-state`: whether the coordinator's side is locked;
+ * `store-identity`: a random id given to this database when it was created (store-identity.ts).
  */
 export type StoredSetting =
   | { key: 'coordinator-lock'; hash: PassphraseHash; idleMinutes: number; setAt: string }
-  | { key: 'lock-state'; locked: boolean; since: string; why: string };
+  | { key: 'lock-state'; locked: boolean; since: string; why: string }
+  | { key: 'store-identity'; id: string; createdAt: string };

@@ -11,6 +11,7 @@ import { BackupsPanel } from './BackupsPanel';
 import { CaseSetList } from './CaseSetList';
 import { DataPanel } from './DataPanel';
 import { OpenBundle } from './OpenBundle';
+import { StoreLossNotice } from './StoreLossNotice';
 
 export const HomeScreen = () => {
   const db = useDb();
@@ -28,6 +29,7 @@ export const HomeScreen = () => {
         <p className="tagline">Local reading sessions that show how readers use a model’s suggestions.</p>
         <CautionLine />
       </header>
+      {home.value?.storeLoss && <StoreLossNotice loss={home.value.storeLoss} />}
       <LockSetupSlot />
       {home.error && <p role="alert">Could not open the database: {home.error.message}</p>}
       {!home.value && !home.error && <p aria-busy="true">Opening Heed (on first launch the demo case set is generated: a few seconds)…</p>}

@@ -5,15 +5,23 @@ import type { HeedDb } from '../../store/db';
 import { unfinishedSessions, type Unfinished } from '../../store/progress';
 import type { StoredCaseSet, StoredStudy } from '../../store/records';
 import { statusOfStudy } from '../../store/study-lifecycle';
+import { storeIdentity } from '../../store/store-identity';
 import { listStudies } from '../../store/studies';
+import { checkStoreLoss, originStorage, type StoreLoss } from '../services/store-loss';
 import { DEMO_SET_ID, ensureDemoCaseSet } from '../services/demo-set';
 
-export type HomeData = { caseSets: StoredCaseSet[]; studies: StoredStudy[]; unfinished: Unfinished[]; statuses: Map<string, string> };
+export type HomeData = {
+  caseSets: StoredCaseSet[]; studies: StoredStudy[]; unfinished: Unfinished[]; statuses: Map<string, string>;
+  /** the browser lost an earlier database of this window, and the notice is not read yet */
+  storeLoss: StoreLoss | null;
+};
 
 export const loadHome = async (db: HeedDb): Promise<HomeData> => {
-  const [listed, studies, unfinished] = await Promise.all([listCaseSets(db), listStudies(db), unfinishedSessions(db)]);
+  const [listed, studies, unfinished, identity] = await Promise.all([listCaseSets(db), listStudies(db), unfinishedSessions(db), storeIdentity(db)]);
+  const storage = originStorage();
+  const storeLoss = storage === null ? null : checkStoreLoss(identity, storage);
   // the demo set is generated once, on first launch; a relaunch only sees it in the list
   const caseSets = listed.some((s) => s.id === DEMO_SET_ID) ? listed : await ensureDemoCaseSet(db).then(() => listCaseSets(db));
   const statuses = new Map(await Promise.all(studies.map(async (s) => [s.id, STATUS_WORDS[await statusOfStudy(db, s)]] as const)));
-  return { caseSets, studies, unfinished, statuses };
+  return { caseSets, studies, unfinished, statuses, storeLoss };
 };
