@@ -9,8 +9,9 @@
  * A "whole-store loss" is a relaunch that finds fewer records than were confirmed; Chromium's log
  * then says "Corruption: checksum mismatch" and "IndexedDB recovering from a corrupted (and
  * deleted) database". HEED_BENCH_KILL_CYCLES sets the kills per engine (default 100; each is about
- * 1.5 s). The page is not Heed: this measures the browser's store, which Heed cannot repair; the
- * crash-run e2e test measures Heed itself on the SQLite engine.
+ * 1.5 s), HEED_BENCH_KILL_ENGINES the engines (default leveldb,sqlite). The page is not Heed: this
+ * measures the browser's store, which Heed cannot repair; the crash-run e2e test measures Heed
+ * itself on the SQLite engine.
  */
 import { createServer } from 'node:http';
 import type { AddressInfo } from 'node:net';
@@ -19,6 +20,7 @@ import { newProfileDir, removeProfileDir, startChromium } from '../test/e2e/supp
 import { machineNote, plain, printResult, type Figure } from './support/figures';
 
 const CYCLES = Number(process.env.HEED_BENCH_KILL_CYCLES ?? 100);
+const ENGINES = (process.env.HEED_BENCH_KILL_ENGINES ?? 'leveldb,sqlite').split(',') as StoreEngine[];
 
 const PAGE = `<!doctype html><title>store kill</title><script>
 const openDb = () => new Promise((resolve, reject) => {
@@ -77,7 +79,7 @@ const server = createServer((_request, response) => { response.writeHead(200, { 
 await new Promise<void>((resolve) => { server.listen(0, '127.0.0.1', resolve); });
 const url = `http://127.0.0.1:${(server.address() as AddressInfo).port}/`;
 const figures: Figure[] = [];
-for (const engine of ['leveldb', 'sqlite'] as const) {
+for (const engine of ENGINES) {
   const o = await runEngine(url, engine);
   figures.push(plain(`${engine}: kills`, o.cycles, 'kills'), plain(`${engine}: relaunches that found the whole store deleted`, o.wholeStoreLosses, 'relaunches'), plain(`${engine}: confirmed records lost`, o.writesLost, 'records'));
 }
