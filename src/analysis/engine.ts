@@ -5,8 +5,11 @@ import { COVARIANCE_METHODS, type CovarianceMethod } from './or-covariances';
 import { isAided } from './read-scores';
 import { readerAveraged } from './reader-bootstrap';
 import type { AnalysisReport, GroupFinding, ReaderEntry } from './report-types';
-import { sections } from './sections';
-import { subgroups } from './subgroups';
+import { attributeCodes } from './attribute-codes';
+import { readColumns } from './read-columns';
+import { partition, partitionReads, sectionReads, type SectionReads } from './read-set';
+import { sectionsOf } from './sections';
+import { subgroupsOf } from './subgroups';
 
 export type { AnalysisReport } from './report-types';
 
@@ -65,41 +68,53 @@ export const analyzeReads = (rows: readonly ReadRow[], options: AnalyzeOptions =
   // names are looked at once (in order of first appearance, so the attribute order is unchanged);
   // rows each with their own object (from the store) only fill the set up to a bound
   const attributeSets = new Set<Readonly<Record<string, string>>>();
-  const byFinding = new Map<string, Map<string, ReadRow[]>>();
-  for (const r of reads) {
+  const byFinding = new Map<string, number[]>();
+  for (let i = 0; i < reads.length; i++) {
+    const r = reads[i] as ReadRow;
     if (!attributeSets.has(r.case_attributes)) {
       if (attributeSets.size < 4096) attributeSets.add(r.case_attributes);
       for (const a of Object.keys(r.case_attributes)) if (!attributes.includes(a)) attributes.push(a);
     }
-    let f = byFinding.get(r.finding);
-    if (f === undefined) {
-      f = new Map();
-      byFinding.set(r.finding, f);
-    }
-    const list = f.get(r.reader_id);
-    if (list === undefined) f.set(r.reader_id, [r]);
-    else list.push(r);
+    const f = byFinding.get(r.finding);
+    if (f === undefined) byFinding.set(r.finding, [i]);
+    else f.push(i);
   }
+  // one index for the whole analysis: the reads as columns, each attribute's values as codes;
+  // per finding the reads are split and sorted once, and every reader and subgroup takes its share
+  const cols = readColumns(reads);
+  const codes = attributeCodes(reads, attributes);
   const readers: ReaderEntry[] = [];
   const findings: GroupFinding[] = [];
-  for (const [finding, perReader] of byFinding) {
-    const ids = [...perReader.keys()].sort(byReaderId);
-    const all: ReadRow[] = [];
-    for (const id of ids) {
-      const rs = perReader.get(id) ?? [];
-      for (const r of rs) all.push(r);
-      readers.push({ reader_id: id, reader_role: rs[0]?.reader_role ?? '', finding, ...sections(rs), subgroups: subgroups(rs, attributes) });
+  for (const [finding, rowsOfFinding] of byFinding) {
+    const perReader = partition(Int32Array.from(rowsOfFinding), cols.reader, cols.readerIds.length);
+    const order = [...perReader.keys()].filter((k) => (perReader[k] as Int32Array).length > 0);
+    order.sort((a, b) => byReaderId(cols.readerIds[a] as string, cols.readerIds[b] as string));
+    const all = new Int32Array(rowsOfFinding.length);
+    let at = 0;
+    for (const k of order) {
+      all.set(perReader[k] as Int32Array, at);
+      at += (perReader[k] as Int32Array).length;
+    }
+    const pooled = sectionReads(cols, all);
+    const readerReads = partitionReads(pooled, cols.reader, cols.readerIds.length);
+    for (const k of order) {
+      const rs = readerReads[k] as SectionReads;
+      const id = cols.readerIds[k] as string;
+      const role = reads[rs.all[0] as number]?.reader_role ?? '';
+      readers.push({ reader_id: id, reader_role: role, finding, ...sectionsOf(cols, rs), subgroups: subgroupsOf(cols, rs, codes) });
     }
     if (options.readersOnly === true) continue;
-    const m = mrmc(all, covariance);
+    // the multi-reader statistics still take the row objects
+    const allReads = Array.from(all, (i) => reads[i] as ReadRow);
+    const m = mrmc(allReads, covariance);
     findings.push({
       finding,
-      readers: ids.length,
-      cases: new Set(all.map((r) => r.case_id)).size,
-      pooled: sections(all),
-      reader_averaged: readerAveraged(all, { seed, boot }),
-      fleiss_kappa: { unaided: readersAgreement(all.filter((r) => !isAided(r))), aided: readersAgreement(all.filter(isAided)) },
-      subgroups: subgroups(all, attributes),
+      readers: order.length,
+      cases: distinctCount(cols.case, all, cols.caseCount),
+      pooled: sectionsOf(cols, pooled),
+      reader_averaged: readerAveraged(allReads, { seed, boot }),
+      fleiss_kappa: { unaided: readersAgreement(allReads.filter((r) => !isAided(r))), aided: readersAgreement(allReads.filter(isAided)) },
+      subgroups: subgroupsOf(cols, pooled, codes),
       mrmc: m.result,
       mrmc_note: m.note,
     });
@@ -125,4 +140,17 @@ const logNote = (reads: readonly ReadRow[]): string | null => {
   if (reads.some(isAided)) return null;
   const rated = reads.some((r) => r.final_rating !== null);
   return `No suggestion was shown in this log${rated ? ' (an external rating log)' : ''}: only the performance sections (accuracy, sensitivity, specificity, AUC${rated ? ' of the ratings' : ''}) are computed; the reliance sections are null.`;
+};
+
+const distinctCount = (key: Int32Array, rows: Int32Array, keys: number): number => {
+  const seen = new Uint8Array(keys);
+  let n = 0;
+  for (let k = 0; k < rows.length; k++) {
+    const c = key[rows[k] as number] as number;
+    if (seen[c] === 0) {
+      seen[c] = 1;
+      n++;
+    }
+  }
+  return n;
 };

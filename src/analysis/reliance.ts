@@ -1,5 +1,6 @@
 import type { ReadRow } from '../core/read-log';
-import { cohenKappa, type Kappa } from './cohen-kappa';
+import { cohenKappaTable, type Kappa } from './cohen-kappa';
+import { allRows, readColumns, type ReadColumns } from './read-columns';
 import { wilson, type Proportion } from './wilson';
 
 export type Reliance = {
@@ -37,6 +38,12 @@ export type Reliance = {
  * Example: reliance(aidedReads).overreliance.estimate → share of wrong suggestions followed.
  */
 export const reliance = (reads: readonly ReadRow[]): Reliance => {
+  const cols = readColumns(reads);
+  return relianceOf(cols, allRows(cols));
+};
+
+/** reliance over reads given as row numbers into columns (the engine's path; same numbers). */
+export const relianceOf = (cols: ReadColumns, rows: Int32Array): Reliance => {
   let n = 0;
   let agree = 0;
   let wrong = 0;
@@ -45,21 +52,24 @@ export const reliance = (reads: readonly ReadRow[]): Reliance => {
   let rightCorrect = 0;
   let wrongCorrect = 0;
   const caution = [[0, 0], [0, 0]] as [[number, number], [number, number]];
-  const d: number[] = [];
-  const a: number[] = [];
-  for (const r of reads) {
-    if (r.ai_call === null) continue;
+  // Cohen's kappa of d against a: its 2×2 table, counted here
+  const table = [[0, 0], [0, 0]] as [[number, number], [number, number]];
+  for (let k = 0; k < rows.length; k++) {
+    const r = rows[k] as number;
+    const a = cols.aiCall[r] as number;
+    if (a === -1) continue;
+    const d = cols.finalCall[r] as number;
+    const y = cols.truth[r] as number;
     n++;
-    d.push(r.final_call);
-    a.push(r.ai_call);
-    const follows = r.final_call === r.ai_call;
-    const correct = r.final_call === r.truth;
+    table[d as 0 | 1][a as 0 | 1]++;
+    const follows = d === a;
+    const correct = d === y;
     if (follows) agree++;
-    if (r.ai_call !== r.truth) {
+    if (a !== y) {
       wrong++;
       if (follows) followedWrong++;
       if (correct) wrongCorrect++;
-      const cs = caution[r.caution_shown];
+      const cs = caution[cols.caution[r] as 0 | 1];
       cs[1]++;
       if (follows) cs[0]++;
     } else {
@@ -67,7 +77,7 @@ export const reliance = (reads: readonly ReadRow[]): Reliance => {
       if (correct) rightCorrect++;
     }
   }
-  const kappa: Kappa = cohenKappa(d, a);
+  const kappa: Kappa = cohenKappaTable(table);
   return {
     agreement: wilson(agree, n),
     overreliance: wilson(followedWrong, wrong),
