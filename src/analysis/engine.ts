@@ -1,9 +1,9 @@
 import type { ReadRow } from '../core/read-log';
-import { readersAgreement } from './fleiss-readers';
-import { mrmc } from './mrmc-adapter';
+import { readersAgreementOf } from './fleiss-readers';
+import { mrmcOf } from './mrmc-adapter';
 import { COVARIANCE_METHODS, type CovarianceMethod } from './or-covariances';
 import { isAided } from './read-scores';
-import { readerAveraged } from './reader-bootstrap';
+import { readerAveragedOf } from './reader-bootstrap';
 import type { AnalysisReport, GroupFinding, ReaderEntry } from './report-types';
 import { attributeCodes } from './attribute-codes';
 import { readColumns } from './read-columns';
@@ -104,16 +104,14 @@ export const analyzeReads = (rows: readonly ReadRow[], options: AnalyzeOptions =
       readers.push({ reader_id: id, reader_role: role, finding, ...sectionsOf(cols, rs), subgroups: subgroupsOf(cols, rs, codes) });
     }
     if (options.readersOnly === true) continue;
-    // the multi-reader statistics still take the row objects
-    const allReads = Array.from(all, (i) => reads[i] as ReadRow);
-    const m = mrmc(allReads, covariance);
+    const m = mrmcOf(cols, all, covariance);
     findings.push({
       finding,
       readers: order.length,
       cases: distinctCount(cols.case, all, cols.caseCount),
       pooled: sectionsOf(cols, pooled),
-      reader_averaged: readerAveraged(allReads, { seed, boot }),
-      fleiss_kappa: { unaided: readersAgreement(allReads.filter((r) => !isAided(r))), aided: readersAgreement(allReads.filter(isAided)) },
+      reader_averaged: readerAveragedOf(cols, all, order.map((k) => readerReads[k] as SectionReads), { seed, boot }),
+      fleiss_kappa: { unaided: readersAgreementOf(cols, pooled.unaided.rows), aided: readersAgreementOf(cols, pooled.aided.rows) },
       subgroups: subgroupsOf(cols, pooled, codes),
       mrmc: m.result,
       mrmc_note: m.note,

@@ -13,6 +13,7 @@ export type ReadColumns = {
   reader: Int32Array;
   readerIds: string[];
   case: Int32Array;
+  caseIds: string[];
   caseCount: number;
   /** 1 when a suggestion was shown (isAided) */
   aided: Uint8Array;
@@ -48,7 +49,7 @@ export const readColumns = (rows: readonly ReadRow[]): ReadColumns => {
   const readerIdx = new Map<string, number>();
   const caseIdx = new Map<string, number>();
   const c: ReadColumns = {
-    n, rows, readerIds: [], caseCount: 0,
+    n, rows, readerIds: [], caseIds: [], caseCount: 0,
     reader: new Int32Array(n), case: new Int32Array(n), aided: new Uint8Array(n), sequential: new Uint8Array(n),
     truth: new Uint8Array(n), finalCall: new Uint8Array(n), aiCall: new Int8Array(n), initialCall: new Int8Array(n), caution: new Uint8Array(n),
     period: new Float64Array(n), score: new Float64Array(n), likelihood: new Float64Array(n), totalMs: new Float64Array(n),
@@ -79,6 +80,7 @@ export const readColumns = (rows: readonly ReadRow[]): ReadColumns => {
     c.totalMs[i] = t;
   }
   c.readerIds = [...readerIdx.keys()];
+  c.caseIds = [...caseIdx.keys()];
   c.caseCount = caseIdx.size;
   return c;
 };
@@ -94,3 +96,24 @@ const intern = (ids: Map<string, number>, id: string): number => {
 
 /** Every row number of the columns, in order. */
 export const allRows = (cols: ReadColumns): Int32Array => Int32Array.from({ length: cols.n }, (_, i) => i);
+
+/**
+ * The ids (reader or case codes) of `rows` renumbered in order of first appearance there:
+ * number[k] is row k's, count how many distinct. Example: codes 7, 3, 7 → numbers 0, 1, 0.
+ */
+export const firstAppearance = (code: Int32Array, rows: Int32Array, codes: number): { number: Int32Array; first: Int32Array; count: number } => {
+  const renumber = new Int32Array(codes).fill(-1);
+  const number = new Int32Array(rows.length);
+  const first: number[] = [];
+  for (let k = 0; k < rows.length; k++) {
+    const c = code[rows[k] as number] as number;
+    let i = renumber[c] as number;
+    if (i === -1) {
+      i = first.length;
+      renumber[c] = i;
+      first.push(c);
+    }
+    number[k] = i;
+  }
+  return { number, first: Int32Array.from(first), count: first.length };
+};
