@@ -24,7 +24,7 @@ export type SubgroupEntry = Sections & {
  */
 export const subgroups = (reads: readonly ReadRow[], attributes: readonly string[]): SubgroupEntry[] => {
   const cols = readColumns(reads);
-  return subgroupsOf(cols, sectionReads(cols, allRows(cols)), attributeCodes(reads, attributes));
+  return subgroupsOf(cols, sectionReads(cols, allRows(cols)), attributeCodes(cols, attributes));
 };
 
 /** subgroups of reads held as columns, split by each attribute's codes (no regrouping, no sorting; same numbers). */

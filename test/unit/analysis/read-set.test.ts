@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { attributeCodes } from '../../../src/analysis/attribute-codes';
-import { allRows, readColumns } from '../../../src/analysis/read-columns';
+import { attributeCodes, attributeNames } from '../../../src/analysis/attribute-codes';
+import { allRows, checkScores, logColumns, readColumns } from '../../../src/analysis/read-columns';
 import { partition, partitionReads, sectionReads } from '../../../src/analysis/read-set';
 import { aided, makeRead } from './make-read';
 
@@ -37,8 +37,29 @@ describe('sectionReads and partitionReads', () => {
   });
 
   it('attribute values are coded in sorted order, an absent value as the empty one', () => {
-    const [scanner] = attributeCodes(rows, ['scanner']);
+    const [scanner] = attributeCodes(cols, ['scanner']);
     expect(scanner?.values).toEqual(['', 'A', 'B']);
     expect([...(scanner?.code ?? [])]).toEqual([0, 2, 1, 2]);
+  });
+});
+
+describe('log columns', () => {
+  it('a left-out read with an unusable score is no error; an analysed one is, with finalScore\'s message', () => {
+    const bad = makeRead({ case_id: 'C9', final_confidence: 150, practice: 1 });
+    const cols = logColumns([makeRead(), bad]);
+    expect(() => checkScores(cols, Int32Array.of(0))).not.toThrow();
+    expect(() => checkScores(cols, Int32Array.of(0, 1))).toThrow(RangeError);
+    expect(() => readColumns([makeRead(), bad])).toThrow(RangeError);
+  });
+
+  it('attribute names come in order of first appearance among the given reads only', () => {
+    const rows = [
+      makeRead({ case_attributes: { site: 'X' } }),
+      makeRead({ case_id: 'C2', case_attributes: { scanner: 'A', site: 'Y' } }),
+      makeRead({ case_id: 'C3', case_attributes: { zone: 'Z' } }),
+    ];
+    const cols = logColumns(rows);
+    expect(attributeNames(cols, Int32Array.of(0, 1))).toEqual(['site', 'scanner']);
+    expect(attributeNames(cols, Int32Array.of(2, 1))).toEqual(['zone', 'scanner', 'site']);
   });
 });
