@@ -56,18 +56,14 @@ export const crossoverPairsOf = (cols: ReadColumns, rows: Int32Array): PairRows 
 // One reader's pairs: per case, in order of first appearance, its first unaided read and the
 // first aided read in another period.
 const pairsOfOneReader = (cols: ReadColumns, rows: Int32Array, outU: number[], outA: number[]): void => {
-  const firstU = new Int32Array(cols.caseCount).fill(-1);
-  const firstA = new Int32Array(cols.caseCount).fill(-1);
-  const seen = new Uint8Array(cols.caseCount);
+  // per case its first unaided and first aided read, in the columns' scratch (left all −1 again)
+  const [firstU, firstA] = cols.caseScratch;
   const order: number[] = [];
   let moreAided: Map<number, number[]> | null = null;
   for (let k = 0; k < rows.length; k++) {
     const r = rows[k] as number;
     const c = cols.case[r] as number;
-    if (seen[c] === 0) {
-      seen[c] = 1;
-      order.push(c);
-    }
+    if (firstU[c] === -1 && firstA[c] === -1) order.push(c);
     if (cols.aided[r] === 0) {
       if (firstU[c] === -1) firstU[c] = r;
     } else if (firstA[c] === -1) firstA[c] = r;
@@ -81,6 +77,8 @@ const pairsOfOneReader = (cols: ReadColumns, rows: Int32Array, outU: number[], o
   for (const c of order) {
     const u = firstU[c] as number;
     const a = firstA[c] as number;
+    firstU[c] = -1;
+    firstA[c] = -1;
     if (u === -1 || a === -1) continue;
     const period = cols.period[u] as number;
     const other = cols.period[a] !== period ? a : moreAided?.get(c)?.find((x) => cols.period[x] !== period);

@@ -53,6 +53,8 @@ export type ReadColumns = {
   scoreErrors: Map<number, RangeError>;
   /** working space of one number per read (aucOfSet, the bootstrap's levels), so no set allocates its own */
   runScratch: Int32Array;
+  /** working space of one number per case, all −1 between uses (crossover pairs, suggestion accuracy) */
+  caseScratch: [Int32Array, Int32Array];
 };
 
 /**
@@ -170,6 +172,7 @@ export const columnsBuilder = (capacity: number): { push: (r: ReadRow) => void; 
       attributes: new Map([...attrs].map(([name, a]) => [name, { code: cut(a.code), values: [...a.ids.keys()] }])),
       scoreErrors,
       runScratch: new Int32Array(n),
+      caseScratch: [new Int32Array(caseIdx.size).fill(-1), new Int32Array(caseIdx.size).fill(-1)],
     };
   };
   return { push, done };

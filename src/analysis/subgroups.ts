@@ -55,17 +55,19 @@ export const suggestionAccuracy = (reads: readonly ReadRow[]): Proportion => {
 };
 
 const suggestionAccuracyOf = (cols: ReadColumns, rows: Int32Array): Proportion => {
-  const seen = new Uint8Array(cols.caseCount);
-  let cases = 0;
+  // the cases counted, marked in the columns' scratch and unmarked after
+  const seen = cols.caseScratch[0];
+  const counted: number[] = [];
   let k = 0;
   for (let i = 0; i < rows.length; i++) {
     const r = rows[i] as number;
     const a = cols.aiCall[r] as number;
     const c = cols.case[r] as number;
-    if (a === -1 || seen[c] === 1) continue;
+    if (a === -1 || seen[c] !== -1) continue;
     seen[c] = 1;
-    cases++;
+    counted.push(c);
     if (a === cols.truth[r]) k++;
   }
-  return wilson(k, cases);
+  for (const c of counted) seen[c] = -1;
+  return wilson(k, counted.length);
 };
