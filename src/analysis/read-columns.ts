@@ -135,15 +135,24 @@ export const columnsBuilder = (capacity: number): { push: (r: ReadRow) => void; 
       scoreErrors.set(i, error);
     }
     c.shape[i] = shapeOf(r.case_attributes);
-    for (const [name, value] of Object.entries(r.case_attributes)) {
+    for (const { code, value } of valuesOf(r.case_attributes)) code[i] = value;
+    i++;
+  };
+  // each attribute's column and the value's number, once per shared case_attributes object
+  const valuesOfObject = new Map<Readonly<Record<string, string>>, { code: Int32Array; value: number }[]>();
+  const valuesOf = (attributes: Readonly<Record<string, string>>): { code: Int32Array; value: number }[] => {
+    const known = valuesOfObject.get(attributes);
+    if (known !== undefined) return known;
+    const out = Object.entries(attributes).map(([name, value]) => {
       let a = attrs.get(name);
       if (a === undefined) {
         a = { code: new Int32Array(cap).fill(-1), ids: new Map() };
         attrs.set(name, a);
       }
-      a.code[i] = intern(a.ids, value);
-    }
-    i++;
+      return { code: a.code, value: intern(a.ids, value) };
+    });
+    if (valuesOfObject.size < 4096) valuesOfObject.set(attributes, out);
+    return out;
   };
   // a parsed log shares one case_attributes object between reads of equal values, so most reads
   // are looked up by object; rows each with their own object (from the store) by their names

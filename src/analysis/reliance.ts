@@ -1,6 +1,6 @@
 import type { ReadRow } from '../core/read-log';
 import { cohenKappaTable, type Kappa } from './cohen-kappa';
-import { allRows, readColumns, type ReadColumns } from './read-columns';
+import type { ReadColumns } from './read-columns';
 import { wilson, type Proportion } from './wilson';
 
 export type Reliance = {
@@ -38,12 +38,24 @@ export type Reliance = {
  * Example: reliance(aidedReads).overreliance.estimate → share of wrong suggestions followed.
  */
 export const reliance = (reads: readonly ReadRow[]): Reliance => {
-  const cols = readColumns(reads);
-  return relianceOf(cols, allRows(cols));
+  // only the four columns it reads: the planner calls this per reader of every simulated study
+  const n = reads.length;
+  const cols: RelianceColumns = { aiCall: new Int8Array(n), finalCall: new Uint8Array(n), truth: new Uint8Array(n), caution: new Uint8Array(n) };
+  for (let i = 0; i < n; i++) {
+    const r = reads[i] as ReadRow;
+    cols.aiCall[i] = r.ai_call ?? -1;
+    cols.finalCall[i] = r.final_call;
+    cols.truth[i] = r.truth;
+    cols.caution[i] = r.caution_shown;
+  }
+  return relianceOf(cols, Int32Array.from({ length: n }, (_, i) => i));
 };
 
+/** The columns reliance reads. */
+export type RelianceColumns = Pick<ReadColumns, 'aiCall' | 'finalCall' | 'truth' | 'caution'>;
+
 /** reliance over reads given as row numbers into columns (the engine's path; same numbers). */
-export const relianceOf = (cols: ReadColumns, rows: Int32Array): Reliance => {
+export const relianceOf = (cols: RelianceColumns, rows: Int32Array): Reliance => {
   let n = 0;
   let agree = 0;
   let wrong = 0;
