@@ -167,7 +167,8 @@ export const columnsBuilder = (capacity: number): { push: (r: ReadRow) => void; 
   };
   const done = (): ReadColumns => {
     const n = i;
-    const cut = <T extends Int32Array | Uint8Array | Int8Array | Float64Array>(a: T): T => (n === cap ? a : (a.slice(0, n) as T));
+    // a view of the first n (the parse sizes the columns by its line count, a few more than its reads)
+    const cut = <T extends Int32Array | Uint8Array | Int8Array | Float64Array>(a: T): T => (n === cap ? a : (a.subarray(0, n) as T));
     return {
       n,
       readerIds: [...readerIdx.keys()], caseIds: [...caseIdx.keys()], caseCount: caseIdx.size,
