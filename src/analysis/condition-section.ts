@@ -1,12 +1,13 @@
 import type { ReadRow } from '../core/read-log';
 import { brier } from './brier';
 import { calibration, type Calibration } from './calibration';
-import { classification } from './classification';
-import { aucSummary, type AucSummary } from './delong';
-import { finalLikelihood, finalScore } from './read-scores';
-import { readingTime, type TimeSummary } from './reading-time';
-import { reliance, type Reliance } from './reliance';
-import type { Proportion } from './wilson';
+import { aucOfSet } from './auc-of-set';
+import type { AucSummary } from './delong';
+import { allRows, readColumns, type ReadColumns } from './read-columns';
+import { sortedSet, type ReadSet } from './read-set';
+import { timeOfSorted, type TimeSummary } from './reading-time';
+import { relianceOf, type Reliance } from './reliance';
+import { wilson, type Proportion } from './wilson';
 
 export type ConditionSection = {
   n: number;
@@ -34,41 +35,43 @@ export type AidedSection = ConditionSection & Reliance;
  * Example: conditionSection(unaidedReads)?.auc.estimate.
  */
 export const conditionSection = (reads: readonly ReadRow[]): ConditionSection | null => {
-  const n = reads.length;
+  const cols = readColumns(reads);
+  return conditionSectionOf(cols, sortedSet(cols, allRows(cols)));
+};
+
+/** conditionSection of a set of reads held as columns (the engine's path; same numbers). */
+export const conditionSectionOf = (cols: ReadColumns, set: ReadSet): ConditionSection | null => {
+  const { rows } = set;
+  const n = rows.length;
   if (n === 0) return null;
-  const calls = new Uint8Array(n);
   const truth = new Uint8Array(n);
   const scores = new Float64Array(n);
-  const times = new Float64Array(n);
   const forecast = new Float64Array(n);
-  let positives = 0;
-  for (const r of reads) positives += r.truth;
-  const pos = new Float64Array(positives);
-  const neg = new Float64Array(n - positives);
-  let ip = 0;
-  let ineg = 0;
   let probabilities = true;
-  for (let i = 0; i < n; i++) {
-    const r = reads[i] as ReadRow;
-    calls[i] = r.final_call;
-    truth[i] = r.truth;
-    const s = finalScore(r);
-    scores[i] = s;
-    const likelihood = finalLikelihood(r);
-    if (likelihood === null) probabilities = false;
-    else forecast[i] = likelihood / 100;
-    times[i] = r.total_ms;
-    if (r.truth === 1) pos[ip++] = s;
-    else neg[ineg++] = s;
+  let tp = 0;
+  let tn = 0;
+  let positives = 0;
+  for (let k = 0; k < n; k++) {
+    const r = rows[k] as number;
+    const y = cols.truth[r] as number;
+    const d = cols.finalCall[r] as number;
+    truth[k] = y;
+    if (y === 1) {
+      positives++;
+      if (d === 1) tp++;
+    } else if (d === 0) tn++;
+    scores[k] = cols.score[r] as number;
+    const likelihood = cols.likelihood[r] as number;
+    if (Number.isNaN(likelihood)) probabilities = false;
+    else forecast[k] = likelihood / 100;
   }
-  const c = classification(calls, truth);
-  const time = readingTime(times);
+  const time = timeOfSorted(cols, set.byTime);
   return {
     n,
-    accuracy: c.accuracy,
-    sensitivity: c.sensitivity,
-    specificity: c.specificity,
-    auc: aucSummary(pos, neg),
+    accuracy: wilson(tp + tn, n),
+    sensitivity: wilson(tp, positives),
+    specificity: wilson(tn, n - positives),
+    auc: aucOfSet(cols, set),
     brier: probabilities ? brier(scores, truth) : null,
     median_ms: time.median_ms,
     time,
@@ -78,6 +81,12 @@ export const conditionSection = (reads: readonly ReadRow[]): ConditionSection | 
 
 /** conditionSection plus the reliance metrics (agreement, over/under-reliance, kappa, caution split). */
 export const aidedSection = (reads: readonly ReadRow[]): AidedSection | null => {
-  const base = conditionSection(reads);
-  return base === null ? null : { ...base, ...reliance(reads) };
+  const cols = readColumns(reads);
+  return aidedSectionOf(cols, sortedSet(cols, allRows(cols)));
+};
+
+/** aidedSection of a set of reads held as columns. */
+export const aidedSectionOf = (cols: ReadColumns, set: ReadSet): AidedSection | null => {
+  const base = conditionSectionOf(cols, set);
+  return base === null ? null : { ...base, ...relianceOf(cols, set.rows) };
 };

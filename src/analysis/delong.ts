@@ -19,7 +19,7 @@ export const placements = (positives: ArrayLike<number>, negatives: ArrayLike<nu
   if (m === 0 || n === 0) throw new RangeError(`AUC needs both classes: ${m} positives, ${n} negatives`);
   const x = toFloat64(positives, 'AUC positives');
   const y = toFloat64(negatives, 'AUC negatives');
-  if (m + n < RADIX_FROM) return placementsByCounts(x, y);
+  if (m + n < MIDRANKS_FROM) return placementsByCounts(x, y);
   const pooled = new Float64Array(m + n);
   pooled.set(x);
   pooled.set(y, m);
@@ -76,7 +76,8 @@ const placementsByCounts = (x: Float64Array, y: Float64Array): Placements => {
   return { v10, v01, auc: sum / m };
 };
 
-const RADIX_FROM = 8192;
+/** From this many scores placements come from midranks (radix sorts), below it from counts; the two round differently. */
+export const MIDRANKS_FROM = 8192;
 
 /** Sample covariance (denominator k − 1) of two equal-length arrays; null when k < 2. */
 export const sampleCovariance = (a: ArrayLike<number>, b: ArrayLike<number>): number | null => {
@@ -128,6 +129,11 @@ export type AucSummary = { estimate: number | null; se: number | null; lower: nu
 export const aucSummary = (positives: ArrayLike<number>, negatives: ArrayLike<number>, z: number = Z95): AucSummary => {
   if (positives.length === 0 || negatives.length === 0) return { estimate: null, se: null, lower: null, upper: null };
   const { auc, se } = delongAuc(positives, negatives);
+  return summarizeAuc(auc, se, z);
+};
+
+/** An AUC and its DeLong SE as reported: the interval estimate ± z·se clipped to [0,1], nulls without an SE. */
+export const summarizeAuc = (auc: number, se: number | null, z: number = Z95): AucSummary => {
   if (se === null) return { estimate: auc, se: null, lower: null, upper: null };
   return { estimate: auc, se, lower: Math.max(0, auc - z * se), upper: Math.min(1, auc + z * se) };
 };

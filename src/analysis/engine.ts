@@ -1,12 +1,14 @@
 import type { ReadRow } from '../core/read-log';
-import { readersAgreement } from './fleiss-readers';
-import { mrmc } from './mrmc-adapter';
+import { readersAgreementOf } from './fleiss-readers';
+import { mrmcOf } from './mrmc-adapter';
 import { COVARIANCE_METHODS, type CovarianceMethod } from './or-covariances';
-import { isAided } from './read-scores';
-import { readerAveraged } from './reader-bootstrap';
+import { readerAveragedOf } from './reader-bootstrap';
 import type { AnalysisReport, GroupFinding, ReaderEntry } from './report-types';
-import { sections } from './sections';
-import { subgroups } from './subgroups';
+import { attributeCodes, attributeNames } from './attribute-codes';
+import { checkScores, firstAppearance, logColumns, type ReadColumns } from './read-columns';
+import { partition, partitionReads, sectionReads, type SectionReads } from './read-set';
+import { sectionsOf } from './sections';
+import { subgroupsOf } from './subgroups';
 
 export type { AnalysisReport } from './report-types';
 
@@ -45,61 +47,68 @@ const byReaderId = (a: string, b: string) => a.localeCompare(b, 'en', { numeric:
  * Example: analyzeReads(parseReadLog(csv), { seed: 7, boot: 500 }).readers[0].aided.overreliance.
  */
 export const analyzeReads = (rows: readonly ReadRow[], options: AnalyzeOptions = {}): AnalysisReport => {
+  checkOptions(options);
+  return analyzeColumns(logColumns(rows), options);
+};
+
+/**
+ * analyzeReads of a log held as columns (the CLI parses straight into them: parseReadLogColumns),
+ * with the same report to the last bit. Throws as analyzeReads.
+ */
+export const analyzeColumns = (cols: ReadColumns, options: AnalyzeOptions = {}): AnalysisReport => {
+  checkOptions(options);
   const seed = options.seed ?? DEFAULT_SEED;
   const boot = options.boot ?? DEFAULT_BOOT;
-  if (!Number.isInteger(seed)) throw new RangeError(`seed must be a whole number, got ${seed}`);
-  if (!Number.isInteger(boot) || boot < 0) throw new RangeError(`boot must be a whole number >= 0, got ${boot}`);
   const covariance = options.covariance ?? DEFAULT_COVARIANCE;
-  if (!COVARIANCE_METHODS.includes(covariance)) throw new RangeError(`covariance must be jackknife or delong, got ${JSON.stringify(covariance)}`);
   const includeWithdrawn = options.includeWithdrawn ?? false;
   const excluded = { practice: 0, training: 0, withdrawn: 0 };
-  const reads: ReadRow[] = [];
-  for (const r of rows) {
-    if (r.practice === 1) excluded.practice++;
-    else if (r.training === 1) excluded.training++;
-    else if (r.withdrawn === 1 && !includeWithdrawn) excluded.withdrawn++;
-    else reads.push(r);
+  const kept: number[] = [];
+  for (let i = 0; i < cols.n; i++) {
+    if (cols.practice[i] === 1) excluded.practice++;
+    else if (cols.training[i] === 1) excluded.training++;
+    else if (cols.withdrawn[i] === 1 && !includeWithdrawn) excluded.withdrawn++;
+    else kept.push(i);
   }
-  const attributes: string[] = [];
-  // a parsed log shares one case_attributes object between reads of equal values: each object's
-  // names are looked at once (in order of first appearance, so the attribute order is unchanged);
-  // rows each with their own object (from the store) only fill the set up to a bound
-  const attributeSets = new Set<Readonly<Record<string, string>>>();
-  const byFinding = new Map<string, Map<string, ReadRow[]>>();
-  for (const r of reads) {
-    if (!attributeSets.has(r.case_attributes)) {
-      if (attributeSets.size < 4096) attributeSets.add(r.case_attributes);
-      for (const a of Object.keys(r.case_attributes)) if (!attributes.includes(a)) attributes.push(a);
-    }
-    let f = byFinding.get(r.finding);
-    if (f === undefined) {
-      f = new Map();
-      byFinding.set(r.finding, f);
-    }
-    const list = f.get(r.reader_id);
-    if (list === undefined) f.set(r.reader_id, [r]);
-    else list.push(r);
-  }
+  const reads = Int32Array.from(kept);
+  checkScores(cols, reads);
+  const attributes = attributeNames(cols, reads);
+  const findingsSeen = firstAppearance(cols.finding, reads, cols.findingIds.length);
+  const byFinding = partition(reads, cols.finding, cols.findingIds.length);
+  // one index for the whole analysis: the reads as columns, each attribute's values as codes;
+  // per finding the reads are split and sorted once, and every reader and subgroup takes its share
+  const codes = attributeCodes(cols, attributes);
   const readers: ReaderEntry[] = [];
   const findings: GroupFinding[] = [];
-  for (const [finding, perReader] of byFinding) {
-    const ids = [...perReader.keys()].sort(byReaderId);
-    const all: ReadRow[] = [];
-    for (const id of ids) {
-      const rs = perReader.get(id) ?? [];
-      for (const r of rs) all.push(r);
-      readers.push({ reader_id: id, reader_role: rs[0]?.reader_role ?? '', finding, ...sections(rs), subgroups: subgroups(rs, attributes) });
+  for (const f of findingsSeen.first) {
+    const finding = cols.findingIds[f] as string;
+    const rowsOfFinding = byFinding[f] as Int32Array;
+    const perReader = partition(rowsOfFinding, cols.reader, cols.readerIds.length);
+    const order = [...perReader.keys()].filter((k) => (perReader[k] as Int32Array).length > 0);
+    order.sort((a, b) => byReaderId(cols.readerIds[a] as string, cols.readerIds[b] as string));
+    const all = new Int32Array(rowsOfFinding.length);
+    let at = 0;
+    for (const k of order) {
+      all.set(perReader[k] as Int32Array, at);
+      at += (perReader[k] as Int32Array).length;
+    }
+    const pooled = sectionReads(cols, all);
+    const readerReads = partitionReads(pooled, cols.reader, cols.readerIds.length);
+    for (const k of order) {
+      const rs = readerReads[k] as SectionReads;
+      const id = cols.readerIds[k] as string;
+      const role = cols.roleIds[cols.role[rs.all[0] as number] as number] ?? '';
+      readers.push({ reader_id: id, reader_role: role, finding, ...sectionsOf(cols, rs), subgroups: subgroupsOf(cols, rs, codes) });
     }
     if (options.readersOnly === true) continue;
-    const m = mrmc(all, covariance);
+    const m = mrmcOf(cols, all, covariance);
     findings.push({
       finding,
-      readers: ids.length,
-      cases: new Set(all.map((r) => r.case_id)).size,
-      pooled: sections(all),
-      reader_averaged: readerAveraged(all, { seed, boot }),
-      fleiss_kappa: { unaided: readersAgreement(all.filter((r) => !isAided(r))), aided: readersAgreement(all.filter(isAided)) },
-      subgroups: subgroups(all, attributes),
+      readers: order.length,
+      cases: distinctCount(cols.case, all, cols.caseCount),
+      pooled: sectionsOf(cols, pooled),
+      reader_averaged: readerAveragedOf(cols, all, order.map((k) => readerReads[k] as SectionReads), { seed, boot }),
+      fleiss_kappa: { unaided: readersAgreementOf(cols, pooled.unaided.rows), aided: readersAgreementOf(cols, pooled.aided.rows) },
+      subgroups: subgroupsOf(cols, pooled, codes),
       mrmc: m.result,
       mrmc_note: m.note,
     });
@@ -113,16 +122,38 @@ export const analyzeReads = (rows: readonly ReadRow[], options: AnalyzeOptions =
       training_excluded: excluded.training,
       withdrawn_excluded: excluded.withdrawn,
       include_withdrawn: includeWithdrawn,
-      note: logNote(reads),
+      note: logNote(cols, reads),
       seed, boot, covariance, attributes, findings,
     },
   };
 };
 
 // What the reader of the output must know about the log as a whole, or null.
-const logNote = (reads: readonly ReadRow[]): string | null => {
+const logNote = (cols: ReadColumns, reads: Int32Array): string | null => {
   if (reads.length === 0) return null;
-  if (reads.some(isAided)) return null;
-  const rated = reads.some((r) => r.final_rating !== null);
+  if (reads.some((r) => cols.aided[r] === 1)) return null;
+  const rated = reads.some((r) => cols.rated[r] === 1);
   return `No suggestion was shown in this log${rated ? ' (an external rating log)' : ''}: only the performance sections (accuracy, sensitivity, specificity, AUC${rated ? ' of the ratings' : ''}) are computed; the reliance sections are null.`;
+};
+
+const checkOptions = (options: AnalyzeOptions): void => {
+  const seed = options.seed ?? DEFAULT_SEED;
+  const boot = options.boot ?? DEFAULT_BOOT;
+  if (!Number.isInteger(seed)) throw new RangeError(`seed must be a whole number, got ${seed}`);
+  if (!Number.isInteger(boot) || boot < 0) throw new RangeError(`boot must be a whole number >= 0, got ${boot}`);
+  const covariance = options.covariance ?? DEFAULT_COVARIANCE;
+  if (!COVARIANCE_METHODS.includes(covariance)) throw new RangeError(`covariance must be jackknife or delong, got ${JSON.stringify(covariance)}`);
+};
+
+const distinctCount = (key: Int32Array, rows: Int32Array, keys: number): number => {
+  const seen = new Uint8Array(keys);
+  let n = 0;
+  for (let k = 0; k < rows.length; k++) {
+    const c = key[rows[k] as number] as number;
+    if (seen[c] === 0) {
+      seen[c] = 1;
+      n++;
+    }
+  }
+  return n;
 };

@@ -1,5 +1,6 @@
 import type { ReadRow } from '../core/read-log';
 import { fleissKappa } from './fleiss-kappa';
+import { allRows, firstAppearance, readColumns, type ReadColumns } from './read-columns';
 
 export type ReadersAgreement = { kappa: number | null; readers: number; cases: number };
 
@@ -11,37 +12,26 @@ export type ReadersAgreement = { kappa: number | null; readers: number; cases: n
  * Example: readersAgreement(unaidedReads).kappa.
  */
 export const readersAgreement = (reads: readonly ReadRow[]): ReadersAgreement => {
+  const cols = readColumns(reads);
+  return readersAgreementOf(cols, allRows(cols));
+};
+
+/** readersAgreement of reads given as row numbers into columns (the engine's path; same numbers). */
+export const readersAgreementOf = (cols: ReadColumns, rows: Int32Array): ReadersAgreement => {
   // readers and cases numbered in order of first appearance, then one flat table of who read what
-  const readerIdx = new Map<string, number>();
-  const caseIdx = new Map<string, number>();
-  const n = reads.length;
-  const readerOf = new Int32Array(n);
-  const caseOf = new Int32Array(n);
-  for (let k = 0; k < n; k++) {
-    const r = reads[k] as ReadRow;
-    let i = readerIdx.get(r.reader_id);
-    if (i === undefined) {
-      i = readerIdx.size;
-      readerIdx.set(r.reader_id, i);
-    }
-    let c = caseIdx.get(r.case_id);
-    if (c === undefined) {
-      c = caseIdx.size;
-      caseIdx.set(r.case_id, c);
-    }
-    readerOf[k] = i;
-    caseOf[k] = c;
-  }
-  const R = readerIdx.size;
-  const C = caseIdx.size;
+  const n = rows.length;
+  const readerOf = firstAppearance(cols.reader, rows, cols.readerIds.length);
+  const caseOf = firstAppearance(cols.case, rows, cols.caseCount);
+  const R = readerOf.count;
+  const C = caseOf.count;
   // a flat table while it stays small; a sparse set for odd logs of very many readers and cases
   const flat = R * C <= 1 << 24 ? new Uint8Array(R * C) : null;
   const sparse = flat === null ? new Set<number>() : null;
   const raters = new Int32Array(C);
   const ones = new Int32Array(C);
   for (let k = 0; k < n; k++) {
-    const c = caseOf[k] as number;
-    const cell = c * R + (readerOf[k] as number);
+    const c = caseOf.number[k] as number;
+    const cell = c * R + (readerOf.number[k] as number);
     if (flat !== null) {
       if (flat[cell] === 1) continue;
       flat[cell] = 1;
@@ -50,7 +40,7 @@ export const readersAgreement = (reads: readonly ReadRow[]): ReadersAgreement =>
       sparse.add(cell);
     }
     raters[c] = (raters[c] as number) + 1;
-    ones[c] = (ones[c] as number) + (reads[k] as ReadRow).final_call;
+    ones[c] = (ones[c] as number) + (cols.finalCall[rows[k] as number] as number);
   }
   const counts: number[][] = [];
   for (let c = 0; c < C; c++) if (raters[c] === R) counts.push([R - (ones[c] as number), ones[c] as number]);

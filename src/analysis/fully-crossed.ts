@@ -1,5 +1,5 @@
 import type { Bit, ReadRow } from '../core/read-log';
-import { finalScore, isAided } from './read-scores';
+import { allRows, firstAppearance, readColumns, type ReadColumns } from './read-columns';
 
 export type CrossedInput = { scores: number[][][]; truth: Bit[]; readers: string[]; cases: string[] };
 
@@ -14,34 +14,43 @@ export type Crossing = { input: CrossedInput; reason: null } | { input: null; re
  * Example: fullyCrossed(reads).reason → 'reader R2 has no aided read of case C7'.
  */
 export const fullyCrossed = (reads: readonly ReadRow[]): Crossing => {
-  const readerIdx = new Map<string, number>();
-  const caseIdx = new Map<string, number>();
-  const truthOf = new Map<string, Bit>();
-  for (const r of reads) {
-    if (!readerIdx.has(r.reader_id)) readerIdx.set(r.reader_id, readerIdx.size);
-    if (!caseIdx.has(r.case_id)) caseIdx.set(r.case_id, caseIdx.size);
-    const t = truthOf.get(r.case_id);
-    if (t === undefined) truthOf.set(r.case_id, r.truth);
-    else if (t !== r.truth) return { input: null, reason: `case ${r.case_id} has different truth on different reads` };
+  const cols = readColumns(reads);
+  return fullyCrossedOf(cols, allRows(cols));
+};
+
+/** fullyCrossed of reads given as row numbers into columns (the engine's path; same result). */
+export const fullyCrossedOf = (cols: ReadColumns, rows: Int32Array): Crossing => {
+  const readerOf = firstAppearance(cols.reader, rows, cols.readerIds.length);
+  const caseOf = firstAppearance(cols.case, rows, cols.caseCount);
+  const R = readerOf.count;
+  const C = caseOf.count;
+  const truth = new Array<Bit>(C);
+  const truthSet = new Uint8Array(C);
+  for (let k = 0; k < rows.length; k++) {
+    const r = rows[k] as number;
+    const c = caseOf.number[k] as number;
+    const t = cols.truth[r] as Bit;
+    if (truthSet[c] === 0) {
+      truthSet[c] = 1;
+      truth[c] = t;
+    } else if (truth[c] !== t) return { input: null, reason: `case ${cols.caseIds[cols.case[r] as number]} has different truth on different reads` };
   }
-  const R = readerIdx.size;
-  const C = caseIdx.size;
   if (R < 2) return { input: null, reason: `needs at least 2 readers, has ${R}` };
-  const truth = [...truthOf.values()];
   const positives = truth.filter((t) => t === 1).length;
   if (positives < 2 || C - positives < 2) return { input: null, reason: `needs at least 2 cases of each truth, has ${positives} positive and ${C - positives} negative` };
   const scores = [0, 1].map(() => Array.from({ length: R }, () => new Array<number>(C).fill(Number.NaN)));
-  for (const r of reads) {
-    const m = isAided(r) ? 1 : 0;
-    const row = scores[m]?.[readerIdx.get(r.reader_id) ?? 0] as number[];
-    const c = caseIdx.get(r.case_id) ?? 0;
+  for (let k = 0; k < rows.length; k++) {
+    const r = rows[k] as number;
+    const m = cols.aided[r] as number;
+    const row = scores[m]?.[readerOf.number[k] as number] as number[];
+    const c = caseOf.number[k] as number;
     if (!Number.isNaN(row[c] as number)) {
-      return { input: null, reason: `reader ${r.reader_id} read case ${r.case_id} ${m === 1 ? 'aided' : 'unaided'} more than once` };
+      return { input: null, reason: `reader ${cols.readerIds[cols.reader[r] as number]} read case ${cols.caseIds[cols.case[r] as number]} ${m === 1 ? 'aided' : 'unaided'} more than once` };
     }
-    row[c] = finalScore(r);
+    row[c] = cols.score[r] as number;
   }
-  const readers = [...readerIdx.keys()];
-  const cases = [...caseIdx.keys()];
+  const readers = Array.from(readerOf.first, (i) => cols.readerIds[i] as string);
+  const cases = Array.from(caseOf.first, (i) => cols.caseIds[i] as string);
   for (let m = 0; m < 2; m++) {
     for (let i = 0; i < R; i++) {
       const c = scores[m]?.[i]?.findIndex((v) => Number.isNaN(v)) ?? -1;

@@ -1,6 +1,7 @@
 // The one place the engine meets the Obuchowski-Rockette analysis, so its shape stays in one file.
 import type { ReadRow } from '../core/read-log';
-import { fullyCrossed } from './fully-crossed';
+import { fullyCrossedOf } from './fully-crossed';
+import { allRows, readColumns, type ReadColumns } from './read-columns';
 import { obuchowskiRockette, type ORResult } from './obuchowski-rockette';
 import type { CovarianceMethod } from './or-covariances';
 
@@ -17,7 +18,13 @@ export type Mrmc = { result: MrmcResult | null; note: string | null };
  * Example: mrmc(reads, 'delong').result?.random.p.
  */
 export const mrmc = (reads: readonly ReadRow[], covariance: CovarianceMethod = 'jackknife'): Mrmc => {
-  const crossing = fullyCrossed(reads);
+  const cols = readColumns(reads);
+  return mrmcOf(cols, allRows(cols), covariance);
+};
+
+/** mrmc of reads given as row numbers into columns (the engine's path). */
+export const mrmcOf = (cols: ReadColumns, rows: Int32Array, covariance: CovarianceMethod): Mrmc => {
+  const crossing = fullyCrossedOf(cols, rows);
   if (crossing.input === null) return { result: null, note: `not fully crossed: ${crossing.reason}` };
   try {
     return { result: obuchowskiRockette({ scores: crossing.input.scores, truth: crossing.input.truth, covariance }), note: null };

@@ -1,8 +1,8 @@
 import type { ReadRow } from '../core/read-log';
-import { lowerBound } from './midrank';
 import { seededInts } from './prng';
 import { quantileSorted } from './quantile';
-import { finalScore, isAided } from './read-scores';
+import { allRows, firstAppearance, readColumns, type ReadColumns } from './read-columns';
+import { partitionReads, sectionReads, type ReadSet, type SectionReads } from './read-set';
 
 export const AVERAGED_FIGURES = [
   'unaided_accuracy', 'aided_accuracy', 'accuracy_difference',
@@ -31,31 +31,37 @@ const IDX = Object.fromEntries(AVERAGED_FIGURES.map((f, i) => [f, i])) as Record
 // One reader's reads of one condition in flat typed arrays, so a resample only reweights them.
 type Cond = { n: number; caseIdx: Int32Array; truth: Uint8Array; correct: Uint8Array; level: Int32Array; levels: number; follow: Uint8Array; aiWrong: Uint8Array; hasAi: Uint8Array };
 
-const toCond = (reads: ReadRow[], caseIndex: Map<string, number>): Cond | null => {
-  const n = reads.length;
+// One reader's reads of one condition, given by row numbers in read order and by score.
+const toCond = (cols: ReadColumns, set: ReadSet, caseIndex: Int32Array): Cond | null => {
+  const n = set.rows.length;
   if (n === 0) return null;
-  const scores = new Float64Array(n);
-  for (let i = 0; i < n; i++) scores[i] = finalScore(reads[i] as ReadRow);
   // score levels: the distinct scores ascending; a read's level is its score's place among them
-  const sorted = scores.slice().sort();
+  const levelOf = cols.runScratch;
   let levels = 0;
-  for (let i = 0; i < n; i++) if (i === 0 || sorted[i] !== sorted[i - 1]) sorted[levels++] = sorted[i] as number;
-  const distinct = sorted.subarray(0, levels);
+  for (let k = 0; k < n; k++) {
+    const r = set.byScore[k] as number;
+    if (k > 0 && cols.score[r] !== cols.score[set.byScore[k - 1] as number]) levels++;
+    levelOf[r] = levels;
+  }
+  levels++;
   const c: Cond = {
     n, levels,
     caseIdx: new Int32Array(n), truth: new Uint8Array(n), correct: new Uint8Array(n), level: new Int32Array(n),
     follow: new Uint8Array(n), aiWrong: new Uint8Array(n), hasAi: new Uint8Array(n),
   };
   for (let i = 0; i < n; i++) {
-    const r = reads[i] as ReadRow;
-    c.caseIdx[i] = caseIndex.get(r.case_id) ?? 0;
-    c.truth[i] = r.truth;
-    c.correct[i] = r.final_call === r.truth ? 1 : 0;
-    c.level[i] = lowerBound(distinct, scores[i] as number);
-    if (r.ai_call !== null) {
+    const r = set.rows[i] as number;
+    const y = cols.truth[r] as number;
+    const d = cols.finalCall[r] as number;
+    const a = cols.aiCall[r] as number;
+    c.caseIdx[i] = caseIndex[cols.case[r] as number] as number;
+    c.truth[i] = y;
+    c.correct[i] = d === y ? 1 : 0;
+    c.level[i] = levelOf[r] as number;
+    if (a !== -1) {
       c.hasAi[i] = 1;
-      c.follow[i] = r.final_call === r.ai_call ? 1 : 0;
-      c.aiWrong[i] = r.ai_call !== r.truth ? 1 : 0;
+      c.follow[i] = d === a ? 1 : 0;
+      c.aiWrong[i] = a !== y ? 1 : 0;
     }
   }
   return c;
@@ -133,23 +139,28 @@ const readerFigures = (r: ReaderConds, w: Int32Array, pos: Float64Array, neg: Fl
  * Example: readerAveraged(reads, { seed: 1, boot: 2000 }).auc_difference.lower.
  */
 export const readerAveraged = (reads: readonly ReadRow[], options: { seed: number; boot: number }): ReaderAveraged => {
+  const cols = readColumns(reads);
+  const all = allRows(cols);
+  const parts = partitionReads(sectionReads(cols, all), cols.reader, cols.readerIds.length).filter((p) => p !== null);
+  return readerAveragedOf(cols, all, parts, options);
+};
+
+/**
+ * readerAveraged of reads held as columns: `all` the finding's reads (cases are numbered in order
+ * of first appearance there), `perReader` each reader's share in order of first appearance.
+ */
+export const readerAveragedOf = (cols: ReadColumns, all: Int32Array, perReader: readonly SectionReads[], options: { seed: number; boot: number }): ReaderAveraged => {
   const { seed, boot } = options;
   if (!Number.isInteger(boot) || boot < 0) throw new RangeError(`boot must be a whole number >= 0, got ${boot}`);
   const rng = seededInts(seed);
-  const caseIndex = new Map<string, number>();
-  const grouped = new Map<string, { u: ReadRow[]; a: ReadRow[] }>();
-  for (const r of reads) {
-    if (!caseIndex.has(r.case_id)) caseIndex.set(r.case_id, caseIndex.size);
-    let g = grouped.get(r.reader_id);
-    if (g === undefined) {
-      g = { u: [], a: [] };
-      grouped.set(r.reader_id, g);
-    }
-    (isAided(r) ? g.a : g.u).push(r);
-  }
-  const readers: ReaderConds[] = [...grouped.values()].map((g) => ({ unaided: toCond(g.u, caseIndex), aided: toCond(g.a, caseIndex) }));
+  const cases = firstAppearance(cols.case, all, cols.caseCount);
+  const caseIndex = new Int32Array(cols.caseCount);
+  cases.first.forEach((c, i) => {
+    caseIndex[c] = i;
+  });
+  const readers: ReaderConds[] = perReader.map((g) => ({ unaided: toCond(cols, g.unaided, caseIndex), aided: toCond(cols, g.aided, caseIndex) }));
   const R = readers.length;
-  const C = caseIndex.size;
+  const C = cases.count;
   let maxLevels = 1;
   for (const r of readers) maxLevels = Math.max(maxLevels, r.unaided?.levels ?? 0, r.aided?.levels ?? 0);
   const pos = new Float64Array(maxLevels);

@@ -1,5 +1,6 @@
 import type { ReadRow } from '../core/read-log';
-import { cohenKappa, type Kappa } from './cohen-kappa';
+import { cohenKappaTable, type Kappa } from './cohen-kappa';
+import type { ReadColumns } from './read-columns';
 import { wilson, type Proportion } from './wilson';
 
 export type Reliance = {
@@ -37,6 +38,24 @@ export type Reliance = {
  * Example: reliance(aidedReads).overreliance.estimate → share of wrong suggestions followed.
  */
 export const reliance = (reads: readonly ReadRow[]): Reliance => {
+  // only the four columns it reads: the planner calls this per reader of every simulated study
+  const n = reads.length;
+  const cols: RelianceColumns = { aiCall: new Int8Array(n), finalCall: new Uint8Array(n), truth: new Uint8Array(n), caution: new Uint8Array(n) };
+  for (let i = 0; i < n; i++) {
+    const r = reads[i] as ReadRow;
+    cols.aiCall[i] = r.ai_call ?? -1;
+    cols.finalCall[i] = r.final_call;
+    cols.truth[i] = r.truth;
+    cols.caution[i] = r.caution_shown;
+  }
+  return relianceOf(cols, Int32Array.from({ length: n }, (_, i) => i));
+};
+
+/** The columns reliance reads. */
+export type RelianceColumns = Pick<ReadColumns, 'aiCall' | 'finalCall' | 'truth' | 'caution'>;
+
+/** reliance over reads given as row numbers into columns (the engine's path; same numbers). */
+export const relianceOf = (cols: RelianceColumns, rows: Int32Array): Reliance => {
   let n = 0;
   let agree = 0;
   let wrong = 0;
@@ -45,21 +64,24 @@ export const reliance = (reads: readonly ReadRow[]): Reliance => {
   let rightCorrect = 0;
   let wrongCorrect = 0;
   const caution = [[0, 0], [0, 0]] as [[number, number], [number, number]];
-  const d: number[] = [];
-  const a: number[] = [];
-  for (const r of reads) {
-    if (r.ai_call === null) continue;
+  // Cohen's kappa of d against a: its 2×2 table, counted here
+  const table = [[0, 0], [0, 0]] as [[number, number], [number, number]];
+  for (let k = 0; k < rows.length; k++) {
+    const r = rows[k] as number;
+    const a = cols.aiCall[r] as number;
+    if (a === -1) continue;
+    const d = cols.finalCall[r] as number;
+    const y = cols.truth[r] as number;
     n++;
-    d.push(r.final_call);
-    a.push(r.ai_call);
-    const follows = r.final_call === r.ai_call;
-    const correct = r.final_call === r.truth;
+    table[d as 0 | 1][a as 0 | 1]++;
+    const follows = d === a;
+    const correct = d === y;
     if (follows) agree++;
-    if (r.ai_call !== r.truth) {
+    if (a !== y) {
       wrong++;
       if (follows) followedWrong++;
       if (correct) wrongCorrect++;
-      const cs = caution[r.caution_shown];
+      const cs = caution[cols.caution[r] as 0 | 1];
       cs[1]++;
       if (follows) cs[0]++;
     } else {
@@ -67,7 +89,7 @@ export const reliance = (reads: readonly ReadRow[]): Reliance => {
       if (correct) rightCorrect++;
     }
   }
-  const kappa: Kappa = cohenKappa(d, a);
+  const kappa: Kappa = cohenKappaTable(table);
   return {
     agreement: wilson(agree, n),
     overreliance: wilson(followedWrong, wrong),

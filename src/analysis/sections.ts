@@ -1,9 +1,10 @@
 import type { ReadRow } from '../core/read-log';
-import { aidedSection, conditionSection, type AidedSection, type ConditionSection } from './condition-section';
-import { crossoverFromPairs, crossoverPairs, type CrossoverSection } from './crossover';
-import { isAided } from './read-scores';
+import { aidedSectionOf, conditionSectionOf, type AidedSection, type ConditionSection } from './condition-section';
+import { crossoverOf, crossoverPairsOf, type CrossoverSection } from './crossover';
+import { allRows, readColumns, type ReadColumns } from './read-columns';
+import { sectionReads, type SectionReads } from './read-set';
 import { timeRatio } from './reading-time';
-import { sequentialSection, type SequentialSection } from './sequential';
+import { sequentialOf, type SequentialSection } from './sequential';
 
 export type Sections = {
   unaided: ConditionSection | null;
@@ -23,32 +24,20 @@ export type Sections = {
  * Example: sections(readsOfR1Target).aided?.overreliance.
  */
 export const sections = (reads: readonly ReadRow[], options: { pairedAuc?: boolean } = {}): Sections => {
-  const unaidedReads: ReadRow[] = [];
-  const aidedReads: ReadRow[] = [];
-  for (const r of reads) (isAided(r) ? aidedReads : unaidedReads).push(r);
-  const perReader = byReader(reads);
-  const pairs = perReader.length === 1 ? crossoverPairs(perReader[0] as readonly ReadRow[]) : perReader.flatMap((rs) => crossoverPairs(rs));
-  const unaided = conditionSection(unaidedReads);
-  const aided = aidedSection(aidedReads);
+  const cols = readColumns(reads);
+  return sectionsOf(cols, sectionReads(cols, allRows(cols)), options);
+};
+
+/** sections of reads held as columns, split and sorted once by the caller (the engine's path; same numbers). */
+export const sectionsOf = (cols: ReadColumns, reads: SectionReads, options: { pairedAuc?: boolean } = {}): Sections => {
+  const pairs = crossoverPairsOf(cols, reads.all);
+  const unaided = conditionSectionOf(cols, reads.unaided);
+  const aided = aidedSectionOf(cols, reads.aided);
   return {
     unaided,
     aided,
-    sequential: sequentialSection(aidedReads),
-    crossover: crossoverFromPairs(pairs, perReader.length <= 1 && (options.pairedAuc ?? true)),
+    sequential: sequentialOf(cols, reads.aided.rows),
+    crossover: crossoverOf(cols, pairs, pairs.readers <= 1 && (options.pairedAuc ?? true)),
     time_ratio: timeRatio(aided?.median_ms ?? null, unaided?.median_ms ?? null),
   };
-};
-
-// Reads grouped by reader, readers in order of first appearance. Most calls get one reader's
-// reads (per reader, per subgroup), which need no grouping at all.
-const byReader = (reads: readonly ReadRow[]): (readonly ReadRow[])[] => {
-  const first = reads[0]?.reader_id;
-  if (reads.every((r) => r.reader_id === first)) return reads.length === 0 ? [] : [reads];
-  const groups = new Map<string, ReadRow[]>();
-  for (const r of reads) {
-    const list = groups.get(r.reader_id);
-    if (list === undefined) groups.set(r.reader_id, [r]);
-    else list.push(r);
-  }
-  return [...groups.values()];
 };

@@ -1,5 +1,5 @@
 import type { ReadRow } from '../core/read-log';
-import { finalLikelihood, initialLikelihood } from './read-scores';
+import { allRows, readColumns, type ReadColumns } from './read-columns';
 import { weightOfAdvice, weightOfAdviceAbsolute, type WeightOfAdvice } from './weight-of-advice';
 import { wilson, type Proportion } from './wilson';
 
@@ -47,8 +47,13 @@ export type SequentialSection = {
  * Example: sequentialSection(reads)?.changed.k → number of reads whose call changed.
  */
 export const sequentialSection = (reads: readonly ReadRow[]): SequentialSection | null => {
-  const seq = reads.filter((r) => r.assistance === 'sequential' && r.initial_call !== null && r.ai_call !== null);
-  if (seq.length === 0) return null;
+  const cols = readColumns(reads);
+  return sequentialOf(cols, allRows(cols));
+};
+
+/** sequentialSection over reads given as row numbers into columns (the engine's path; same numbers). */
+export const sequentialOf = (cols: ReadColumns, rows: Int32Array): SequentialSection | null => {
+  let n = 0;
   let changed = 0;
   let toward = 0;
   let beneficial = 0;
@@ -60,11 +65,14 @@ export const sequentialSection = (reads: readonly ReadRow[]): SequentialSection 
   const s: number[] = [];
   const s0: number[] = [];
   const p: number[] = [];
-  for (const r of seq) {
-    const d0 = r.initial_call;
-    const d = r.final_call;
-    const a = r.ai_call;
-    const y = r.truth;
+  for (let k = 0; k < rows.length; k++) {
+    const r = rows[k] as number;
+    if (cols.sequential[r] !== 1) continue;
+    n++;
+    const d0 = cols.initialCall[r] as number;
+    const d = cols.finalCall[r] as number;
+    const a = cols.aiCall[r] as number;
+    const y = cols.truth[r] as number;
     if (d0 !== d) changed++;
     if (d0 !== a && d === a) toward++;
     if (d0 !== y && d === y) beneficial++;
@@ -78,15 +86,16 @@ export const sequentialSection = (reads: readonly ReadRow[]): SequentialSection 
       if (d === y) rsrK++;
     }
     // weight of advice compares likelihoods with the suggestion's probability: not on five-point
-    const final = finalLikelihood(r);
-    const initial = initialLikelihood(r);
-    if (r.ai_score !== null && final !== null && initial !== null) {
+    const final = cols.likelihood[r] as number;
+    const initial = cols.initialLikelihood[r] as number;
+    const advice = cols.aiScore[r] as number;
+    if (!Number.isNaN(advice) && !Number.isNaN(final) && !Number.isNaN(initial)) {
       s.push(final);
       s0.push(initial);
-      p.push(r.ai_score);
+      p.push(advice);
     }
   }
-  const n = seq.length;
+  if (n === 0) return null;
   const signed = weightOfAdvice(s, s0, p);
   return {
     n,

@@ -1,5 +1,8 @@
 import type { ReadRow } from '../core/read-log';
-import { sections, type Sections } from './sections';
+import { attributeCodes, type AttributeCodes } from './attribute-codes';
+import { allRows, readColumns, type ReadColumns } from './read-columns';
+import { partitionReads, sectionReads, type SectionReads } from './read-set';
+import { sectionsOf, type Sections } from './sections';
 import { wilson, type Proportion } from './wilson';
 
 export type SubgroupEntry = Sections & {
@@ -20,39 +23,51 @@ export type SubgroupEntry = Sections & {
  * Example: subgroups(reads, ['scanner']).map((g) => [g.value, g.ai_accuracy.estimate, g.overreliance.estimate]).
  */
 export const subgroups = (reads: readonly ReadRow[], attributes: readonly string[]): SubgroupEntry[] => {
+  const cols = readColumns(reads);
+  return subgroupsOf(cols, sectionReads(cols, allRows(cols)), attributeCodes(cols, attributes));
+};
+
+/** subgroups of reads held as columns, split by each attribute's codes (no regrouping, no sorting; same numbers). */
+export const subgroupsOf = (cols: ReadColumns, reads: SectionReads, attributes: readonly AttributeCodes[]): SubgroupEntry[] => {
   const out: SubgroupEntry[] = [];
-  for (const attribute of attributes) {
-    const byValue = new Map<string, ReadRow[]>();
-    for (const r of reads) {
-      const v = r.case_attributes[attribute] ?? '';
-      const list = byValue.get(v);
-      if (list === undefined) byValue.set(v, [r]);
-      else list.push(r);
-    }
-    for (const value of [...byValue.keys()].sort()) {
-      const rs = byValue.get(value) ?? [];
-      const s = sections(rs, { pairedAuc: false });
+  for (const { attribute, values, code } of attributes) {
+    const parts = partitionReads(reads, code, values.length);
+    parts.forEach((part, v) => {
+      if (part === null) return;
+      const s = sectionsOf(cols, part, { pairedAuc: false });
       out.push({
         attribute,
-        value,
-        n: rs.length,
-        ai_accuracy: suggestionAccuracy(rs),
+        value: values[v] as string,
+        n: part.all.length,
+        ai_accuracy: suggestionAccuracyOf(cols, part.all),
         overreliance: s.aided?.overreliance ?? wilson(0, 0),
         ...s,
       });
-    }
+    });
   }
   return out;
 };
 
 /** Accuracy of the suggestion itself over distinct case-findings: the first suggestion shown per case counts. */
 export const suggestionAccuracy = (reads: readonly ReadRow[]): Proportion => {
-  const seen = new Set<string>();
+  const cols = readColumns(reads);
+  return suggestionAccuracyOf(cols, allRows(cols));
+};
+
+const suggestionAccuracyOf = (cols: ReadColumns, rows: Int32Array): Proportion => {
+  // the cases counted, marked in the columns' scratch and unmarked after
+  const seen = cols.caseScratch[0];
+  const counted: number[] = [];
   let k = 0;
-  for (const r of reads) {
-    if (r.ai_call === null || seen.has(r.case_id)) continue;
-    seen.add(r.case_id);
-    if (r.ai_call === r.truth) k++;
+  for (let i = 0; i < rows.length; i++) {
+    const r = rows[i] as number;
+    const a = cols.aiCall[r] as number;
+    const c = cols.case[r] as number;
+    if (a === -1 || seen[c] !== -1) continue;
+    seen[c] = 1;
+    counted.push(c);
+    if (a === cols.truth[r]) k++;
   }
-  return wilson(k, seen.size);
+  for (const c of counted) seen[c] = -1;
+  return wilson(k, counted.length);
 };

@@ -1,14 +1,15 @@
 // `heed analyze FILE [--json] [--seed N] [--boot N] [--covariance jackknife|delong]`: statistics of
 // a reads.csv (docs/formats.md),
 // as JSON or as a readable table per reader and finding, then the group.
-import { analyzeReads, DEFAULT_BOOT, DEFAULT_COVARIANCE, DEFAULT_SEED, type CovarianceMethod } from '../analysis/engine';
+import { analyzeColumns, DEFAULT_BOOT, DEFAULT_COVARIANCE, DEFAULT_SEED, type CovarianceMethod } from '../analysis/engine';
 import type { ORInterval } from '../analysis/or-single-treatment';
 import type { AveragedValue } from '../analysis/reader-bootstrap';
 import type { AnalysisReport, GroupFinding, ReaderEntry } from '../analysis/report-types';
 import type { Sections } from '../analysis/sections';
 import type { WeightOfAdvice } from '../analysis/weight-of-advice';
 import type { Proportion } from '../analysis/wilson';
-import { parseReadLogBytes, ReadLogError } from '../io/read-log-parse';
+import { lineCount, parseReadLogBytesInto, ReadLogError } from '../io/read-log-parse';
+import { columnsBuilder } from '../analysis/read-columns';
 import { CliError } from './cli-error';
 import { readAnalyzeInput } from './analyze-input';
 
@@ -57,10 +58,14 @@ export const parseAnalyzeArgs = (args: string[]): AnalyzeArgs => {
 
 export const runAnalyze = async (args: string[]): Promise<number> => {
   const { file, json, seed, boot, covariance, includeWithdrawn } = parseAnalyzeArgs(args);
-  let rows;
+  let cols;
   try {
-    // the bytes are not kept: only the parse holds them, and only until its last line
-    rows = parseReadLogBytes(await readAnalyzeInput(file));
+    // the bytes are not kept: only the parse holds them, and only until its last line; each read
+    // goes straight into typed columns, so no object per read outlives its line
+    const bytes = await readAnalyzeInput(file);
+    const columns = columnsBuilder(lineCount(bytes));
+    parseReadLogBytesInto(bytes, columns.push);
+    cols = columns.done();
   } catch (error) {
     if (error instanceof ReadLogError) {
       throw new CliError(`${file}:${error.line}: ${error.column === null ? '' : `column ${error.column}: `}${error.problem}`);
@@ -69,7 +74,7 @@ export const runAnalyze = async (args: string[]): Promise<number> => {
   }
   let report;
   try {
-    report = analyzeReads(rows, { seed, boot, covariance, includeWithdrawn });
+    report = analyzeColumns(cols, { seed, boot, covariance, includeWithdrawn });
   } catch (error) {
     if (error instanceof RangeError) throw new CliError(`${file}: ${error.message}`);
     throw error;

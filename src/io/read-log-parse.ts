@@ -16,9 +16,20 @@ export { ReadLogError } from './read-log/read-log-error';
  * Example: parseReadLog(text)[0].reader_id → 'R1'.
  */
 export const parseReadLog = (input: string): ReadRow[] => {
+  const rows: ReadRow[] = [];
+  parseReadLogInto(input, (r) => rows.push(r));
+  return rows;
+};
+
+/**
+ * parseReadLog handing each read to `keep` as soon as it is checked, instead of returning them
+ * all (so a caller that keeps reads as columns never holds one object per read). Throws as
+ * parseReadLog; reads already handed over before a problem are the caller's to drop.
+ */
+export const parseReadLogInto = (input: string, keep: (read: ReadRow) => void): void => {
   const textIn = input.charCodeAt(0) === 0xfeff ? input.slice(1) : input;
   if (textIn.trim() === '') throw new ReadLogError(1, null, 'the file is empty');
-  const rows = rowReader();
+  const rows = rowReader(keep);
   // Without a quote or a carriage return a record is exactly one line and a cell exactly the
   // text between commas (what papaparse itself does then), so the lines are split directly.
   if (textIn.indexOf('"') === -1 && textIn.indexOf('\r') === -1) {
@@ -28,7 +39,8 @@ export const parseReadLog = (input: string): ReadRow[] => {
       rows.take(textIn.slice(start, end).split(','), line);
       start = end + 1;
     }
-    return rows.done();
+    rows.done();
+    return;
   }
   // Rows are typed as the CSV parser hands them over, so their cells die young. A CSV-level
   // problem anywhere in the file still wins over a problem in a row, as when the whole file was
@@ -44,7 +56,7 @@ export const parseReadLog = (input: string): ReadRow[] => {
     }
   });
   if (rowProblem !== null) throw rowProblem;
-  return rows.done();
+  rows.done();
 };
 
 const lineEnd = (text: string, start: number): number => {
@@ -53,12 +65,11 @@ const lineEnd = (text: string, start: number): number => {
 };
 
 // Takes the records of a read log in order (the header first), checking and typing each row;
-// done() hands back the reads. Throws ReadLogError at the first problem.
-const rowReader = (): { take: (cells: string[], line: number) => void; shownAtColumn: () => number; done: () => ReadRow[] } => {
+// each read goes to `keep`; done() checks the file had a header. Throws ReadLogError at the first problem.
+const rowReader = (keep: (read: ReadRow) => void): { take: (cells: string[], line: number) => void; shownAtColumn: () => number; done: () => void } => {
   let header: string[] | null = null;
   let layout: RowLayout | null = null;
   const earlierRead = repeatedReads();
-  const rows: ReadRow[] = [];
   const take = (cells: string[], line: number): void => {
     if (header === null) {
       header = cells;
@@ -75,11 +86,10 @@ const rowReader = (): { take: (cells: string[], line: number) => void; shownAtCo
     const row = parseRow(cells, line, layout as RowLayout);
     const earlier = earlierRead(row, line);
     if (earlier !== undefined) throw new ReadLogError(line, 'case_id', `repeats the read of line ${earlier} (same reader, case, finding and period)`);
-    rows.push(row);
+    keep(row);
   };
-  const done = (): ReadRow[] => {
+  const done = (): void => {
     if (header === null) throw new ReadLogError(1, null, 'the file is empty');
-    return rows;
   };
   return { take, shownAtColumn: () => (layout === null ? -1 : layout.at.shown_at), done };
 };
@@ -129,18 +139,26 @@ const NOT_UTF8 = 'the file is not UTF-8 text (first bad byte on this line); save
  * many bytes of whole lines are decoded at a time.
  */
 export const parseReadLogBytes = (bytes: Uint8Array, options: { blockBytes?: number } = {}): ReadRow[] => {
+  const rows: ReadRow[] = [];
+  parseReadLogBytesInto(bytes, (r) => rows.push(r), options);
+  return rows;
+};
+
+/** parseReadLogBytes handing each read to `keep` (see parseReadLogInto). */
+export const parseReadLogBytesInto = (bytes: Uint8Array, keep: (read: ReadRow) => void, options: { blockBytes?: number } = {}): void => {
   const begin = plainLinesFrom(bytes);
   if (begin === -1) {
     const decoded = decodeUtf8(bytes);
     if (!decoded.ok) throw new ReadLogError(decoded.line, null, NOT_UTF8);
-    return parseReadLog(decoded.text);
+    parseReadLogInto(decoded.text, keep);
+    return;
   }
   // A block of whole lines at a time (about 64 kB), so the text of the whole file never exists
   // beside the reads (a million reads are 140 MB of text). A bad byte anywhere wins over a
   // problem in a row, as when the whole file was decoded first; a multi-byte character never
   // holds a newline byte, so a block boundary never splits one.
   const decoder = new TextDecoder('utf-8', { fatal: true, ignoreBOM: true });
-  const rows = rowReader();
+  const rows = rowReader(keep);
   let rowProblem: ReadLogError | null = null;
   let line = 1;
   for (let start = begin; start <= bytes.length; ) {
@@ -183,7 +201,14 @@ export const parseReadLogBytes = (bytes: Uint8Array, options: { blockBytes?: num
     start = end + 1;
   }
   if (rowProblem !== null) throw rowProblem;
-  return rows.done();
+  rows.done();
+};
+
+/** An upper bound of the reads in a log's bytes: its lines. */
+export const lineCount = (bytes: Uint8Array): number => {
+  let n = 1;
+  for (let i = bytes.indexOf(0x0a); i !== -1; i = bytes.indexOf(0x0a, i + 1)) n++;
+  return n;
 };
 
 const BLOCK_BYTES = 1 << 16;

@@ -6,9 +6,10 @@
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { analyzeReads } from '../../../../src/analysis/engine';
+import { analyzeColumns, analyzeReads } from '../../../../src/analysis/engine';
+import { columnsBuilder } from '../../../../src/analysis/read-columns';
 import { readLogCsv } from '../../../../src/io/read-log-export';
-import { parseReadLog } from '../../../../src/io/read-log-parse';
+import { lineCount, parseReadLog, parseReadLogBytesInto } from '../../../../src/io/read-log-parse';
 import { goldenLogs } from './golden-logs';
 
 const golden = (name: string): string => readFileSync(join(import.meta.dirname, `${name}.json`), 'utf8').trimEnd();
@@ -21,6 +22,12 @@ describe('analysis engine against its goldens', () => {
     it(`${log.name}: the CSV text, parsed and analysed, gives the golden report`, () => {
       const csv = readLogCsv(log.rows, log.attributes);
       expect(JSON.stringify(analyzeReads(parseReadLog(csv), log.options))).toBe(golden(log.name));
+    });
+    it(`${log.name}: the CLI's path, CSV bytes parsed straight into columns, gives the golden report`, () => {
+      const bytes = new TextEncoder().encode(readLogCsv(log.rows, log.attributes));
+      const columns = columnsBuilder(lineCount(bytes));
+      parseReadLogBytesInto(bytes, columns.push);
+      expect(JSON.stringify(analyzeColumns(columns.done(), log.options))).toBe(golden(log.name));
     });
   }
 });
