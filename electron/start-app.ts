@@ -35,7 +35,8 @@ export const startApp = ({ distRoot, preload }: AppPaths, env: Record<string, st
   // cannot be downloaded on these machines, and a Chromium without the feature ignores the switch.
   const userData = app.getPath('userData');
   mkdirSync(userData, { recursive: true });
-  if (settleStoreEngine(userData).engine === 'sqlite') app.commandLine.appendSwitch('enable-features', SQLITE_FEATURE);
+  const { engine } = settleStoreEngine(userData);
+  if (engine === 'sqlite') app.commandLine.appendSwitch('enable-features', SQLITE_FEATURE);
   app.on('web-contents-created', (_event, contents) => guardContents(contents));
   app.on('window-all-closed', () => app.quit());
 
@@ -43,7 +44,7 @@ export const startApp = ({ distRoot, preload }: AppPaths, env: Record<string, st
     applySessionPolicy(session.defaultSession);
     protocol.handle(APP_SCHEME, (request) => appResponse(distRoot, request.url));
     registerIpc(ipcMain);
-    const window = createMainWindow(preload, app.isPackaged);
+    const window = createMainWindow(preload, app.isPackaged, engine);
     app.on('second-instance', () => {
       if (window.isMinimized()) window.restore();
       window.focus();

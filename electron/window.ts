@@ -3,6 +3,7 @@
 import { BrowserWindow } from 'electron';
 import type { Session, WebContents } from 'electron';
 import { CONTENT_SECURITY_POLICY } from '../scripts/lib/web-policy.mjs';
+import type { StoreEngine } from '../scripts/lib/store-engine.mjs';
 import { APP_URL, isAppUrl } from './app-protocol';
 
 type NavigationEvent = { url: string; preventDefault(): void };
@@ -39,7 +40,7 @@ export const applySessionPolicy = (session: Session): void => {
  * sees them: sandboxed, isolated, no Node, web security on, our preload only. A packaged build
  * (`packaged`) has no DevTools and no menu (so no Reload or Toggle Developer Tools items either).
  */
-export const createMainWindow = (preload: string, packaged = false): BrowserWindow => {
+export const createMainWindow = (preload: string, packaged = false, engine: StoreEngine | null = null): BrowserWindow => {
   const window = new BrowserWindow({
     width: 1400,
     height: 900,
@@ -67,6 +68,7 @@ export const createMainWindow = (preload: string, packaged = false): BrowserWind
   });
   if (packaged) window.removeMenu();
   window.once('ready-to-show', () => window.show());
-  void window.loadURL(APP_URL);
+  // the start screen names the storage engine chosen for this profile (scripts/lib/store-engine.mjs)
+  void window.loadURL(engine === null ? APP_URL : `${APP_URL}?store=${engine}`);
   return window;
 };

@@ -1,10 +1,12 @@
 // Which IndexedDB engine a Heed profile runs on. Chromium's default engine (LevelDB) deletes an
 // origin's whole database when it finds a checksum mismatch on open, and a SIGKILL while a
-// transaction is being written can leave one: measured here with bench/store-kill.mjs. Chromium's
+// transaction is being written can leave one: measured here with bench/store-kill.ts. Chromium's
 // SQLite engine (feature IdbSqliteBackingStore, write-ahead log) kept every committed write over
 // the same kills. Switching an existing profile to it deletes the LevelDB data without migrating
-// it, so a profile that already holds LevelDB data stays on LevelDB until its studies are moved
-// (save bundles, open them in a new profile). The choice is written into the profile, once.
+// it, so a profile that holds LevelDB data stays on LevelDB until its studies are moved (save
+// bundles, open them in a new profile), whatever was recorded before: a Chromium that ignored the
+// switch may have written LevelDB data into a profile recorded as SQLite. The choice is written
+// into the profile so a person can see it.
 import { existsSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 
@@ -20,28 +22,38 @@ export const ENGINES = Object.freeze(['sqlite', 'leveldb']);
  */
 export const chooseStoreEngine = ({ marker, levelDbStores }) => {
   const recorded = (marker ?? '').trim();
-  if (recorded === 'sqlite' || recorded === 'leveldb') return { engine: recorded, reason: `recorded in the profile's ${ENGINE_FILE}`, record: false };
   if (levelDbStores.length > 0) {
+    const held = `the profile holds LevelDB data (${levelDbStores.join(', ')}), which the SQLite engine would delete`;
+    if (recorded === 'leveldb') return { engine: 'leveldb', reason: held, record: false };
     return {
       engine: 'leveldb',
-      reason: `the profile already holds LevelDB data (${levelDbStores.join(', ')}), which the SQLite engine would delete`,
+      reason: recorded === 'sqlite' ? `${held}; it was recorded as SQLite, so a Chromium without the SQLite engine has run on it` : held,
       record: true,
     };
   }
-  return { engine: 'sqlite', reason: 'a new profile', record: true };
+  if (recorded === 'sqlite') return { engine: 'sqlite', reason: `recorded in the profile's ${ENGINE_FILE}`, record: false };
+  return { engine: 'sqlite', reason: recorded === 'leveldb' ? 'recorded as LevelDB, but it holds no LevelDB data now' : 'a new profile', record: true };
 };
 
-// Chromium keeps IndexedDB in <profile>/Default/IndexedDB; Electron in <userData>/IndexedDB.
-const INDEXEDDB_DIRS = [path.join('Default', 'IndexedDB'), 'IndexedDB'];
+// Chromium keeps IndexedDB in <profile>/Default/IndexedDB, Electron in <userData>/IndexedDB; other
+// storage buckets under WebStorage/<n>/IndexedDB (from memory of Chromium's layout; Heed makes none).
+const bucketDirs = (base) => {
+  const full = path.join(base, 'WebStorage');
+  if (!existsSync(full)) return [];
+  return readdirSync(full).filter((n) => /^\d+$/.test(n)).map((n) => path.join(base, 'WebStorage', n, 'IndexedDB'));
+};
+const indexedDbDirs = (profileDir) => [path.join('Default', 'IndexedDB'), 'IndexedDB',
+  ...bucketDirs(path.join(profileDir, 'Default')).map((d) => path.relative(profileDir, d)),
+  ...bucketDirs(profileDir).map((d) => path.relative(profileDir, d))];
 
 /** @param {string} profileDir */
 export const readStoreEngineFacts = (profileDir) => {
   const file = path.join(profileDir, ENGINE_FILE);
   const marker = existsSync(file) ? readFileSync(file, 'utf8') : null;
-  const levelDbStores = INDEXEDDB_DIRS.flatMap((dir) => {
+  const levelDbStores = indexedDbDirs(profileDir).flatMap((dir) => {
     const full = path.join(profileDir, dir);
     if (!existsSync(full)) return [];
-    return readdirSync(full).filter((name) => name.endsWith('.indexeddb.leveldb')).map((name) => path.join(dir, name));
+    return readdirSync(full).filter((name) => name.endsWith('indexeddb.leveldb')).map((name) => path.join(dir, name));
   });
   return { marker, levelDbStores };
 };

@@ -112,9 +112,13 @@ export type StoredEvent = {
 /**
  * A workstation setting, by key. `coordinator-lock`: the passphrase's salted hash (never the
  * passphrase) and the idle minutes; `lock-state`: whether the coordinator's side is locked;
- * `store-identity`: a random id given to this database when it was created (store-identity.ts).
+ * `store-identity`: a random id given to this database when it was created, and the database this
+ * window used before, when the browser lost it (store-identity.ts).
  */
 export type StoredSetting =
   | { key: 'coordinator-lock'; hash: PassphraseHash; idleMinutes: number; setAt: string }
   | { key: 'lock-state'; locked: boolean; since: string; why: string }
-  | { key: 'store-identity'; id: string; createdAt: string };
+  | { key: 'store-identity'; id: string; createdAt: string; lost?: LostStore };
+
+/** A database this window used before and no longer has: its identity and dates, and whether the notice was read. */
+export type LostStore = { id: string; createdAt: string; lastSeen: string; noticedAt: string; read: boolean };

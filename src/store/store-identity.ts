@@ -1,18 +1,40 @@
 /**
  * The database's identity: a random id written once, when Heed first finds the database without
  * one. A browser that deletes a damaged database and starts an empty one (Chromium does, see
- * docs/security.md) gives Heed a database with no identity, so a new one is made; compared with
- * the id remembered outside the database (ui/services/store-loss.ts), that shows the loss.
+ * docs/security.md) gives Heed a database with a new identity. The identity this window used
+ * last is remembered outside the database (ui/services/store-loss.ts); when the two differ, the
+ * earlier database is gone, and that is written into this one, in the same strict transaction
+ * that reads the identity, so neither a crash nor a second tab can lose the notice.
  */
 import type { HeedDb } from './db';
+import type { LostStore, StoredSetting } from './records';
 
-export type StoreIdentity = { id: string; createdAt: string; madeNow: boolean };
+type IdentityRecord = Extract<StoredSetting, { key: 'store-identity' }>;
 
-export const storeIdentity = (db: HeedDb, now: () => Date = () => new Date()): Promise<StoreIdentity> =>
+/** The identity a window last saw, kept outside the database. */
+export type RememberedStore = { id: string; createdAt: string; lastSeen: string };
+
+/** This database's identity, and the earlier database it replaced if its notice is not read yet. */
+export type StoreIdentity = { id: string; createdAt: string; unreadLoss: LostStore | null };
+
+export const storeIdentity = (db: HeedDb, remembered: RememberedStore | null, now: () => Date = () => new Date()): Promise<StoreIdentity> =>
   db.transaction('rw', db.settings, async () => {
     const found = await db.settings.get('store-identity');
-    if (found?.key === 'store-identity') return { id: found.id, createdAt: found.createdAt, madeNow: false };
-    const made = { key: 'store-identity' as const, id: crypto.randomUUID(), createdAt: now().toISOString() };
-    await db.settings.put(made);
-    return { id: made.id, createdAt: made.createdAt, madeNow: true };
+    const record: IdentityRecord = found?.key === 'store-identity' ? found : { key: 'store-identity', id: crypto.randomUUID(), createdAt: now().toISOString() };
+    const gone = remembered !== null && remembered.id !== record.id && record.lost?.id !== remembered.id;
+    const lost: LostStore | undefined = gone
+      ? { id: remembered.id, createdAt: remembered.createdAt, lastSeen: remembered.lastSeen, noticedAt: now().toISOString(), read: false }
+      : record.lost;
+    const next: IdentityRecord = lost === undefined ? record : { ...record, lost };
+    if (found === undefined || gone) await db.settings.put(next);
+    return { id: record.id, createdAt: record.createdAt, unreadLoss: lost !== undefined && !lost.read ? lost : null };
+  });
+
+/** The coordinator has read the notice of a lost database. */
+export const markLossRead = (db: HeedDb): Promise<void> =>
+  db.transaction('rw', db.settings, async () => {
+    const found = await db.settings.get('store-identity');
+    if (found?.key !== 'store-identity' || found.lost === undefined) return;
+    const next: IdentityRecord = { ...found, lost: { ...found.lost, read: true } };
+    await db.settings.put(next);
   });

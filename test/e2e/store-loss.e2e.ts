@@ -18,7 +18,7 @@ describe('a database the browser lost', () => {
     await homePage(page).newStudy({ name: 'Soon gone', aidedMode: 'concurrent' });
     await studyPage(page).enrol('L01');
     await studyPage(page).enrolled('L01');
-    const notice = page.getByRole('alert').filter({ has: page.getByRole('heading', { name: 'Heed’s earlier data is gone from this window' }) });
+    const notice = page.getByRole('alert').filter({ has: page.getByRole('heading', { name: 'The browser lost Heed’s studies on this workstation' }) });
 
     // a plain restart of the same database says nothing
     await page.reload();
@@ -36,7 +36,7 @@ describe('a database the browser lost', () => {
     await page.reload();
     await homePage(page).waitUntilReady();
     await notice.waitFor();
-    expect(await notice.innerText()).toMatch(/created on .* and last opened on .*Restore each study from its latest backup/s);
+    expect(await notice.innerText()).toMatch(/created on .* and last opened on .*import each study’s case set again.*restore each study from its latest backup/s);
     await page.getByText('No study yet.').waitFor();
 
     // still there after a reload, gone once read

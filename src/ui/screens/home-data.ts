@@ -7,19 +7,23 @@ import type { StoredCaseSet, StoredStudy } from '../../store/records';
 import { statusOfStudy } from '../../store/study-lifecycle';
 import { storeIdentity } from '../../store/store-identity';
 import { listStudies } from '../../store/studies';
-import { checkStoreLoss, originStorage, type StoreLoss } from '../services/store-loss';
+import type { LostStore } from '../../store/records';
+import { originStorage, rememberedStore, rememberStore } from '../services/store-loss';
 import { DEMO_SET_ID, ensureDemoCaseSet } from '../services/demo-set';
 
 export type HomeData = {
   caseSets: StoredCaseSet[]; studies: StoredStudy[]; unfinished: Unfinished[]; statuses: Map<string, string>;
   /** the browser lost an earlier database of this window, and the notice is not read yet */
-  storeLoss: StoreLoss | null;
+  storeLoss: LostStore | null;
 };
 
 export const loadHome = async (db: HeedDb): Promise<HomeData> => {
-  const [listed, studies, unfinished, identity] = await Promise.all([listCaseSets(db), listStudies(db), unfinishedSessions(db), storeIdentity(db)]);
+  // the database this window used last, read before this one's identity is looked at or made
   const storage = originStorage();
-  const storeLoss = storage === null ? null : checkStoreLoss(identity, storage);
+  const remembered = storage === null ? null : rememberedStore(storage);
+  const [listed, studies, unfinished, identity] = await Promise.all([listCaseSets(db), listStudies(db), unfinishedSessions(db), storeIdentity(db, remembered)]);
+  if (storage !== null) rememberStore(storage, identity);
+  const storeLoss = identity.unreadLoss;
   // the demo set is generated once, on first launch; a relaunch only sees it in the list
   const caseSets = listed.some((s) => s.id === DEMO_SET_ID) ? listed : await ensureDemoCaseSet(db).then(() => listCaseSets(db));
   const statuses = new Map(await Promise.all(studies.map(async (s) => [s.id, STATUS_WORDS[await statusOfStudy(db, s)]] as const)));

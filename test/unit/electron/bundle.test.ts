@@ -75,7 +75,7 @@ export const shell = {};
     expect(calls).toContainEqual(['switch', 'enable-features', 'IdbSqliteBackingStore']); // a new user-data folder
     expect(names.filter((n) => n === 'ipc')).toHaveLength(8); // one per IPC channel (electron/channels.ts)
     expect(calls).toContainEqual(['handle', 'heed']);
-    expect(calls).toContainEqual(['load', 'heed://app/index.html']);
+    expect(calls).toContainEqual(['load', 'heed://app/index.html?store=sqlite']);
     const prefs = calls.find((c) => c[0] === 'window')?.[1];
     expect(prefs).toMatchObject({ sandbox: true, contextIsolation: true, nodeIntegration: false, preload: path.join(out, 'preload.cjs') });
     expect(names.indexOf('csp-hook')).toBeLessThan(names.indexOf('window'));

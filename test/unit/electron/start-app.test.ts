@@ -57,7 +57,7 @@ describe('startApp', () => {
     expect(window.guardContents).toHaveBeenCalledWith(contents);
 
     electron.fireReady();
-    await vi.waitFor(() => expect(window.createMainWindow).toHaveBeenCalledWith('/app/dist-electron/preload.cjs', false));
+    await vi.waitFor(() => expect(window.createMainWindow).toHaveBeenCalledWith('/app/dist-electron/preload.cjs', false, 'sqlite'));
     expect(window.applySessionPolicy).toHaveBeenCalledWith(electron.session.defaultSession);
     expect(electron.protocol.handle).toHaveBeenCalledWith('heed', expect.any(Function));
     expect(electron.ipcMain.handle.mock.calls.map((c) => c[0]).sort()).toEqual(Object.values(CHANNELS).sort());

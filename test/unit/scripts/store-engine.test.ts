@@ -19,10 +19,17 @@ describe('chooseStoreEngine', () => {
     expect(choice.record).toBe(true);
   });
 
-  it('follows a recorded choice, and ignores a damaged one', () => {
-    expect(chooseStoreEngine({ marker: 'leveldb\n', levelDbStores: [] })).toMatchObject({ engine: 'leveldb', record: false });
-    expect(chooseStoreEngine({ marker: 'sqlite', levelDbStores: ['IndexedDB/x.indexeddb.leveldb'] })).toMatchObject({ engine: 'sqlite', record: false });
+  it('keeps LevelDB data whatever was recorded: a Chromium without the SQLite engine may have written it', () => {
+    const choice = chooseStoreEngine({ marker: 'sqlite', levelDbStores: ['IndexedDB/x.indexeddb.leveldb'] });
+    expect(choice).toMatchObject({ engine: 'leveldb', record: true });
+    expect(choice.reason).toMatch(/recorded as SQLite, so a Chromium without the SQLite engine has run on it/);
+    expect(chooseStoreEngine({ marker: 'leveldb\n', levelDbStores: ['IndexedDB/x.indexeddb.leveldb'] })).toMatchObject({ engine: 'leveldb', record: false });
+  });
+
+  it('follows a recorded SQLite choice, and ignores a damaged or stale one', () => {
+    expect(chooseStoreEngine({ marker: 'sqlite\n', levelDbStores: [] })).toMatchObject({ engine: 'sqlite', record: false });
     expect(chooseStoreEngine({ marker: 'ext4', levelDbStores: [] })).toMatchObject({ engine: 'sqlite', record: true });
+    expect(chooseStoreEngine({ marker: 'leveldb', levelDbStores: [] })).toMatchObject({ engine: 'sqlite', record: true });
   });
 });
 
@@ -31,11 +38,21 @@ describe('settleStoreEngine', () => {
   beforeEach(() => { dir = mkdtempSync(path.join(tmpdir(), 'heed-engine-')); });
   afterEach(() => rmSync(dir, { recursive: true, force: true }));
 
-  it('records the first decision in the profile and keeps it once LevelDB folders appear', () => {
+  it('records the decision in the profile, and turns to LevelDB (recording it) when LevelDB folders appear', () => {
     expect(settleStoreEngine(dir).engine).toBe('sqlite');
     expect(readFileSync(path.join(dir, ENGINE_FILE), 'utf8')).toBe('sqlite\n');
-    mkdirSync(path.join(dir, 'Default', 'IndexedDB', 'http_other.indexeddb.leveldb'), { recursive: true });
     expect(settleStoreEngine(dir)).toMatchObject({ engine: 'sqlite', record: false });
+    // a SQLite store's folder has no .leveldb suffix (seen with Chromium 156: Default/IndexedDB/http_127.0.0.1_5178)
+    mkdirSync(path.join(dir, 'Default', 'IndexedDB', 'http_127.0.0.1_5178'), { recursive: true });
+    expect(settleStoreEngine(dir).engine).toBe('sqlite');
+    mkdirSync(path.join(dir, 'Default', 'IndexedDB', 'http_127.0.0.1_5178.indexeddb.leveldb'), { recursive: true });
+    expect(settleStoreEngine(dir)).toMatchObject({ engine: 'leveldb', record: true });
+    expect(readFileSync(path.join(dir, ENGINE_FILE), 'utf8')).toBe('leveldb\n');
+  });
+
+  it('looks in storage buckets too', () => {
+    mkdirSync(path.join(dir, 'Default', 'WebStorage', '3', 'IndexedDB', 'indexeddb.leveldb'), { recursive: true });
+    expect(settleStoreEngine(dir).engine).toBe('leveldb');
   });
 
   it('finds Chromium\'s and Electron\'s LevelDB folders', () => {

@@ -1,9 +1,11 @@
 // A database the browser deleted and replaced with an empty one is noticed at the next start:
-// the new database has a new identity while localStorage remembers the old one (docs/security.md).
+// the new database has a new identity while localStorage remembers the old one, and the loss is
+// written into the new database so that a crash or a second tab cannot lose the notice
+// (docs/security.md).
 import 'fake-indexeddb/auto';
 import { openHeedDb, type HeedDb } from '../../../src/store/db';
-import { storeIdentity } from '../../../src/store/store-identity';
-import { checkStoreLoss, dismissStoreLoss } from '../../../src/ui/services/store-loss';
+import { markLossRead, storeIdentity } from '../../../src/store/store-identity';
+import { rememberedStore, rememberStore } from '../../../src/ui/services/store-loss';
 
 let n = 0;
 const fresh = (): HeedDb => openHeedDb(`heed-identity-${process.pid}-${++n}`);
@@ -21,13 +23,19 @@ const memoryStorage = (): Storage => {
   };
 };
 
+/** One start of the start screen: read what is remembered, look at the identity, remember it. */
+const start = async (db: HeedDb, storage: Storage, at: string) => {
+  const identity = await storeIdentity(db, rememberedStore(storage), () => new Date(at));
+  rememberStore(storage, identity, new Date(at));
+  return identity;
+};
+
 describe('the database identity', () => {
   it('is made once and then kept', async () => {
     const db = fresh();
-    const first = await storeIdentity(db, () => new Date('2026-03-01T08:00:00Z'));
-    expect(first).toMatchObject({ createdAt: '2026-03-01T08:00:00.000Z', madeNow: true });
-    const again = await storeIdentity(db);
-    expect(again).toEqual({ ...first, madeNow: false });
+    const first = await storeIdentity(db, null, () => new Date('2026-03-01T08:00:00Z'));
+    expect(first).toMatchObject({ createdAt: '2026-03-01T08:00:00.000Z', unreadLoss: null });
+    expect(await storeIdentity(db, null)).toEqual(first);
   });
 });
 
@@ -35,32 +43,45 @@ describe('noticing a lost database', () => {
   it('says nothing on a first start, nor on later starts of the same database', async () => {
     const db = fresh();
     const storage = memoryStorage();
-    expect(checkStoreLoss(await storeIdentity(db), storage)).toBeNull();
-    expect(checkStoreLoss(await storeIdentity(db), storage)).toBeNull();
+    expect((await start(db, storage, '2026-03-01T08:00:00Z')).unreadLoss).toBeNull();
+    expect((await start(db, storage, '2026-03-02T08:00:00Z')).unreadLoss).toBeNull();
   });
 
-  it('reports a database made anew where another was remembered, until it is read', async () => {
+  it('reports a database replaced by a new one, keeps the report in the new database, and drops it once read', async () => {
     const storage = memoryStorage();
     const before = fresh();
-    checkStoreLoss(await storeIdentity(before, () => new Date('2026-03-01T08:00:00Z')), storage, new Date('2026-03-02T09:30:00Z'));
+    await start(before, storage, '2026-03-01T08:00:00Z');
+    await start(before, storage, '2026-03-02T09:30:00Z');
     // the browser deleted it: the next start finds a new, empty database
     const after = fresh();
-    const loss = checkStoreLoss(await storeIdentity(after), storage, new Date('2026-03-03T07:00:00Z'));
-    expect(loss).toEqual({ lostCreatedAt: '2026-03-01T08:00:00.000Z', lostLastSeen: '2026-03-02T09:30:00.000Z', noticedAt: '2026-03-03T07:00:00.000Z' });
-    // a reload does not hide it; reading it does
-    expect(checkStoreLoss(await storeIdentity(after), storage)).toEqual(loss);
-    dismissStoreLoss(storage);
-    expect(checkStoreLoss(await storeIdentity(after), storage)).toBeNull();
+    const first = await start(after, storage, '2026-03-03T07:00:00Z');
+    expect(first.unreadLoss).toMatchObject({ createdAt: '2026-03-01T08:00:00.000Z', lastSeen: '2026-03-02T09:30:00.000Z', noticedAt: '2026-03-03T07:00:00.000Z', read: false });
+    // localStorage now remembers the new database; the report lives on in the database itself
+    expect(rememberedStore(storage)?.id).toBe(first.id);
+    expect((await start(after, storage, '2026-03-03T08:00:00Z')).unreadLoss).toEqual(first.unreadLoss);
+    await markLossRead(after);
+    expect((await start(after, storage, '2026-03-03T09:00:00Z')).unreadLoss).toBeNull();
   });
 
-  it('is not fooled by an unreadable memory, and does not call an old database lost', async () => {
+  it('survives a localStorage write lost in a crash, without reporting twice', async () => {
+    const storage = memoryStorage();
+    const before = fresh();
+    await start(before, storage, '2026-03-01T08:00:00Z');
+    const after = fresh();
+    const remembered = rememberedStore(storage);
+    // the loss is noticed, but the browser is killed before localStorage reaches the disk
+    const noticed = await storeIdentity(after, remembered, () => new Date('2026-03-03T07:00:00Z'));
+    expect(noticed.unreadLoss?.id).toBe(remembered?.id);
+    const again = await storeIdentity(after, remembered, () => new Date('2026-03-03T07:05:00Z'));
+    expect(again.unreadLoss).toEqual(noticed.unreadLoss); // same report, first noticed time kept
+    await markLossRead(after);
+    expect((await storeIdentity(after, remembered)).unreadLoss).toBeNull(); // read stays read
+  });
+
+  it('is not fooled by an unreadable memory', async () => {
     const storage = memoryStorage();
     storage.setItem('heed.store-identity', '{not json');
-    expect(checkStoreLoss(await storeIdentity(fresh()), storage)).toBeNull();
-    // a database that already had its identity (not made now) is not a loss, whatever is remembered
-    const db = fresh();
-    const identity = await storeIdentity(db);
-    storage.setItem('heed.store-identity', JSON.stringify({ id: 'another', createdAt: '2026-01-01T00:00:00Z', lastSeen: '2026-01-02T00:00:00Z' }));
-    expect(checkStoreLoss({ ...identity, madeNow: false }, storage)).toBeNull();
+    expect(rememberedStore(storage)).toBeNull();
+    expect((await start(fresh(), storage, '2026-03-01T08:00:00Z')).unreadLoss).toBeNull();
   });
 });

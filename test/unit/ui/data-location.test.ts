@@ -16,6 +16,8 @@ describe('where the data of each launch mode lives', () => {
     expect(dataLocation('browser', '?mode=chromium&store=sqlite', 'http://127.0.0.1:5178').engine).toMatch(/SQLite storage engine/);
     expect(dataLocation('browser', '?mode=chromium&store=leveldb', 'http://127.0.0.1:5178').engine).toMatch(/^Warning: .*LevelDB.*Save a study bundle/);
     expect(dataLocation('browser', '?mode=serve', 'http://127.0.0.1:5178').engine).toMatch(/cannot choose this browser’s storage engine/);
+    expect(dataLocation('electron', '?store=leveldb', 'heed://app').engine).toMatch(/^Warning: .*LevelDB/);
+    expect(dataLocation('electron', '?store=sqlite', 'heed://app').engine).toMatch(/SQLite storage engine/);
   });
 
   it('Electron says it keeps its own', () => {
