@@ -28,7 +28,8 @@ const byStudy = (backups: BackupEntry[]): Map<string, BackupEntry[]> => {
 /** The study name a backup's file carries after its time stamp ("…Z-Reader-study.zip" gives "Reader-study"). */
 const nameInFile = (fileName: string): string => /Z-(.+)\.zip$/.exec(fileName)?.[1] ?? 'A study';
 
-const when = (iso: string): string => new Date(iso).toLocaleString('en-GB', { dateStyle: 'medium', timeStyle: 'short' });
+/** A stored time as a person reads it, e.g. "2 Dec 2026, 11:29" (also the lost-database notice's). */
+export const when = (iso: string): string => new Date(iso).toLocaleString('en-GB', { dateStyle: 'medium', timeStyle: 'short' });
 
 export const BackupsPanel = ({ studies }: Props) => {
   const db = useDb();

@@ -3,8 +3,7 @@ import { useState } from 'react';
 import type { LostStore } from '../../store/records';
 import { markLossRead } from '../../store/store-identity';
 import { useDb } from '../db-context';
-
-const when = (iso: string): string => new Date(iso).toLocaleString('en-GB', { dateStyle: 'medium', timeStyle: 'short' });
+import { when } from './BackupsPanel';
 
 export const StoreLossNotice = ({ loss }: { loss: LostStore }) => {
   const db = useDb();
