@@ -1,4 +1,7 @@
-import type { ReadRow } from '../core/read-log';
+import { ANSWER_SCALES, type AnswerScaleKind } from '../core/answer-scale';
+import { ASSISTANCE, type Assistance } from '../core/design';
+import type { LogColumns } from '../core/log-columns';
+import type { Bit, ReadRow } from '../core/read-log';
 import { finalLikelihood, finalScore, initialLikelihood, isAided } from './read-scores';
 
 /**
@@ -108,32 +111,14 @@ export const columnsBuilder = (capacity: number): { push: (r: ReadRow) => void; 
     c.practice[i] = r.practice;
     c.training[i] = r.training;
     c.withdrawn[i] = r.withdrawn;
-    c.aided[i] = isAided(r) ? 1 : 0;
     c.truth[i] = r.truth;
     c.finalCall[i] = r.final_call;
     c.aiCall[i] = r.ai_call ?? -1;
     c.initialCall[i] = r.initial_call ?? -1;
     c.caution[i] = r.caution_shown;
-    c.rated[i] = r.final_rating === null ? 0 : 1;
     c.period[i] = r.period;
     c.totalMs[i] = r.total_ms;
-    try {
-      const s = finalScore(r);
-      if (s - s !== 0) throw new RangeError(`read ${i}: score is not a finite number (${s})`);
-      c.score[i] = s;
-      c.likelihood[i] = finalLikelihood(r) ?? Number.NaN;
-      if (r.assistance === 'sequential' && r.initial_call !== null && r.ai_call !== null) {
-        c.sequential[i] = 1;
-        c.initialLikelihood[i] = initialLikelihood(r) ?? Number.NaN;
-        c.aiScore[i] = r.ai_score ?? Number.NaN;
-      }
-      const t = r.total_ms;
-      if (t - t !== 0) throw new RangeError(`read ${i}: total_ms is not a finite number (${t})`);
-    } catch (error) {
-      if (!(error instanceof RangeError)) throw error;
-      c.score[i] = Number.NaN;
-      scoreErrors.set(i, error);
-    }
+    derive(c, scoreErrors, i, r);
     c.shape[i] = shapeOf(r.case_attributes);
     for (const { code, value } of valuesOf(r.case_attributes)) code[i] = value;
     i++;
@@ -187,6 +172,83 @@ export const columnsBuilder = (capacity: number): { push: (r: ReadRow) => void; 
   };
   return { push, done };
 };
+
+type Derived = Pick<ReadColumns, 'aided' | 'rated' | 'score' | 'likelihood' | 'sequential' | 'initialLikelihood' | 'aiScore'>;
+
+// The columns worked out from read i's cells (its scores by the functions of read-scores.ts),
+// shared by both ways of building columns; a read whose score or time is unusable gets a NaN
+// score and its RangeError in scoreErrors.
+const derive = (c: Derived, scoreErrors: Map<number, RangeError>, i: number, r: ReadRow): void => {
+  c.aided[i] = isAided(r) ? 1 : 0;
+  c.rated[i] = r.final_rating === null ? 0 : 1;
+  try {
+    const s = finalScore(r);
+    if (s - s !== 0) throw new RangeError(`read ${i}: score is not a finite number (${s})`);
+    c.score[i] = s;
+    c.likelihood[i] = finalLikelihood(r) ?? Number.NaN;
+    if (r.assistance === 'sequential' && r.initial_call !== null && r.ai_call !== null) {
+      c.sequential[i] = 1;
+      c.initialLikelihood[i] = initialLikelihood(r) ?? Number.NaN;
+      c.aiScore[i] = r.ai_score ?? Number.NaN;
+    }
+    const t = r.total_ms;
+    if (t - t !== 0) throw new RangeError(`read ${i}: total_ms is not a finite number (${t})`);
+  } catch (error) {
+    if (!(error instanceof RangeError)) throw error;
+    c.score[i] = Number.NaN;
+    scoreErrors.set(i, error);
+  }
+};
+
+/**
+ * The columns of a parsed log (src/io's parseReadLogColumns), equal to what columnsBuilder makes
+ * from the same reads as rows: ids, calls, flags, periods and times are the log's own arrays;
+ * scores are worked out read by read with the same functions. Example: columnsOfLog(log).n === log.n.
+ */
+export const columnsOfLog = (log: LogColumns): ReadColumns => {
+  const n = log.n;
+  const nan = (): Float64Array => new Float64Array(n).fill(Number.NaN);
+  const d: Derived = {
+    aided: new Uint8Array(n), rated: new Uint8Array(n), score: new Float64Array(n), likelihood: new Float64Array(n),
+    sequential: new Uint8Array(n), initialLikelihood: nan(), aiScore: nan(),
+  };
+  const scoreErrors = new Map<number, RangeError>();
+  // one row object, refilled for each read, carrying the cells the score functions read
+  const r = { case_attributes: {} } as ReadRow;
+  for (let i = 0; i < n; i++) {
+    r.assistance = ASSISTANCE[log.assistance[i] as number] as Assistance;
+    r.scale = ANSWER_SCALES[log.scale[i] as number] as AnswerScaleKind;
+    r.final_call = log.finalCall[i] as Bit;
+    r.ai_call = orNull(log.aiCall[i] as number) as Bit | null;
+    r.initial_call = orNull(log.initialCall[i] as number) as Bit | null;
+    r.total_ms = log.totalMs[i] as number;
+    r.ai_score = nanNull(log.aiScore[i] as number);
+    r.initial_confidence = nanNull(log.initialConfidence[i] as number);
+    r.final_confidence = nanNull(log.finalConfidence[i] as number);
+    r.initial_rating = nanNull(log.initialRating[i] as number);
+    r.final_rating = nanNull(log.finalRating[i] as number);
+    derive(d, scoreErrors, i, r);
+  }
+  // every parsed read has every case_<name> column: one shape, none when there are no reads
+  const names = log.attributes.map((a) => a.name);
+  return {
+    n,
+    reader: log.reader, readerIds: log.readerIds, case: log.case, caseIds: log.caseIds, caseCount: log.caseIds.length,
+    finding: log.finding, findingIds: log.findingIds, role: log.role, roleIds: log.roleIds,
+    practice: log.practice, training: log.training, withdrawn: log.withdrawn, truth: log.truth, finalCall: log.finalCall,
+    aiCall: log.aiCall, initialCall: log.initialCall, caution: log.caution, period: log.period, totalMs: log.totalMs,
+    ...d,
+    shape: new Int32Array(n),
+    shapes: n === 0 ? [] : [names],
+    attributes: new Map(n === 0 ? [] : log.attributes.map((a) => [a.name, { code: a.code, values: a.values }])),
+    scoreErrors,
+    runScratch: new Int32Array(n),
+    caseScratch: [new Int32Array(log.caseIds.length).fill(-1), new Int32Array(log.caseIds.length).fill(-1)],
+  };
+};
+
+const orNull = (v: number): number | null => (v === -1 ? null : v);
+const nanNull = (v: number): number | null => (v === v ? v : null);
 
 const intern = (ids: Map<string, number>, id: string): number => {
   let k = ids.get(id);
