@@ -1,8 +1,8 @@
-import { ANSWER_SCALES, type AnswerScaleKind } from '../core/answer-scale';
-import { ASSISTANCE, type Assistance } from '../core/design';
+import { ANSWER_SCALES, isProbabilityScale, type AnswerScaleKind } from '../core/answer-scale';
+import { ASSISTANCE } from '../core/design';
 import type { LogColumns } from '../core/log-columns';
 import type { Bit, ReadRow } from '../core/read-log';
-import { finalLikelihood, finalScore, initialLikelihood, isAided } from './read-scores';
+import { finalLikelihood, finalScore, initialLikelihood, isAided, scoreOf } from './read-scores';
 
 /**
  * A read log as typed columns (issue 10): one entry per read, in the order given, so the
@@ -203,7 +203,7 @@ const derive = (c: Derived, scoreErrors: Map<number, RangeError>, i: number, r: 
 /**
  * The columns of a parsed log (src/io's parseReadLogColumns), equal to what columnsBuilder makes
  * from the same reads as rows: ids, calls, flags, periods and times are the log's own arrays;
- * scores are worked out read by read with the same functions. Example: columnsOfLog(log).n === log.n.
+ * scores are worked out read by read by the same rules (read-scores.ts). Example: columnsOfLog(log).n === log.n.
  */
 export const columnsOfLog = (log: LogColumns): ReadColumns => {
   const n = log.n;
@@ -213,22 +213,7 @@ export const columnsOfLog = (log: LogColumns): ReadColumns => {
     sequential: new Uint8Array(n), initialLikelihood: nan(), aiScore: nan(),
   };
   const scoreErrors = new Map<number, RangeError>();
-  // one row object, refilled for each read, carrying the cells the score functions read
-  const r = { case_attributes: {} } as ReadRow;
-  for (let i = 0; i < n; i++) {
-    r.assistance = ASSISTANCE[log.assistance[i] as number] as Assistance;
-    r.scale = ANSWER_SCALES[log.scale[i] as number] as AnswerScaleKind;
-    r.final_call = log.finalCall[i] as Bit;
-    r.ai_call = orNull(log.aiCall[i] as number) as Bit | null;
-    r.initial_call = orNull(log.initialCall[i] as number) as Bit | null;
-    r.total_ms = log.totalMs[i] as number;
-    r.ai_score = nanNull(log.aiScore[i] as number);
-    r.initial_confidence = nanNull(log.initialConfidence[i] as number);
-    r.final_confidence = nanNull(log.finalConfidence[i] as number);
-    r.initial_rating = nanNull(log.initialRating[i] as number);
-    r.final_rating = nanNull(log.finalRating[i] as number);
-    derive(d, scoreErrors, i, r);
-  }
+  for (let i = 0; i < n; i++) deriveOfLog(log, d, scoreErrors, i);
   // every parsed read has every case_<name> column: one shape, none when there are no reads
   const names = log.attributes.map((a) => a.name);
   return {
@@ -247,7 +232,36 @@ export const columnsOfLog = (log: LogColumns): ReadColumns => {
   };
 };
 
-const orNull = (v: number): number | null => (v === -1 ? null : v);
+// derive's columns for read i of a parsed log, by the same rules on its cells (scoreOf is
+// finalScore's and initialScore's rule, isProbabilityScale finalLikelihood's): no row object per read.
+const SEQUENTIAL = ASSISTANCE.indexOf('sequential');
+const NONE = ASSISTANCE.indexOf('none');
+const deriveOfLog = (log: LogColumns, c: Derived, scoreErrors: Map<number, RangeError>, i: number): void => {
+  const assistance = log.assistance[i] as number;
+  const rating = log.finalRating[i] as number;
+  c.aided[i] = assistance !== NONE ? 1 : 0;
+  c.rated[i] = rating === rating ? 1 : 0;
+  try {
+    const s = scoreOf(nanNull(rating), log.finalCall[i] as Bit, nanNull(log.finalConfidence[i] as number));
+    if (s - s !== 0) throw new RangeError(`read ${i}: score is not a finite number (${s})`);
+    c.score[i] = s;
+    const probability = isProbabilityScale(ANSWER_SCALES[log.scale[i] as number] as AnswerScaleKind);
+    c.likelihood[i] = probability ? s : Number.NaN;
+    const initialCall = log.initialCall[i] as number;
+    if (assistance === SEQUENTIAL && initialCall !== -1 && log.aiCall[i] !== -1) {
+      c.sequential[i] = 1;
+      c.initialLikelihood[i] = probability ? scoreOf(nanNull(log.initialRating[i] as number), initialCall as Bit, nanNull(log.initialConfidence[i] as number)) : Number.NaN;
+      c.aiScore[i] = log.aiScore[i] as number;
+    }
+    const t = log.totalMs[i] as number;
+    if (t - t !== 0) throw new RangeError(`read ${i}: total_ms is not a finite number (${t})`);
+  } catch (error) {
+    if (!(error instanceof RangeError)) throw error;
+    c.score[i] = Number.NaN;
+    scoreErrors.set(i, error);
+  }
+};
+
 const nanNull = (v: number): number | null => (v === v ? v : null);
 
 const intern = (ids: Map<string, number>, id: string): number => {
