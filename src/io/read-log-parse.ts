@@ -249,11 +249,12 @@ const typeLinesFrom = (bytes: Uint8Array, begin: number, builder: LogColumnsBuil
   const width = header.length;
   const type = bytesRowTyper(rowLayout(header), width, builder);
   const starts = new Int32Array(width + 1);
-  const ends = new Int32Array(width + 1);
+  // entry width + 1: where splitLine found the line's end
+  const ends = new Int32Array(width + 2);
   for (let line = 2, start = end + 1; start <= size; line++, start = end + 1) {
-    end = endOf(start);
+    const split = splitLine(bytes, start, starts, ends, width);
+    end = ends[width + 1] as number;
     if (end === start) continue;
-    const split = splitLine(bytes, start, end, starts, ends, width);
     const cells = split & CELLS;
     if (split !== cells) checkUtf8(start, end, line);
     try {
@@ -274,15 +275,19 @@ const typeLinesFrom = (bytes: Uint8Array, begin: number, builder: LogColumnsBuil
 const CELLS = 0x3fffffff;
 const HIGH = 0x40000000;
 
-// The cells of the line bytes[start, end): where the first `width` start and end, and how many
-// there are, plus HIGH when a byte is above 0x7f. A small function of its own, so V8 optimises it
-// after a few lines instead of running one long loop unoptimised.
-const splitLine = (bytes: Uint8Array, start: number, end: number, starts: Int32Array, ends: Int32Array, width: number): number => {
+// The cells of the line starting at `start`: where the first `width` start and end, how many
+// there are, plus HIGH when a byte is above 0x7f; the line's end (its newline, or the end of the
+// bytes) goes in ends[width + 1]. A small function of its own, so V8 optimises it after a few
+// lines instead of running one long loop unoptimised.
+const splitLine = (bytes: Uint8Array, start: number, starts: Int32Array, ends: Int32Array, width: number): number => {
+  const size = bytes.length;
   let cells = 0;
   let high = 0;
+  let i = start;
   starts[0] = start;
-  for (let i = start; i < end; i++) {
+  for (; i < size; i++) {
     const ch = bytes[i] as number;
+    if (ch === 0x0a) break;
     high |= ch;
     if (ch === 0x2c) {
       if (cells < width) ends[cells] = i;
@@ -290,7 +295,8 @@ const splitLine = (bytes: Uint8Array, start: number, end: number, starts: Int32A
       if (cells < width) starts[cells] = i + 1;
     }
   }
-  if (cells < width) ends[cells] = end;
+  if (cells < width) ends[cells] = i;
+  ends[width + 1] = i;
   cells++;
   return high >= 0x80 ? cells | HIGH : cells;
 };

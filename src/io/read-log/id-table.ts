@@ -76,7 +76,29 @@ export const idTable = (restore: (raw: string) => string): IdTable => {
       slots[s] = e;
     }
   };
+  // the last cell looked up (reader, finding and role ids come in long runs): compared first
+  let lastBytes: Uint8Array | null = null;
+  let lastFrom = 0;
+  let lastLength = -1;
+  let lastNumber = 0;
   const ofBytes = (bytes: Uint8Array, from: number, to: number): number => {
+    const len = to - from;
+    if (len === lastLength && bytes === lastBytes) {
+      let j = 0;
+      while (j < len && bytes[from + j] === bytes[lastFrom + j]) j++;
+      if (j === len) {
+        lastFrom = from;
+        return lastNumber;
+      }
+    }
+    const k = lookUp(bytes, from, to);
+    lastBytes = bytes;
+    lastFrom = from;
+    lastLength = len;
+    lastNumber = k;
+    return k;
+  };
+  const lookUp = (bytes: Uint8Array, from: number, to: number): number => {
     // FNV-1a
     let h = 0x811c9dc5;
     for (let i = from; i < to; i++) h = Math.imul(h ^ (bytes[i] as number), 0x01000193);
