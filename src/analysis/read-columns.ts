@@ -203,14 +203,17 @@ const derive = (c: Derived, scoreErrors: Map<number, RangeError>, i: number, r: 
 /**
  * The columns of a parsed log (src/io's parseReadLogColumns), equal to what columnsBuilder makes
  * from the same reads as rows: ids, calls, flags, periods and times are the log's own arrays;
- * scores are worked out read by read by the same rules (read-scores.ts). Example: columnsOfLog(log).n === log.n.
+ * scores are worked out read by read by the same rules (read-scores.ts). Takes the log over: four
+ * of its arrays are overwritten with columns, so the log is not to be used after. Example: columnsOfLog(log).n === log.n.
  */
 export const columnsOfLog = (log: LogColumns): ReadColumns => {
   const n = log.n;
-  const nan = (): Float64Array => new Float64Array(n).fill(Number.NaN);
+  // the log's arrays of final confidence and rating, initial confidence and suggestion score
+  // become the score, likelihood, initial likelihood and suggestion score columns (each read's
+  // cells are read before its columns are written): a million reads need 32 MB less
   const d: Derived = {
-    aided: new Uint8Array(n), rated: new Uint8Array(n), score: new Float64Array(n), likelihood: new Float64Array(n),
-    sequential: new Uint8Array(n), initialLikelihood: nan(), aiScore: nan(),
+    aided: new Uint8Array(n), rated: new Uint8Array(n), score: log.finalConfidence, likelihood: log.finalRating,
+    sequential: new Uint8Array(n), initialLikelihood: log.initialConfidence, aiScore: log.aiScore,
   };
   const scoreErrors = new Map<number, RangeError>();
   for (let i = 0; i < n; i++) deriveOfLog(log, d, scoreErrors, i);
@@ -239,10 +242,18 @@ const NONE = ASSISTANCE.indexOf('none');
 const deriveOfLog = (log: LogColumns, c: Derived, scoreErrors: Map<number, RangeError>, i: number): void => {
   const assistance = log.assistance[i] as number;
   const rating = log.finalRating[i] as number;
+  const confidence = log.finalConfidence[i] as number;
+  const initialConfidence = log.initialConfidence[i] as number;
+  const aiScore = log.aiScore[i] as number;
+  // the builder's starting values (its arrays are new: 0, 0, NaN, NaN), as c may be the log's arrays
+  c.score[i] = 0;
+  c.likelihood[i] = 0;
+  c.initialLikelihood[i] = Number.NaN;
+  c.aiScore[i] = Number.NaN;
   c.aided[i] = assistance !== NONE ? 1 : 0;
   c.rated[i] = rating === rating ? 1 : 0;
   try {
-    const s = scoreOf(nanNull(rating), log.finalCall[i] as Bit, nanNull(log.finalConfidence[i] as number));
+    const s = scoreOf(nanNull(rating), log.finalCall[i] as Bit, nanNull(confidence));
     if (s - s !== 0) throw new RangeError(`read ${i}: score is not a finite number (${s})`);
     c.score[i] = s;
     const probability = isProbabilityScale(ANSWER_SCALES[log.scale[i] as number] as AnswerScaleKind);
@@ -250,8 +261,8 @@ const deriveOfLog = (log: LogColumns, c: Derived, scoreErrors: Map<number, Range
     const initialCall = log.initialCall[i] as number;
     if (assistance === SEQUENTIAL && initialCall !== -1 && log.aiCall[i] !== -1) {
       c.sequential[i] = 1;
-      c.initialLikelihood[i] = probability ? scoreOf(nanNull(log.initialRating[i] as number), initialCall as Bit, nanNull(log.initialConfidence[i] as number)) : Number.NaN;
-      c.aiScore[i] = log.aiScore[i] as number;
+      c.initialLikelihood[i] = probability ? scoreOf(nanNull(log.initialRating[i] as number), initialCall as Bit, nanNull(initialConfidence)) : Number.NaN;
+      c.aiScore[i] = aiScore;
     }
     const t = log.totalMs[i] as number;
     if (t - t !== 0) throw new RangeError(`read ${i}: total_ms is not a finite number (${t})`);
