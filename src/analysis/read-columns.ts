@@ -1,5 +1,8 @@
-import type { ReadRow } from '../core/read-log';
-import { finalLikelihood, finalScore, initialLikelihood, isAided } from './read-scores';
+import { ANSWER_SCALES, isProbabilityScale, type AnswerScaleKind } from '../core/answer-scale';
+import { ASSISTANCE } from '../core/design';
+import type { LogColumns } from '../core/log-columns';
+import type { Bit, ReadRow } from '../core/read-log';
+import { finalLikelihood, finalScore, initialLikelihood, isAided, scoreOf } from './read-scores';
 
 /**
  * A read log as typed columns (issue 10): one entry per read, in the order given, so the
@@ -108,32 +111,14 @@ export const columnsBuilder = (capacity: number): { push: (r: ReadRow) => void; 
     c.practice[i] = r.practice;
     c.training[i] = r.training;
     c.withdrawn[i] = r.withdrawn;
-    c.aided[i] = isAided(r) ? 1 : 0;
     c.truth[i] = r.truth;
     c.finalCall[i] = r.final_call;
     c.aiCall[i] = r.ai_call ?? -1;
     c.initialCall[i] = r.initial_call ?? -1;
     c.caution[i] = r.caution_shown;
-    c.rated[i] = r.final_rating === null ? 0 : 1;
     c.period[i] = r.period;
     c.totalMs[i] = r.total_ms;
-    try {
-      const s = finalScore(r);
-      if (s - s !== 0) throw new RangeError(`read ${i}: score is not a finite number (${s})`);
-      c.score[i] = s;
-      c.likelihood[i] = finalLikelihood(r) ?? Number.NaN;
-      if (r.assistance === 'sequential' && r.initial_call !== null && r.ai_call !== null) {
-        c.sequential[i] = 1;
-        c.initialLikelihood[i] = initialLikelihood(r) ?? Number.NaN;
-        c.aiScore[i] = r.ai_score ?? Number.NaN;
-      }
-      const t = r.total_ms;
-      if (t - t !== 0) throw new RangeError(`read ${i}: total_ms is not a finite number (${t})`);
-    } catch (error) {
-      if (!(error instanceof RangeError)) throw error;
-      c.score[i] = Number.NaN;
-      scoreErrors.set(i, error);
-    }
+    derive(c, scoreErrors, i, r);
     c.shape[i] = shapeOf(r.case_attributes);
     for (const { code, value } of valuesOf(r.case_attributes)) code[i] = value;
     i++;
@@ -187,6 +172,108 @@ export const columnsBuilder = (capacity: number): { push: (r: ReadRow) => void; 
   };
   return { push, done };
 };
+
+type Derived = Pick<ReadColumns, 'aided' | 'rated' | 'score' | 'likelihood' | 'sequential' | 'initialLikelihood' | 'aiScore'>;
+
+// The columns worked out from read i's cells (its scores by the functions of read-scores.ts),
+// shared by both ways of building columns; a read whose score or time is unusable gets a NaN
+// score and its RangeError in scoreErrors.
+const derive = (c: Derived, scoreErrors: Map<number, RangeError>, i: number, r: ReadRow): void => {
+  c.aided[i] = isAided(r) ? 1 : 0;
+  c.rated[i] = r.final_rating === null ? 0 : 1;
+  try {
+    const s = finalScore(r);
+    if (s - s !== 0) throw new RangeError(`read ${i}: score is not a finite number (${s})`);
+    c.score[i] = s;
+    c.likelihood[i] = finalLikelihood(r) ?? Number.NaN;
+    if (r.assistance === 'sequential' && r.initial_call !== null && r.ai_call !== null) {
+      c.sequential[i] = 1;
+      c.initialLikelihood[i] = initialLikelihood(r) ?? Number.NaN;
+      c.aiScore[i] = r.ai_score ?? Number.NaN;
+    }
+    const t = r.total_ms;
+    if (t - t !== 0) throw new RangeError(`read ${i}: total_ms is not a finite number (${t})`);
+  } catch (error) {
+    if (!(error instanceof RangeError)) throw error;
+    c.score[i] = Number.NaN;
+    scoreErrors.set(i, error);
+  }
+};
+
+/**
+ * The columns of a parsed log (src/io's parseReadLogColumns), equal to what columnsBuilder makes
+ * from the same reads as rows: ids, calls, flags, periods and times are the log's own arrays;
+ * scores are worked out read by read by the same rules (read-scores.ts). Takes the log over: four
+ * of its arrays are overwritten with columns, so the log is not to be used after. Example: columnsOfLog(log).n === log.n.
+ */
+export const columnsOfLog = (log: LogColumns): ReadColumns => {
+  const n = log.n;
+  // the log's arrays of final confidence and rating, initial confidence and suggestion score
+  // become the score, likelihood, initial likelihood and suggestion score columns (each read's
+  // cells are read before its columns are written): a million reads need 32 MB less
+  const d: Derived = {
+    aided: new Uint8Array(n), rated: new Uint8Array(n), score: log.finalConfidence, likelihood: log.finalRating,
+    sequential: new Uint8Array(n), initialLikelihood: log.initialConfidence, aiScore: log.aiScore,
+  };
+  const scoreErrors = new Map<number, RangeError>();
+  for (let i = 0; i < n; i++) deriveOfLog(log, d, scoreErrors, i);
+  // every parsed read has every case_<name> column: one shape, none when there are no reads
+  const names = log.attributes.map((a) => a.name);
+  return {
+    n,
+    reader: log.reader, readerIds: log.readerIds, case: log.case, caseIds: log.caseIds, caseCount: log.caseIds.length,
+    finding: log.finding, findingIds: log.findingIds, role: log.role, roleIds: log.roleIds,
+    practice: log.practice, training: log.training, withdrawn: log.withdrawn, truth: log.truth, finalCall: log.finalCall,
+    aiCall: log.aiCall, initialCall: log.initialCall, caution: log.caution, period: log.period, totalMs: log.totalMs,
+    ...d,
+    shape: new Int32Array(n),
+    shapes: n === 0 ? [] : [names],
+    attributes: new Map(n === 0 ? [] : log.attributes.map((a) => [a.name, { code: a.code, values: a.values }])),
+    scoreErrors,
+    runScratch: new Int32Array(n),
+    caseScratch: [new Int32Array(log.caseIds.length).fill(-1), new Int32Array(log.caseIds.length).fill(-1)],
+  };
+};
+
+// derive's columns for read i of a parsed log, by the same rules on its cells (scoreOf is
+// finalScore's and initialScore's rule, isProbabilityScale finalLikelihood's): no row object per read.
+const SEQUENTIAL = ASSISTANCE.indexOf('sequential');
+const NONE = ASSISTANCE.indexOf('none');
+const deriveOfLog = (log: LogColumns, c: Derived, scoreErrors: Map<number, RangeError>, i: number): void => {
+  const assistance = log.assistance[i] as number;
+  const rating = log.finalRating[i] as number;
+  const confidence = log.finalConfidence[i] as number;
+  const initialConfidence = log.initialConfidence[i] as number;
+  const aiScore = log.aiScore[i] as number;
+  // the builder's starting values (its arrays are new: 0, 0, NaN, NaN), as c may be the log's arrays
+  c.score[i] = 0;
+  c.likelihood[i] = 0;
+  c.initialLikelihood[i] = Number.NaN;
+  c.aiScore[i] = Number.NaN;
+  c.aided[i] = assistance !== NONE ? 1 : 0;
+  c.rated[i] = rating === rating ? 1 : 0;
+  try {
+    const s = scoreOf(nanNull(rating), log.finalCall[i] as Bit, nanNull(confidence));
+    if (s - s !== 0) throw new RangeError(`read ${i}: score is not a finite number (${s})`);
+    c.score[i] = s;
+    const probability = isProbabilityScale(ANSWER_SCALES[log.scale[i] as number] as AnswerScaleKind);
+    c.likelihood[i] = probability ? s : Number.NaN;
+    const initialCall = log.initialCall[i] as number;
+    if (assistance === SEQUENTIAL && initialCall !== -1 && log.aiCall[i] !== -1) {
+      c.sequential[i] = 1;
+      c.initialLikelihood[i] = probability ? scoreOf(nanNull(log.initialRating[i] as number), initialCall as Bit, nanNull(initialConfidence)) : Number.NaN;
+      c.aiScore[i] = aiScore;
+    }
+    const t = log.totalMs[i] as number;
+    if (t - t !== 0) throw new RangeError(`read ${i}: total_ms is not a finite number (${t})`);
+  } catch (error) {
+    if (!(error instanceof RangeError)) throw error;
+    c.score[i] = Number.NaN;
+    scoreErrors.set(i, error);
+  }
+};
+
+const nanNull = (v: number): number | null => (v === v ? v : null);
 
 const intern = (ids: Map<string, number>, id: string): number => {
   let k = ids.get(id);

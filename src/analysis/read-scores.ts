@@ -11,11 +11,14 @@ import type { ReadRow } from '../core/read-log';
  * Throws RangeError when a confidence is outside 0..100.
  * Example: finalScore({ final_call: 1, final_confidence: null, ... }) → 100.
  */
-export const finalScore = (r: ReadRow): number => r.final_rating ?? derivedScore(r.final_call, r.final_confidence ?? 100);
+export const finalScore = (r: ReadRow): number => scoreOf(r.final_rating, r.final_call, r.final_confidence);
+
+/** The score of a rating, or else of a call and its confidence (empty → 100): finalScore's rule on bare cells. */
+export const scoreOf = (rating: number | null, call: 0 | 1, confidence: number | null): number => rating ?? derivedScore(call, confidence ?? 100);
 
 /** Initial ROC score s0 of a sequential read (the rating, else derived with confidence empty → 100, as finalScore); null without an initial call. */
 export const initialScore = (r: ReadRow): number | null =>
-  r.initial_call === null ? null : r.initial_rating ?? derivedScore(r.initial_call, r.initial_confidence ?? 100);
+  r.initial_call === null ? null : scoreOf(r.initial_rating, r.initial_call, r.initial_confidence);
 
 /**
  * The final score as a likelihood on 0..100, where the scale states one (call-confidence's derived

@@ -29,7 +29,11 @@ const F = AVERAGED_FIGURES.length;
 const IDX = Object.fromEntries(AVERAGED_FIGURES.map((f, i) => [f, i])) as Record<AveragedFigure, number>;
 
 // One reader's reads of one condition in flat typed arrays, so a resample only reweights them.
-type Cond = { n: number; caseIdx: Int32Array; truth: Uint8Array; correct: Uint8Array; level: Int32Array; levels: number; follow: Uint8Array; aiWrong: Uint8Array; hasAi: Uint8Array };
+// kind: a read's five flags as one number (truth 1, correct 2, suggestion shown 4, followed 8,
+// suggestion wrong 16); slot: 2·level + truth, its place in the weighted histogram of levels.
+type Cond = { n: number; caseIdx: Int32Array; kind: Uint8Array; slot: Int32Array; levels: number };
+
+const TRUTH = 1, CORRECT = 2, HAS_AI = 4, FOLLOW = 8, AI_WRONG = 16;
 
 // One reader's reads of one condition, given by row numbers in read order and by score.
 const toCond = (cols: ReadColumns, set: ReadSet, caseIndex: Int32Array): Cond | null => {
@@ -44,72 +48,75 @@ const toCond = (cols: ReadColumns, set: ReadSet, caseIndex: Int32Array): Cond | 
     levelOf[r] = levels;
   }
   levels++;
-  const c: Cond = {
-    n, levels,
-    caseIdx: new Int32Array(n), truth: new Uint8Array(n), correct: new Uint8Array(n), level: new Int32Array(n),
-    follow: new Uint8Array(n), aiWrong: new Uint8Array(n), hasAi: new Uint8Array(n),
-  };
+  const c: Cond = { n, levels, caseIdx: new Int32Array(n), kind: new Uint8Array(n), slot: new Int32Array(n) };
   for (let i = 0; i < n; i++) {
     const r = set.rows[i] as number;
     const y = cols.truth[r] as number;
     const d = cols.finalCall[r] as number;
     const a = cols.aiCall[r] as number;
     c.caseIdx[i] = caseIndex[cols.case[r] as number] as number;
-    c.truth[i] = y;
-    c.correct[i] = d === y ? 1 : 0;
-    c.level[i] = levelOf[r] as number;
+    let kind = y === 1 ? TRUTH : 0;
+    if (d === y) kind |= CORRECT;
     if (a !== -1) {
-      c.hasAi[i] = 1;
-      c.follow[i] = d === a ? 1 : 0;
-      c.aiWrong[i] = a !== y ? 1 : 0;
+      kind |= HAS_AI;
+      if (d === a) kind |= FOLLOW;
+      if (a !== y) kind |= AI_WRONG;
     }
+    c.kind[i] = kind;
+    c.slot[i] = 2 * (levelOf[r] as number) + y;
   }
   return c;
 };
 
 // Weighted figures of one condition into out[offset..]: accuracy, sensitivity, specificity, AUC
 // (Mann-Whitney over a weighted histogram of score levels, ties ½), then reliance when aided.
-const condFigures = (c: Cond, w: Int32Array, pos: Float64Array, neg: Float64Array, out: Float64Array, aided: boolean): void => {
-  let nw = 0, correct = 0, p = 0, tp = 0, tn = 0, ai = 0, agree = 0, wrong = 0, fw = 0, rr = 0;
-  pos.fill(0, 0, c.levels);
-  neg.fill(0, 0, c.levels);
+const condFigures = (c: Cond, w: Int32Array, hist: Int32Array, kinds: Int32Array, out: Float64Array, aided: boolean): void => {
+  // Every sum here is of whole numbers (weights times 0 or 1) far below 2^53, so exact in any
+  // order: the weights are summed per kind of read and per histogram slot in one pass without
+  // branches, then the figures are read off the 32 kinds.
+  hist.fill(0, 0, 2 * c.levels);
+  kinds.fill(0);
+  const { caseIdx, kind, slot } = c;
   for (let i = 0; i < c.n; i++) {
-    const wi = w[c.caseIdx[i] as number] as number;
-    if (wi === 0) continue;
-    nw += wi;
-    const ok = c.correct[i] as number;
-    correct += wi * ok;
-    const l = c.level[i] as number;
-    if (c.truth[i] === 1) {
-      p += wi;
-      tp += wi * ok;
-      pos[l] = (pos[l] as number) + wi;
-    } else {
-      tn += wi * ok;
-      neg[l] = (neg[l] as number) + wi;
-    }
-    if (aided && c.hasAi[i] === 1) {
-      ai += wi;
-      const f = c.follow[i] as number;
-      agree += wi * f;
-      if (c.aiWrong[i] === 1) {
-        wrong += wi;
-        fw += wi * f;
-      } else rr += wi * (1 - f);
+    const wi = w[caseIdx[i] as number] as number;
+    const k = kind[i] as number;
+    kinds[k] = (kinds[k] as number) + wi;
+    const h = slot[i] as number;
+    hist[h] = (hist[h] as number) + wi;
+  }
+  let nw = 0, correct = 0, p = 0, tp = 0, tn = 0, ai = 0, agree = 0, wrong = 0, fw = 0, rr = 0;
+  for (let k = 0; k < 32; k++) {
+    const wk = kinds[k] as number;
+    if (wk === 0) continue;
+    nw += wk;
+    const ok = k & CORRECT ? 1 : 0;
+    correct += wk * ok;
+    if (k & TRUTH) {
+      p += wk;
+      tp += wk * ok;
+    } else tn += wk * ok;
+    if (k & HAS_AI) {
+      ai += wk;
+      const f = k & FOLLOW ? 1 : 0;
+      agree += wk * f;
+      if (k & AI_WRONG) {
+        wrong += wk;
+        fw += wk * f;
+      } else rr += wk * (1 - f);
     }
   }
   const q = nw - p;
   let below = 0;
   let u = 0;
   for (let l = 0; l < c.levels; l++) {
-    u += (pos[l] as number) * (below + 0.5 * (neg[l] as number));
-    below += neg[l] as number;
+    const neg = hist[2 * l] as number;
+    u += (hist[2 * l + 1] as number) * (below + 0.5 * neg);
+    below += neg;
   }
-  const pre = aided ? 'aided_' : 'unaided_';
-  out[IDX[`${pre}accuracy`]] = nw > 0 ? correct / nw : Number.NaN;
-  out[IDX[`${pre}sensitivity`]] = p > 0 ? tp / p : Number.NaN;
-  out[IDX[`${pre}specificity`]] = q > 0 ? tn / q : Number.NaN;
-  out[IDX[`${pre}auc`]] = p > 0 && q > 0 ? u / (p * q) : Number.NaN;
+  out[aided ? IDX.aided_accuracy : IDX.unaided_accuracy] = nw > 0 ? correct / nw : Number.NaN;
+  out[aided ? IDX.aided_sensitivity : IDX.unaided_sensitivity] = p > 0 ? tp / p : Number.NaN;
+  out[aided ? IDX.aided_specificity : IDX.unaided_specificity] = q > 0 ? tn / q : Number.NaN;
+  out[aided ? IDX.aided_auc : IDX.unaided_auc] = p > 0 && q > 0 ? u / (p * q) : Number.NaN;
   if (aided) {
     out[IDX.agreement] = ai > 0 ? agree / ai : Number.NaN;
     out[IDX.overreliance] = wrong > 0 ? fw / wrong : Number.NaN;
@@ -119,10 +126,10 @@ const condFigures = (c: Cond, w: Int32Array, pos: Float64Array, neg: Float64Arra
 
 type ReaderConds = { unaided: Cond | null; aided: Cond | null };
 
-const readerFigures = (r: ReaderConds, w: Int32Array, pos: Float64Array, neg: Float64Array, out: Float64Array): void => {
+const readerFigures = (r: ReaderConds, w: Int32Array, hist: Int32Array, kinds: Int32Array, out: Float64Array): void => {
   out.fill(Number.NaN);
-  if (r.unaided) condFigures(r.unaided, w, pos, neg, out, false);
-  if (r.aided) condFigures(r.aided, w, pos, neg, out, true);
+  if (r.unaided) condFigures(r.unaided, w, hist, kinds, out, false);
+  if (r.aided) condFigures(r.aided, w, hist, kinds, out, true);
   out[IDX.accuracy_difference] = (out[IDX.aided_accuracy] as number) - (out[IDX.unaided_accuracy] as number);
   out[IDX.auc_difference] = (out[IDX.aided_auc] as number) - (out[IDX.unaided_auc] as number);
 };
@@ -163,8 +170,8 @@ export const readerAveragedOf = (cols: ReadColumns, all: Int32Array, perReader: 
   const C = cases.count;
   let maxLevels = 1;
   for (const r of readers) maxLevels = Math.max(maxLevels, r.unaided?.levels ?? 0, r.aided?.levels ?? 0);
-  const pos = new Float64Array(maxLevels);
-  const neg = new Float64Array(maxLevels);
+  const hist = new Int32Array(2 * maxLevels);
+  const kinds = new Int32Array(32);
   const one = new Float64Array(F);
   const sum = new Float64Array(F);
   const cnt = new Int32Array(F);
@@ -174,7 +181,7 @@ export const readerAveragedOf = (cols: ReadColumns, all: Int32Array, perReader: 
     sum.fill(0);
     cnt.fill(0);
     for (let i = 0; i < R; i++) {
-      readerFigures(readers[pick(i)] as ReaderConds, w, pos, neg, one);
+      readerFigures(readers[pick(i)] as ReaderConds, w, hist, kinds, one);
       for (let f = 0; f < F; f++) {
         const v = one[f] as number;
         if (!Number.isNaN(v)) {

@@ -8,8 +8,8 @@ import type { AnalysisReport, GroupFinding, ReaderEntry } from '../analysis/repo
 import type { Sections } from '../analysis/sections';
 import type { WeightOfAdvice } from '../analysis/weight-of-advice';
 import type { Proportion } from '../analysis/wilson';
-import { lineCount, parseReadLogBytesInto, ReadLogError } from '../io/read-log-parse';
-import { columnsBuilder } from '../analysis/read-columns';
+import { parseReadLogColumns, ReadLogError } from '../io/read-log-parse';
+import { columnsOfLog } from '../analysis/read-columns';
 import { CliError } from './cli-error';
 import { readAnalyzeInput } from './analyze-input';
 
@@ -61,11 +61,8 @@ export const runAnalyze = async (args: string[]): Promise<number> => {
   let cols;
   try {
     // the bytes are not kept: only the parse holds them, and only until its last line; each read
-    // goes straight into typed columns, so no object per read outlives its line
-    const bytes = await readAnalyzeInput(file);
-    const columns = columnsBuilder(lineCount(bytes));
-    parseReadLogBytesInto(bytes, columns.push);
-    cols = columns.done();
+    // is typed from the bytes straight into columns, so no object or string per read is made
+    cols = columnsOfLog(parseReadLogColumns(await readAnalyzeInput(file)));
   } catch (error) {
     if (error instanceof ReadLogError) {
       throw new CliError(`${file}:${error.line}: ${error.column === null ? '' : `column ${error.column}: `}${error.problem}`);

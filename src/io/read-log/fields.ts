@@ -55,6 +55,38 @@ const plainNumber = (raw: string): number => {
   return Number(raw);
 };
 
+// Powers of ten that doubles hold exactly (10^0 .. 10^22).
+const TEN_TO: number[] = Array.from({ length: 23 }, (_, k) => 10 ** k);
+
+/**
+ * The value of bytes[from, to) when it is [+-]digits[.digits] with 1 to 15 digits in all, else
+ * NaN (the caller then takes the cell's text through `number`). Equal to Number() of the text:
+ * the digits make a whole number below 2^53 and the divisor a power of ten below 10^23, both
+ * exact doubles, so the one division is correctly rounded, as Number() is (Clinger's fast path).
+ * Example: numberAt(ascii('-0.25'), 0, 5) → -0.25; numberAt(ascii('1e3'), 0, 3) → NaN.
+ */
+export const numberAt = (b: Uint8Array, from: number, to: number): number => {
+  let i = from;
+  const first = b[i];
+  const negative = first === 45;
+  if (negative || first === 43) i++;
+  let whole = 0;
+  let digits = 0;
+  let fraction = -1;
+  for (; i < to; i++) {
+    const d = (b[i] as number) - 48;
+    if (d >= 0 && d <= 9) {
+      whole = whole * 10 + d;
+      digits++;
+      if (fraction >= 0) fraction++;
+    } else if (d === -2 && fraction < 0) fraction = 0;
+    else return Number.NaN;
+  }
+  if (digits === 0 || digits > 15) return Number.NaN;
+  const v = fraction > 0 ? whole / (TEN_TO[fraction] as number) : whole;
+  return negative ? -v : v;
+};
+
 export const number = (raw: string, line: number, column: string, min: number, max: number, range: string): number => {
   let v = plainNumber(raw);
   if (v !== v) {
@@ -85,48 +117,64 @@ export const assistance = (raw: string, line: number, column: string): Assistanc
 
 // The shape ISO 8601 UTC times take in a log: YYYY-MM-DDTHH:MM, optionally :SS and a fraction,
 // then Z (the pattern /^(\d{4})-(\d{2})-(\d{2})T(\d{2}):(\d{2})(?::(\d{2})(\.\d+)?)?Z$/),
-// checked by character codes: a log has one such cell per read.
-const isDigit = (raw: string, i: number): boolean => {
-  const d = raw.charCodeAt(i) - 48;
+// checked by character codes on the cell's bytes: a log has one such cell per read.
+const isDigit = (b: Uint8Array, i: number): boolean => {
+  const d = (b[i] as number) - 48;
   return d >= 0 && d <= 9;
 };
-const digitsIn = (raw: string, from: number, to: number): boolean => {
-  for (let i = from; i < to; i++) if (!isDigit(raw, i)) return false;
+const digitsIn = (b: Uint8Array, from: number, to: number): boolean => {
+  for (let i = from; i < to; i++) if (!isDigit(b, i)) return false;
   return true;
 };
-const twoDigits = (raw: string, i: number): number => (raw.charCodeAt(i) - 48) * 10 + raw.charCodeAt(i + 1) - 48;
+const twoDigits = (b: Uint8Array, i: number): number => ((b[i] as number) - 48) * 10 + (b[i + 1] as number) - 48;
 
-// Whether YYYY-MM-DD is a real calendar day: Date.UTC rolls 2026-02-30 over to March 2 instead
-// of refusing it, so the day is checked against the date it makes. A log has few distinct days,
-// so the answers are kept (a bounded cache).
-const realDays = new Map<string, boolean>();
-const realDay = (day: string): boolean => {
-  const known = realDays.get(day);
+// Whether year-month-date is a real calendar day: Date.UTC rolls 2026-02-30 over to March 2
+// instead of refusing it, so the day is checked against the date it makes (and years 0-99, which
+// Date.UTC takes as 1900-1999, are refused). A log has few distinct days, so the answers are kept
+// (a bounded cache).
+const realDays = new Map<number, boolean>();
+const realDay = (year: number, month: number, date: number): boolean => {
+  const key = (year * 100 + month) * 100 + date;
+  const known = realDays.get(key);
   if (known !== undefined) return known;
-  const year = Number(day.slice(0, 4));
-  const month = Number(day.slice(5, 7));
-  const date = Number(day.slice(8, 10));
   const made = new Date(Date.UTC(year, month - 1, date));
   const real = made.getUTCFullYear() === year && made.getUTCMonth() === month - 1 && made.getUTCDate() === date;
   if (realDays.size >= 4096) realDays.clear();
-  realDays.set(day, real);
+  realDays.set(key, real);
   return real;
 };
 
-/** A real calendar time in the shape above: hours 0-23, minutes and seconds 0-59, a real day. */
-const realTime = (raw: string): boolean => {
-  const n = raw.length;
-  if (n < 17 || raw.charCodeAt(n - 1) !== 90 /* Z */) return false;
-  if (!digitsIn(raw, 0, 4) || raw.charCodeAt(4) !== 45 || !digitsIn(raw, 5, 7) || raw.charCodeAt(7) !== 45 || !digitsIn(raw, 8, 10)) return false;
-  if (raw.charCodeAt(10) !== 84 /* T */ || !digitsIn(raw, 11, 13) || raw.charCodeAt(13) !== 58 || !digitsIn(raw, 14, 16)) return false;
+/**
+ * Whether bytes[from, to) is a real calendar time in the shape above: hours 0-23, minutes and
+ * seconds 0-59, a real day. Example: realTimeAt(ascii('2026-01-31T09:15:00Z'), 0, 20) → true.
+ */
+export const realTimeAt = (b: Uint8Array, from: number, to: number): boolean => {
+  const n = to - from;
+  if (n < 17 || b[to - 1] !== 90 /* Z */) return false;
+  const o = from;
+  if (!digitsIn(b, o, o + 4) || b[o + 4] !== 45 || !digitsIn(b, o + 5, o + 7) || b[o + 7] !== 45 || !digitsIn(b, o + 8, o + 10)) return false;
+  if (b[o + 10] !== 84 /* T */ || !digitsIn(b, o + 11, o + 13) || b[o + 13] !== 58 || !digitsIn(b, o + 14, o + 16)) return false;
   let seconds = 0;
   if (n !== 17) {
-    if (n < 20 || raw.charCodeAt(16) !== 58 || !digitsIn(raw, 17, 19)) return false;
-    seconds = twoDigits(raw, 17);
-    if (n !== 20 && (n < 22 || raw.charCodeAt(19) !== 46 || !digitsIn(raw, 20, n - 1))) return false;
+    if (n < 20 || b[o + 16] !== 58 || !digitsIn(b, o + 17, o + 19)) return false;
+    seconds = twoDigits(b, o + 17);
+    if (n !== 20 && (n < 22 || b[o + 19] !== 46 || !digitsIn(b, o + 20, to - 1))) return false;
   }
-  if (twoDigits(raw, 11) > 23 || twoDigits(raw, 14) > 59 || seconds > 59) return false;
-  return realDay(raw.slice(0, 10));
+  if (twoDigits(b, o + 11) > 23 || twoDigits(b, o + 14) > 59 || seconds > 59) return false;
+  return realDay(twoDigits(b, o) * 100 + twoDigits(b, o + 2), twoDigits(b, o + 5), twoDigits(b, o + 8));
+};
+
+// realTimeAt on a cell's text: only plain ASCII can match, so its codes are the bytes
+let timeScratch = new Uint8Array(32);
+const realTime = (raw: string): boolean => {
+  const n = raw.length;
+  if (n > timeScratch.length) timeScratch = new Uint8Array(n);
+  for (let i = 0; i < n; i++) {
+    const c = raw.charCodeAt(i);
+    if (c > 127) return false;
+    timeScratch[i] = c;
+  }
+  return realTimeAt(timeScratch, 0, n);
 };
 
 export const isoUtc = (raw: string, line: number, column: string): string => {

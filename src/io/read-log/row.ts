@@ -104,11 +104,17 @@ export const parseRow = (cells: readonly string[], line: number, layout: RowLayo
     withdrawn: f.optionalBit(cellAt(cells, at.withdrawn), line, 'withdrawn') ?? 0,
     case_attributes,
   };
-  if (read.initial_ms !== null && read.initial_ms > read.total_ms) {
-    throw new ReadLogError(line, 'initial_ms', `must be at most total_ms (${read.total_ms}), got ${read.initial_ms}`);
-  }
+  if (read.initial_ms !== null && read.initial_ms > read.total_ms) throw initialAfterTotal(line, read.initial_ms, read.total_ms);
   return read;
 };
+
+/** The refusal of a read whose initial_ms exceeds its total_ms. */
+export const initialAfterTotal = (line: number, initialMs: number, totalMs: number): ReadLogError =>
+  new ReadLogError(line, 'initial_ms', `must be at most total_ms (${totalMs}), got ${initialMs}`);
+
+/** The refusal of a read repeating the one on line `earlier` (same reader, case, finding, period). */
+export const repeatedRead = (line: number, earlier: number): ReadLogError =>
+  new ReadLogError(line, 'case_id', `repeats the read of line ${earlier} (same reader, case, finding and period)`);
 
 /**
  * Remembers each read's line and answers, for a new read, the line of an earlier read with the

@@ -2,14 +2,14 @@
 // goldens written by the engine before the column-wise rewrite (issue 10). This is a regression
 // guard, not a correctness check: correctness is checked against outside sources in
 // test/reference/. Both entries are checked: analyzeReads on typed rows, and the CLI's path from
-// the CSV text (parse, then analyse).
+// the CSV text (parse, then analyse), by each parse.
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { analyzeColumns, analyzeReads } from '../../../../src/analysis/engine';
-import { columnsBuilder } from '../../../../src/analysis/read-columns';
+import { columnsBuilder, columnsOfLog } from '../../../../src/analysis/read-columns';
 import { readLogCsv } from '../../../../src/io/read-log-export';
-import { lineCount, parseReadLog, parseReadLogBytesInto } from '../../../../src/io/read-log-parse';
+import { lineCount, parseReadLog, parseReadLogBytesInto, parseReadLogColumns } from '../../../../src/io/read-log-parse';
 import { goldenLogs } from './golden-logs';
 
 const golden = (name: string): string => readFileSync(join(import.meta.dirname, `${name}.json`), 'utf8').trimEnd();
@@ -28,6 +28,14 @@ describe('analysis engine against its goldens', () => {
       const columns = columnsBuilder(lineCount(bytes));
       parseReadLogBytesInto(bytes, columns.push);
       expect(JSON.stringify(analyzeColumns(columns.done(), log.options))).toBe(golden(log.name));
+    });
+    it(`${log.name}: the CLI's path, CSV bytes typed cell by cell into columns, gives the golden report and the same columns`, () => {
+      const bytes = new TextEncoder().encode(readLogCsv(log.rows, log.attributes));
+      const cols = columnsOfLog(parseReadLogColumns(bytes));
+      const columns = columnsBuilder(lineCount(bytes));
+      parseReadLogBytesInto(bytes, columns.push);
+      expect(cols).toEqual(columns.done());
+      expect(JSON.stringify(analyzeColumns(cols, log.options))).toBe(golden(log.name));
     });
   }
 });
