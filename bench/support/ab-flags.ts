@@ -6,6 +6,7 @@
  * clock, so nothing attaches to the browser while it starts. Per launch: spawn to "DevTools
  * listening" (the browser process up), spawn to the page's navigation start, spawn to `ready`.
  * Run: npx tsx bench/support/ab-flags.ts DIST [rounds] [flag ...] (flags default to the set below).
+ * Two builds in the same app window, launcher flags only: npx tsx bench/support/ab-flags.ts DIST_A:DIST_B [rounds].
  */
 import { spawn, type ChildProcess } from 'node:child_process';
 import { rmSync } from 'node:fs';
@@ -17,8 +18,9 @@ import { CHROMIUM } from '../../test/e2e/support/chromium';
 import { benchProfileDir } from './app-under-test';
 import { machineNote } from './figures';
 
-const [dist, roundsText, ...given] = process.argv.slice(2);
-if (!dist) throw new Error('usage: ab-flags.ts DIST [rounds] [flag ...]');
+const [distArg, roundsText, ...given] = process.argv.slice(2);
+if (!distArg) throw new Error('usage: ab-flags.ts DIST [rounds] [flag ...] | DIST_A:DIST_B [rounds]');
+const [dist = distArg, distB] = distArg.split(':');
 const ROUNDS = Number(roundsText ?? 8);
 const EXTRA = given.length > 0 ? given : ['--disable-extensions', '--disable-features=Translate,MediaRouter', '--disable-default-apps'];
 
@@ -71,14 +73,16 @@ const launch = async (display: string, url: string, profileDir: string, extra: s
 };
 
 const xvfb = await startXvfb();
-const server = await startStaticServer({ root: dist });
-const sides = [{ name: 'launcher flags', extra: [] as string[] }, { name: `+ ${EXTRA.join(' ')}`, extra: EXTRA }]
+const servers = await Promise.all([dist, distB ?? dist].map((root) => startStaticServer({ root })));
+const sides = (distB === undefined
+  ? [{ name: 'launcher flags', extra: [] as string[], url: servers[0]?.url ?? '' }, { name: `+ ${EXTRA.join(' ')}`, extra: EXTRA, url: servers[0]?.url ?? '' }]
+  : [{ name: dist, extra: [] as string[], url: servers[0]?.url ?? '' }, { name: distB, extra: [] as string[], url: servers[1]?.url ?? '' }])
   .map((s) => ({ ...s, profile: benchProfileDir(), runs: [] as Run[] }));
 console.log(machineNote('start'));
 try {
-  for (const side of sides) await launch(xvfb.display, server.url, side.profile, side.extra); // demo set generated
+  for (const side of sides) await launch(xvfb.display, side.url, side.profile, side.extra); // demo set generated
   for (let round = 0; round < ROUNDS; round++) {
-    for (const side of round % 2 === 0 ? sides : [...sides].reverse()) side.runs.push(await launch(xvfb.display, server.url, side.profile, side.extra));
+    for (const side of round % 2 === 0 ? sides : [...sides].reverse()) side.runs.push(await launch(xvfb.display, side.url, side.profile, side.extra));
   }
   for (const side of sides) {
     const med = (pick: (r: Run) => number) => Math.round(median(side.runs.map(pick)));
@@ -88,11 +92,11 @@ try {
   const [a, b] = sides;
   if (a && b) {
     const diff = (pick: (r: Run) => number) => Math.round(median(a.runs.map((r, i) => pick(r) - pick(b.runs[i] ?? r))));
-    console.log(`paired (launcher flags minus extra flags), median of ${ROUNDS} rounds: browser up ${diff((r) => r.upMs)} | navigation start ${diff((r) => r.navMs)} | ready ${diff((r) => r.readyMs)} ms`);
+    console.log(`paired (${a.name} minus ${b.name}), median of ${ROUNDS} rounds: browser up ${diff((r) => r.upMs)} | navigation start ${diff((r) => r.navMs)} | ready ${diff((r) => r.readyMs)} ms`);
   }
   console.log(machineNote('end'));
 } finally {
-  await server.close();
+  for (const server of servers) await server.close();
   xvfb.stop();
   for (const side of sides) rmSync(side.profile, { recursive: true, force: true });
 }
