@@ -40,6 +40,12 @@ try {
     const med = (pick: (l: Launch) => number | null) => Math.round(median(side.runs.map((l) => pick(l) ?? Number.NaN)));
     console.log(`${side.root}: wall ${med((l) => l.wallMs)} | browser start ${med((l) => l.browserStartMs)} | scripts loaded ${med((l) => l.breakdown.scriptsLoadedMs)} (${med((l) => l.breakdown.scriptBytesFromNetwork)} B from network) | entry run ${med((l) => l.breakdown.domContentLoadedMs)} | db open called ${med((l) => l.breakdown.dbOpenCalledMs)} | db opened ${med((l) => l.breakdown.dbOpenedMs)} | mounted ${med((l) => l.mountedMs)} | ready ${med((l) => l.readyMs)} (page ms, medians of ${side.runs.length})`);
   }
+  // launch by launch: each round's two launches ran back to back, so their difference is the least noisy figure
+  const [a, b] = sides;
+  if (a && b) {
+    const diff = (pick: (l: Launch) => number | null) => Math.round(median(a.runs.map((l, i) => (pick(l) ?? Number.NaN) - (pick(b.runs[i] ?? l) ?? Number.NaN))));
+    console.log(`paired (${a.root} minus ${b.root}), median of ${ROUNDS} rounds: wall ${diff((l) => l.wallMs)} | db opened ${diff((l) => l.breakdown.dbOpenedMs)} | mounted ${diff((l) => l.mountedMs)} | ready ${diff((l) => l.readyMs)} ms`);
+  }
   console.log(machineNote('end'));
 } finally {
   for (const side of sides) { await side.server.close(); removeProfileDir(side.profile); }

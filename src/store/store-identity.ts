@@ -17,18 +17,33 @@ export type RememberedStore = { id: string; createdAt: string; lastSeen: string 
 /** This database's identity, and the earlier database it replaced if its notice is not read yet. */
 export type StoreIdentity = { id: string; createdAt: string; unreadLoss: LostStore | null };
 
-export const storeIdentity = (db: HeedDb, remembered: RememberedStore | null, now: () => Date = () => new Date()): Promise<StoreIdentity> =>
-  db.transaction('rw', db.settings, async () => {
+/** The earlier database `remembered` names is gone, and `record` does not say so yet. */
+const lossToRecord = (record: IdentityRecord, remembered: RememberedStore | null): remembered is RememberedStore =>
+  remembered !== null && remembered.id !== record.id && record.lost?.id !== remembered.id;
+
+const answer = (record: IdentityRecord): StoreIdentity =>
+  ({ id: record.id, createdAt: record.createdAt, unreadLoss: record.lost !== undefined && !record.lost.read ? record.lost : null });
+
+/**
+ * Usually (every start but the first, and no loss to record) one read-only look, which does not
+ * wait for or hold up the start screen's other reads; otherwise the read-write transaction reads
+ * the record again and decides, so a second window doing the same at once cannot record twice.
+ */
+export const storeIdentity = async (db: HeedDb, remembered: RememberedStore | null, now: () => Date = () => new Date()): Promise<StoreIdentity> => {
+  const seen = await db.settings.get('store-identity');
+  if (seen?.key === 'store-identity' && !lossToRecord(seen, remembered)) return answer(seen);
+  return db.transaction('rw', db.settings, async () => {
     const found = await db.settings.get('store-identity');
     const record: IdentityRecord = found?.key === 'store-identity' ? found : { key: 'store-identity', id: crypto.randomUUID(), createdAt: now().toISOString() };
-    const gone = remembered !== null && remembered.id !== record.id && record.lost?.id !== remembered.id;
+    const gone = lossToRecord(record, remembered);
     const lost: LostStore | undefined = gone
       ? { id: remembered.id, createdAt: remembered.createdAt, lastSeen: remembered.lastSeen, noticedAt: now().toISOString(), read: false }
       : record.lost;
     const next: IdentityRecord = lost === undefined ? record : { ...record, lost };
     if (found === undefined || gone) await db.settings.put(next);
-    return { id: record.id, createdAt: record.createdAt, unreadLoss: lost !== undefined && !lost.read ? lost : null };
+    return answer(next);
   });
+};
 
 /** The coordinator has read the notice of a lost database. */
 export const markLossRead = (db: HeedDb): Promise<void> =>

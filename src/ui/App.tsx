@@ -1,10 +1,11 @@
 import { lazy, Suspense } from 'react';
 import { HomeScreen } from './screens/HomeScreen';
-import { ReadingScreen } from './reading/ReadingScreen';
+import { loadReading } from './reading/load-reading';
 
 // The start screen's bundle holds only what it shows: every other screen (and with them results,
-// reports, plots and the planner) is loaded when first opened. Reading stays in the first bundle,
-// so a resumed session opens without a second fetch.
+// reports, plots and the planner) is loaded when first opened. The reading view too: the start
+// screen (when a session can be resumed) and the study screen preload it (reading/load-reading.ts).
+const ReadView = lazy(async () => ({ default: (await loadReading()).ReadView }));
 const NewStudyScreen = lazy(async () => ({ default: (await import('./screens/NewStudyScreen')).NewStudyScreen }));
 const StudyScreen = lazy(async () => ({ default: (await import('./screens/StudyScreen')).StudyScreen }));
 const ResultsScreen = lazy(async () => ({ default: (await import('./screens/ResultsScreen')).ResultsScreen }));
@@ -14,7 +15,6 @@ const AuditLogScreen = lazy(async () => ({ default: (await import('./screens/Aud
 const ReaderReportScreen = lazy(async () => ({ default: (await import('./report/ReaderReportScreen')).ReaderReportScreen }));
 import { actions, useAppState } from './state/app-state';
 import { CoordinatorGate } from './lock/CoordinatorGate';
-import { SingleWindowSession } from './reading/SingleWindowSession';
 
 export const App = () => {
   const { screen, notice } = useAppState();
@@ -33,9 +33,7 @@ export const App = () => {
       {screen.name === 'study' && <StudyScreen studyId={screen.studyId} />}
       {screen.name === 'results' && <ResultsScreen studyId={screen.studyId} />}
       {screen.name === 'read' && (
-        <SingleWindowSession sessionId={screen.sessionId} onHandBack={() => actions.handOver(screen.studyId)}>
-          <ReadingScreen studyId={screen.studyId} sessionId={screen.sessionId} notice={notice} />
-        </SingleWindowSession>
+        <ReadView studyId={screen.studyId} sessionId={screen.sessionId} notice={notice} onHandBack={() => actions.handOver(screen.studyId)} />
       )}
       {screen.name === 'handover' && <HandoverScreen studyId={screen.studyId} readerId={screen.readerId} />}
       {screen.name === 'edit-study' && <EditStudyScreen studyId={screen.studyId} />}

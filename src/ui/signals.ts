@@ -9,5 +9,8 @@ export const signal = (name: SignalName, detail: Record<string, unknown> = {}): 
   const attribute = `data-heed-${name}`;
   const count = Number(document.body.getAttribute(attribute) ?? 0) + 1;
   document.body.setAttribute(attribute, String(count));
+  // the first of each kind is also a user-timing mark, so a launch can be timed (and seen in a
+  // performance trace) without a script injected into the page (bench/support/ab-flags.ts)
+  if (count === 1) performance.mark(`heed-${name}`);
   window.dispatchEvent(new CustomEvent(`heed:${name}`, { detail: { ...detail, count, at: performance.now() } }));
 };

@@ -4,6 +4,7 @@ import { CautionLine } from '../components/CautionLine';
 import { useDb } from '../db-context';
 import { LockSetupSlot } from '../lock/lock-setup-slot';
 import { signal } from '../signals';
+import { preloadReading } from '../reading/load-reading';
 import { homeAtLaunch } from '../startup';
 import { actions } from '../state/app-state';
 import { useAsync } from '../use-async';
@@ -19,7 +20,10 @@ export const HomeScreen = () => {
   const home = useAsync(useCallback(() => homeAtLaunch(db), [db]));
 
   useEffect(() => {
-    if (home.value) signal('ready', { screen: 'home' });
+    if (!home.value) return;
+    signal('ready', { screen: 'home' });
+    // a session can be resumed from here: fetch the reading view now, after the screen is shown
+    if (home.value.unfinished.length > 0) preloadReading();
   }, [home.value]);
 
   return (

@@ -1,5 +1,5 @@
 /** Readers with their sequence and progress per period; opening a period, or resuming it. */
-import { useState } from 'react';
+import { useEffect, useState } from 'react';
 import type { StoredStudy } from '../../store/records';
 import { openPeriod } from '../../store/study-service';
 import { InputError } from '../../store/input-error';
@@ -7,6 +7,7 @@ import { useDb } from '../db-context';
 import { actions } from '../state/app-state';
 import { when } from '../../core/washout';
 import { periodWords } from '../../core/design-summary';
+import { preloadReading } from '../reading/load-reading';
 import { ReaderActions } from './ReaderActions';
 import type { PeriodProgress, ReaderProgress } from './study-progress';
 
@@ -28,6 +29,8 @@ const reportCell = (studyId: string, row: ReaderProgress) => {
 export const ReaderTable = ({ study, progress, onChanged }: Props) => {
   const db = useDb();
   const [early, setEarly] = useState<EarlyRequest | null>(null);
+  // reading starts from this table: fetch the reading view while the coordinator looks at it
+  useEffect(preloadReading, []);
   const [reason, setReason] = useState('');
   const [by, setBy] = useState('');
   const [problem, setProblem] = useState<string | null>(null);

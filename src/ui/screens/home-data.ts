@@ -18,10 +18,13 @@ export type HomeData = {
 };
 
 export const loadHome = async (db: HeedDb): Promise<HomeData> => {
+  // the lists are asked for first: the first localStorage read of a page waits for the browser to
+  // load it, and the database can work meanwhile
+  const lists = Promise.all([listCaseSets(db), listStudies(db), unfinishedSessions(db)]);
   // the database this window used last, read before this one's identity is looked at or made
   const storage = originStorage();
   const remembered = storage === null ? null : rememberedStore(storage);
-  const [listed, studies, unfinished, identity] = await Promise.all([listCaseSets(db), listStudies(db), unfinishedSessions(db), storeIdentity(db, remembered)]);
+  const [[listed, studies, unfinished], identity] = await Promise.all([lists, storeIdentity(db, remembered)]);
   if (storage !== null) rememberStore(storage, identity);
   const storeLoss = identity.unreadLoss;
   // the demo set is generated once, on first launch; a relaunch only sees it in the list

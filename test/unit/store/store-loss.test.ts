@@ -37,6 +37,25 @@ describe('the database identity', () => {
     expect(first).toMatchObject({ createdAt: '2026-03-01T08:00:00.000Z', unreadLoss: null });
     expect(await storeIdentity(db, null)).toEqual(first);
   });
+
+  it('is only read, never written, at a start with nothing to record', async () => {
+    // a read-write transaction waits for the start screen's other reads of its stores and holds them up;
+    // Dexie binds the backend's transaction() when it opens, so the spy is set before that
+    const opened = vi.spyOn(IDBDatabase.prototype, 'transaction');
+    try {
+      const db = fresh();
+      const storage = memoryStorage();
+      await start(db, storage, '2026-03-01T08:00:00Z');
+      expect(opened.mock.calls.map((call) => call[1])).toContain('readwrite');
+      const before = opened.mock.calls.length;
+      expect((await start(db, storage, '2026-03-02T08:00:00Z')).unreadLoss).toBeNull();
+      const modes = opened.mock.calls.slice(before).map((call) => call[1] ?? 'readonly');
+      expect(modes.length).toBeGreaterThan(0);
+      expect(modes).not.toContain('readwrite');
+    } finally {
+      opened.mockRestore();
+    }
+  });
 });
 
 describe('noticing a lost database', () => {

@@ -1,0 +1,80 @@
+// The early open of the database (src/store/warm-open.ts), run by the page before the app's
+// bundle: it must never create, change or hold on to the database the app then opens.
+import 'fake-indexeddb/auto';
+import { DB_NAME, openHeedDb } from '../../../src/store/db';
+import type { StoredSetting } from '../../../src/store/records';
+import { WARM_DB_NAME, warmOpen } from '../../../src/store/warm-open';
+
+let n = 0;
+const fresh = (): string => `heed-warm-${process.pid}-${++n}`;
+const identity = (id: string): StoredSetting => ({ key: 'store-identity', id, createdAt: '2026-03-01T08:00:00.000Z' });
+const listed = async (name: string) => (await indexedDB.databases()).find((d) => d.name === name);
+
+/** Deletes a database; fails when an open connection blocks the deletion. */
+const deleteUnblocked = (name: string): Promise<void> => new Promise((resolve, reject) => {
+  const request = indexedDB.deleteDatabase(name);
+  request.onblocked = () => reject(new Error(`deleting ${name} was blocked by an open connection`));
+  request.onsuccess = () => resolve();
+  request.onerror = () => reject(request.error ?? new Error('delete failed'));
+});
+
+describe('the early open of the database', () => {
+  it('opens the database the app opens', () => {
+    expect(WARM_DB_NAME).toBe(DB_NAME);
+  });
+
+  it('creates nothing when there is no database yet, and the app then makes it as usual', async () => {
+    const name = fresh();
+    expect(await warmOpen(indexedDB, name)).toBe('missing');
+    expect(await listed(name)).toBeUndefined();
+    const db = openHeedDb(name);
+    await db.settings.put(identity('x'));
+    expect(db.verno).toBe(4);
+    expect(db.tables.map((t) => t.name).sort()).toEqual(['caseSets', 'events', 'images', 'readers', 'reads', 'sessions', 'settings', 'studies']);
+    db.close();
+  });
+
+  it("on a first launch, started together with the app's own open, leaves the app a whole database", async () => {
+    const name = fresh();
+    const early = warmOpen(indexedDB, name);
+    const db = openHeedDb(name);
+    expect(await db.caseSets.count()).toBe(0);
+    expect(await early).toBe('missing');
+    expect(db.tables).toHaveLength(8);
+    db.close();
+  });
+
+  it('lets go of an existing database: its data stays, and it blocks no version change or deletion', async () => {
+    const name = fresh();
+    const before = openHeedDb(name);
+    await before.settings.put(identity('kept'));
+    before.close();
+    expect(await warmOpen(indexedDB, name)).toBe('opened');
+    const after = openHeedDb(name);
+    expect(await after.settings.get('store-identity')).toMatchObject({ id: 'kept' });
+    after.close();
+    await deleteUnblocked(name);
+    expect(await listed(name)).toBeUndefined();
+  });
+
+  it("does not hold up the app's upgrade of an older database", async () => {
+    const name = fresh();
+    // a version-1 database (Dexie stores version n as n * 10)
+    await new Promise<void>((resolve, reject) => {
+      const request = indexedDB.open(name, 10);
+      request.onupgradeneeded = () => { request.result.createObjectStore('settings', { keyPath: 'key' }); };
+      request.onsuccess = () => { request.result.close(); resolve(); };
+      request.onerror = () => reject(request.error ?? new Error('open failed'));
+    });
+    const early = warmOpen(indexedDB, name);
+    const db = openHeedDb(name);
+    await db.open();
+    expect(await early).toBe('opened');
+    expect(db.verno).toBe(4);
+    db.close();
+  });
+
+  it('says so when there is no IndexedDB, without throwing', async () => {
+    expect(await warmOpen(undefined)).toBe('refused');
+  });
+});
