@@ -41,7 +41,76 @@ export const placements = (positives: ArrayLike<number>, negatives: ArrayLike<nu
 // Small samples: Tz[i] − Tx[i] is the number of negatives below positive i plus half those tied
 // with it (and likewise for negatives), so one sweep over the distinct values of both sorted
 // classes gives every placement; each value then finds its distinct value by binary search.
+// Whole-number scores in a short range (confidences 0..100, ratings) skip the sorts and searches:
+// a count per value, swept in value order, gives the same whole numbers, so the same placements.
 const placementsByCounts = (x: Float64Array, y: Float64Array): Placements => {
+  const low = Math.min(lowestWhole(x), lowestWhole(y));
+  const high = Math.max(highestWhole(x), highestWhole(y));
+  if (high - low < SLOT_SPAN) return placementsBySlots(x, y, low, high - low + 1);
+  return placementsBySort(x, y);
+};
+
+/** Scores spanning fewer whole numbers than this (and all whole, within ±2^31) are counted per value. */
+export const SLOT_SPAN = 4096;
+
+// the smallest value when every one is a whole number within ±2^31, else NaN (so no slot path)
+const lowestWhole = (v: Float64Array): number => {
+  let low = Infinity;
+  for (let k = 0; k < v.length; k++) {
+    const a = v[k] as number;
+    if (!(Number.isInteger(a) && a >= -2147483648 && a <= 2147483647)) return Number.NaN;
+    if (a < low) low = a;
+  }
+  return low;
+};
+
+const highestWhole = (v: Float64Array): number => {
+  let high = -Infinity;
+  for (let k = 0; k < v.length; k++) if ((v[k] as number) > high) high = v[k] as number;
+  return high;
+};
+
+const countSlots = (v: Float64Array, low: number, count: Int32Array): void => {
+  for (let k = 0; k < v.length; k++) {
+    const s = (v[k] as number) - low;
+    count[s] = (count[s] as number) + 1;
+  }
+};
+
+const fillBySlot = (v: Float64Array, low: number, bySlot: Float64Array, out: Float64Array): void => {
+  for (let k = 0; k < v.length; k++) out[k] = bySlot[(v[k] as number) - low] as number;
+};
+
+const placementsBySlots = (x: Float64Array, y: Float64Array, low: number, span: number): Placements => {
+  const m = x.length;
+  const n = y.length;
+  const countX = new Int32Array(span);
+  const countY = new Int32Array(span);
+  countSlots(x, low, countX);
+  countSlots(y, low, countY);
+  const negBelowHalf = new Float64Array(span);
+  const posAboveHalf = new Float64Array(span);
+  // i, j: positives and negatives at or below the current value, as in the sorted sweep below
+  let i = 0;
+  let j = 0;
+  for (let s = 0; s < span; s++) {
+    const i0 = i;
+    const j0 = j;
+    i += countX[s] as number;
+    j += countY[s] as number;
+    negBelowHalf[s] = (j0 + (j - j0) / 2) / n;
+    posAboveHalf[s] = (m - i + (i - i0) / 2) / m;
+  }
+  const v10 = new Float64Array(m);
+  const v01 = new Float64Array(n);
+  fillBySlot(x, low, negBelowHalf, v10);
+  fillBySlot(y, low, posAboveHalf, v01);
+  let sum = 0;
+  for (let k = 0; k < m; k++) sum += v10[k] as number;
+  return { v10, v01, auc: sum / m };
+};
+
+const placementsBySort = (x: Float64Array, y: Float64Array): Placements => {
   const m = x.length;
   const n = y.length;
   const xs = x.slice().sort();
@@ -66,39 +135,14 @@ const placementsByCounts = (x: Float64Array, y: Float64Array): Placements => {
   const distinct = values.subarray(0, d);
   const v10 = new Float64Array(m);
   const v01 = new Float64Array(n);
-  const slot = slotTable(distinct);
-  if (slot !== null) {
-    // whole-number scores in a short range (ratings, confidences 0..100): each value's place
-    // among the distinct values read from a table instead of a binary search (the same place)
-    const low = distinct[0] as number;
-    fillBySlot(x, low, slot, negBelowHalf, v10);
-    fillBySlot(y, low, slot, posAboveHalf, v01);
-  } else {
-    for (let k = 0; k < m; k++) v10[k] = negBelowHalf[lowerBound(distinct, x[k] as number)] as number;
-    for (let k = 0; k < n; k++) v01[k] = posAboveHalf[lowerBound(distinct, y[k] as number)] as number;
-  }
   let sum = 0;
-  for (let k = 0; k < m; k++) sum += v10[k] as number;
+  for (let k = 0; k < m; k++) {
+    const p = negBelowHalf[lowerBound(distinct, x[k] as number)] as number;
+    v10[k] = p;
+    sum += p;
+  }
+  for (let k = 0; k < n; k++) v01[k] = posAboveHalf[lowerBound(distinct, y[k] as number)] as number;
   return { v10, v01, auc: sum / m };
-};
-
-// For ascending distinct whole numbers spanning fewer than SLOT_SPAN values: table[v − first] is
-// the place of v among them. Else null (other scores keep the binary search).
-const slotTable = (distinct: Float64Array): Int32Array | null => {
-  const d = distinct.length;
-  const low = distinct[0] as number;
-  const span = (distinct[d - 1] as number) - low + 1;
-  if (!(span <= SLOT_SPAN)) return null;
-  for (let i = 0; i < d; i++) if (!Number.isInteger(distinct[i] as number)) return null;
-  const table = new Int32Array(span);
-  for (let i = 0; i < d; i++) table[(distinct[i] as number) - low] = i;
-  return table;
-};
-
-const SLOT_SPAN = 4096;
-
-const fillBySlot = (values: Float64Array, low: number, slot: Int32Array, byPlace: Float64Array, out: Float64Array): void => {
-  for (let k = 0; k < values.length; k++) out[k] = byPlace[slot[(values[k] as number) - low] as number] as number;
 };
 
 /** From this many scores placements come from midranks (radix sorts), below it from counts; the two round differently. */

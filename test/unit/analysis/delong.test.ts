@@ -63,9 +63,9 @@ describe('placements on large samples (radix midrank path)', () => {
   });
 });
 
-describe('placements of whole-number scores (place read from a table)', () => {
+describe('placements of whole-number scores (counted per value, no sort)', () => {
   // Placement values depend only on the order and ties of the scores, so the same scores moved
-  // by ½ (no longer whole: the binary-search path) or spread past the table's span must give the
+  // by ½ (no longer whole: the sorted path) or spread past SLOT_SPAN must give the
   // very same bits, and pair counting the same values.
   const pos = Array.from({ length: 310 }, (_, i) => ((i * 7919) % 101) - 3);
   const neg = Array.from({ length: 690 }, (_, i) => ((i * 104729) % 89) - 0);
