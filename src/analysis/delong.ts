@@ -41,44 +41,48 @@ export const placements = (positives: ArrayLike<number>, negatives: ArrayLike<nu
 // Small samples: Tz[i] − Tx[i] is the number of negatives below positive i plus half those tied
 // with it (and likewise for negatives), so one sweep over the distinct values of both sorted
 // classes gives every placement; each value then finds its distinct value by binary search.
-// Whole-number scores in a short range (confidences 0..100, ratings) skip the sorts and searches:
-// a count per value, swept in value order, gives the same whole numbers, so the same placements.
+// Scores that are whole or half numbers in a short range (ratings, percents, the derived score
+// 50 ± confidence/2) skip the sorts and searches: a count per value, swept in value order, gives
+// the same whole numbers of cases below and tied, so the same placements to the last bit.
 const placementsByCounts = (x: Float64Array, y: Float64Array): Placements => {
-  const low = Math.min(lowestWhole(x), lowestWhole(y));
-  const high = Math.max(highestWhole(x), highestWhole(y));
+  const low = Math.min(lowestSlot(x), lowestSlot(y));
+  const high = Math.max(highestSlot(x), highestSlot(y));
   if (high - low < SLOT_SPAN) return placementsBySlots(x, y, low, high - low + 1);
   return placementsBySort(x, y);
 };
 
-/** Scores spanning fewer whole numbers than this (and all whole, within ±2^31) are counted per value. */
+/**
+ * Scores whose doubles (2·score, exact) are whole numbers within ±2^31 spanning fewer than this
+ * many are counted per value (slot 2·score − the lowest 2·score); others are sorted.
+ */
 export const SLOT_SPAN = 4096;
 
-// the smallest value when every one is a whole number within ±2^31, else NaN (so no slot path)
-const lowestWhole = (v: Float64Array): number => {
+// the smallest 2·value when every 2·value is a whole number within ±2^31, else NaN (no slot path)
+const lowestSlot = (v: Float64Array): number => {
   let low = Infinity;
   for (let k = 0; k < v.length; k++) {
-    const a = v[k] as number;
+    const a = 2 * (v[k] as number);
     if (!(Number.isInteger(a) && a >= -2147483648 && a <= 2147483647)) return Number.NaN;
     if (a < low) low = a;
   }
   return low;
 };
 
-const highestWhole = (v: Float64Array): number => {
+const highestSlot = (v: Float64Array): number => {
   let high = -Infinity;
-  for (let k = 0; k < v.length; k++) if ((v[k] as number) > high) high = v[k] as number;
+  for (let k = 0; k < v.length; k++) if (2 * (v[k] as number) > high) high = 2 * (v[k] as number);
   return high;
 };
 
 const countSlots = (v: Float64Array, low: number, count: Int32Array): void => {
   for (let k = 0; k < v.length; k++) {
-    const s = (v[k] as number) - low;
+    const s = 2 * (v[k] as number) - low;
     count[s] = (count[s] as number) + 1;
   }
 };
 
 const fillBySlot = (v: Float64Array, low: number, bySlot: Float64Array, out: Float64Array): void => {
-  for (let k = 0; k < v.length; k++) out[k] = bySlot[(v[k] as number) - low] as number;
+  for (let k = 0; k < v.length; k++) out[k] = bySlot[2 * (v[k] as number) - low] as number;
 };
 
 const placementsBySlots = (x: Float64Array, y: Float64Array, low: number, span: number): Placements => {
