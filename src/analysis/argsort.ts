@@ -1,12 +1,18 @@
+import { slotArgsort } from './slot-argsort';
+
 /**
  * Stable ascending argsort of finite doubles: perm[k] is the index of the k-th smallest value.
  * Large arrays use an LSD radix sort on the IEEE-754 bits (flipped so unsigned order matches
  * numeric order; 16-bit digits, digits shared by every key skipped), O(n); small arrays a
- * comparison sort. −0 sorts before +0; callers that compare with === treat them as equal runs.
+ * comparison sort; large arrays of whole or half numbers in a short range are counted instead
+ * (slot-argsort.ts: the same permutation). −0 sorts before +0; callers that compare with ===
+ * treat them as equal runs.
  * Example: argsort(Float64Array.of(3, 1, 2)) → [1, 2, 0].
  */
 export const argsort = (values: Float64Array): Uint32Array => {
   const n = values.length;
+  const counted = n < RADIX_MIN ? null : slotArgsort(values);
+  if (counted !== null) return counted;
   const perm = new Uint32Array(n);
   for (let i = 0; i < n; i++) perm[i] = i;
   if (n < RADIX_MIN) return perm.sort((a, b) => (values[a] as number) - (values[b] as number) || a - b);

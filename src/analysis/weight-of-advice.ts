@@ -1,4 +1,4 @@
-import { quantile } from './quantile';
+import { quantileBySelection } from './quantile-select';
 
 export type WeightOfAdvice = { n: number; mean: number | null; median: number | null };
 
@@ -47,5 +47,5 @@ const weightOfAdviceForm = (form: WoaForm, final: ArrayLike<number>, initial: Ar
     ws.push(Math.min(1, Math.max(0, w)));
   }
   if (ws.length === 0) return { n: 0, mean: null, median: null };
-  return { n: ws.length, mean: ws.reduce((a, b) => a + b, 0) / ws.length, median: quantile(ws, 0.5) };
+  return { n: ws.length, mean: ws.reduce((a, b) => a + b, 0) / ws.length, median: quantileBySelection(ws, 0.5) };
 };

@@ -62,3 +62,30 @@ describe('placements on large samples (radix midrank path)', () => {
     expect(p.auc).toBeCloseTo(p.v01.reduce((a, b) => a + b, 0) / neg.length, 12);
   });
 });
+
+describe('placements of whole-number scores (counted per value, no sort)', () => {
+  // Placement values depend only on the order and ties of the scores, so the same scores moved
+  // by ½ (half numbers: counted too), by ¼ (the sorted path) or spread past SLOT_SPAN (sorted)
+  // must give the very same bits, and pair counting the same values.
+  const pos = Array.from({ length: 310 }, (_, i) => ((i * 7919) % 101) - 3);
+  const neg = Array.from({ length: 690 }, (_, i) => ((i * 104729) % 89) - 0);
+  it('equal bits to the binary-search path and to pair counting', () => {
+    const p = placements(pos, neg);
+    const half = placements(pos.map((v) => v + 0.5), neg.map((v) => v + 0.5));
+    const quarter = placements(pos.map((v) => v + 0.25), neg.map((v) => v + 0.25));
+    const spread = placements(pos.map((v) => v * 1000), neg.map((v) => v * 1000));
+    for (const q of [half, quarter, spread]) {
+      expect(Array.from(q.v10)).toEqual(Array.from(p.v10));
+      expect(Array.from(q.v01)).toEqual(Array.from(p.v01));
+      expect(q.auc).toBe(p.auc);
+    }
+    const b = brute(pos, neg);
+    expect(Array.from(p.v10)).toEqual(b.v10.map((v) => expect.closeTo(v, 12)));
+    expect(Array.from(p.v01)).toEqual(b.v01.map((v) => expect.closeTo(v, 12)));
+  });
+  it('treats −0 and +0 as one value', () => {
+    const p = placements([-0, 0, 2], [0, -0, 1.5]);
+    expect(Array.from(p.v10)).toEqual([1 / 3, 1 / 3, 1]);
+    expect(Array.from(p.v01)).toEqual([2 / 3, 2 / 3, 1 / 3]);
+  });
+});

@@ -9,6 +9,30 @@ describe('partition', () => {
     const key = Int32Array.of(0, 1, 0, 2, 1);
     expect(partition(Int32Array.of(4, 3, 2, 1, 0), key, 3).map((p) => [...p])).toEqual([[2, 0], [4, 1], [3]]);
   });
+
+  it('partitionReads gives each order of each part exactly as filtering that order by key would', () => {
+    // 600 rows, a pseudo-random key of 7 values (one never used) and aided flag; orders shuffled by hand
+    const n = 600;
+    const key = Int32Array.from({ length: n }, (_, i) => ((i * 7919) % 13) % 6);
+    const isAided = Int32Array.from({ length: n }, (_, i) => ((i * 104729) % 11) % 2);
+    const all = Int32Array.from({ length: n }, (_, i) => (i * 37) % n);
+    const order = (salt: number, flag: number) => all.filter((r) => isAided[r] === flag).sort((a, b) => ((a * salt) % 101) - ((b * salt) % 101) || a - b);
+    const set = (flag: number) => ({ rows: all.filter((r) => isAided[r] === flag), byScore: order(31, flag), byTime: order(57, flag) });
+    const reads = { all, unaided: set(0), aided: set(1) };
+    const parts = partitionReads(reads, key, 7);
+    const only = (rows: Int32Array, v: number) => [...rows].filter((r) => key[r] === v);
+    for (let v = 0; v < 7; v++) {
+      if (only(all, v).length === 0) {
+        expect(parts[v]).toBeNull();
+        continue;
+      }
+      expect([...(parts[v]?.all ?? [])]).toEqual(only(all, v));
+      for (const cond of ['unaided', 'aided'] as const) {
+        for (const o of ['rows', 'byScore', 'byTime'] as const) expect([...(parts[v]?.[cond][o] ?? [])]).toEqual(only(reads[cond][o], v));
+      }
+    }
+    expect(parts[6]).toBeNull();
+  });
 });
 
 describe('sectionReads and partitionReads', () => {
