@@ -16,7 +16,9 @@
  * IndexedDB, and real Chromium ("chromium": the harness page bench/large-study/, built by vite,
  * simulates the same study in the page, stores it with restoreStudy in the profile's IndexedDB,
  * then a fresh page load times the three steps, the results through the app's analysis worker,
- * which reads the rows itself, with the main thread's long tasks meanwhile). Peak RSS is this Node process's.
+ * which reads the rows itself, with the main thread's long tasks meanwhile; then the reads alone and
+ * the rows after deleting every read pack, which rebuilds them). restoreStudy writes the read packs
+ * of the completed sessions, as the app does. Peak RSS is this Node process's.
  */
 import 'fake-indexeddb/auto';
 import { execFileSync, spawnSync } from 'node:child_process';
@@ -109,6 +111,10 @@ const inChromium = async (caseSet: object): Promise<Figure[]> => {
       plain('chromium: main thread during the results: long tasks (count / total)', m.longTasks, `tasks, ${Math.round(m.longTaskMs)} ms`),
       plain('chromium: analyzeReads alone on the main thread (the engine)', m.engineMs, 'ms'),
       plain('chromium: rocCurves alone on the main thread', m.rocMs, 'ms'),
+      plain('chromium: read packs stored (one per completed session)', m.packs, 'packs'),
+      plain('chromium: the study\'s reads alone (loadStudyReads: packs, per-session counts, no join)', m.loadReadsMs, 'ms'),
+      plain('chromium: rows with every pack deleted first (read from the records, packs rebuilt)', m.rebuildMs, 'ms'),
+      plain('chromium: rows again after that rebuild', m.afterRebuildMs, 'ms'),
     ];
   } finally {
     await chrome.stop();

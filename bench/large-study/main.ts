@@ -10,7 +10,9 @@
  *    the results page's computation (runStudyAnalysis: the app's analysis worker reads the rows
  *    from IndexedDB and analyses them with the default seed and resamples, as ResultsScreen), with
  *    the main thread's long tasks meanwhile; then the engine and the ROC curves alone on this
- *    thread (the engine's share). window.heedMeasured.
+ *    thread (the engine's share); then the reads alone (loadStudyReads: read packs, per-session
+ *    counts), and the export's rows once more after deleting every pack (a study stored before
+ *    packs: the first read rebuilds them) and again after. window.heedMeasured.
  */
 import { analyzeReads, DEFAULT_BOOT, DEFAULT_SEED } from '../../src/analysis/engine';
 import { rocCurves } from '../../src/analysis/roc-curves';
@@ -20,6 +22,7 @@ import { readLogCsv } from '../../src/io/read-log-export';
 import { restoreStudy } from '../../src/store/bundle';
 import { openHeedDb } from '../../src/store/db';
 import { studyReadRows } from '../../src/store/read-log-rows';
+import { loadStudyReads } from '../../src/store/read-packs';
 import { runStudyAnalysis } from '../../src/ui/results/run-analysis';
 import { loadStudyProgress } from '../../src/ui/screens/study-progress';
 
@@ -29,6 +32,10 @@ export type Measured = {
   exportRowsMs: number; exportCsvMs: number; exportMB: number;
   resultsWorkerMs: number; longestTaskMs: number; longTaskMs: number; longTasks: number;
   engineMs: number; rocMs: number; reads: number;
+  /** the reads alone (packs, per-session counts, the others' records; no join) */
+  loadReadsMs: number;
+  /** studyReadRows with every pack deleted first (reads from the records, packs rebuilt and stored), then again */
+  rebuildMs: number; afterRebuildMs: number; packs: number;
 };
 declare global {
   // oxlint-disable-next-line typescript/consistent-type-definitions
@@ -73,6 +80,13 @@ const measure = async (): Promise<void> => {
 
   const engine = await timed(() => analyzeReads(exportRows.value, { seed: DEFAULT_SEED, boot: DEFAULT_BOOT }));
   const roc = await timed(() => rocCurves(exportRows.value));
+  const loaded = await timed(() => loadStudyReads(db, studyId));
+  if (loaded.value.fresh.length > 0) throw new Error('a completed session had no current pack after the export');
+  const packs = await db.packs.count();
+  await db.packs.clear(); // a study stored before packs existed: the first read rebuilds them
+  const rebuild = await timed(() => studyReadRows(db, studyId));
+  const afterRebuild = await timed(() => studyReadRows(db, studyId));
+  if (rebuild.value.length !== exportRows.value.length || afterRebuild.value.length !== exportRows.value.length) throw new Error('rows differ after a rebuild');
   window.heedMeasured = {
     studyPageMs: page.ms, sessions: page.value.progress.reduce((n, r) => n + r.periods.filter((p) => p.session).length, 0),
     answered: page.value.progress.reduce((n, r) => n + r.periods.reduce((m, p) => m + p.answered, 0), 0),
@@ -80,6 +94,7 @@ const measure = async (): Promise<void> => {
     resultsWorkerMs: worker.ms,
     longestTaskMs: during.reduce((m, t) => Math.max(m, t.duration), 0), longTaskMs: during.reduce((s, t) => s + t.duration, 0), longTasks: during.length,
     engineMs: engine.ms, rocMs: roc.ms, reads: exportRows.value.length,
+    loadReadsMs: loaded.ms, rebuildMs: rebuild.ms, afterRebuildMs: afterRebuild.ms, packs,
   };
 };
 

@@ -151,9 +151,9 @@ describe('read packs', () => {
     expect((await db.packs.toArray()).map((p) => p.sessionId).sort()).toEqual(completed);
     expect(await studyReadRows(db, study.id)).toEqual(expected);
     // a session packed by hand when not complete: nothing is stored
-    const open = (await db.sessions.toArray()).find((s) => s.completedAt === null)!;
-    expect(await packSession(db, open.id)).toBe(false);
-    expect(await db.packs.get(open.id)).toBeUndefined();
+    const unfinished = (await db.sessions.toArray()).find((s) => s.completedAt === null)!;
+    expect(await packSession(db, unfinished.id)).toBe(false);
+    expect(await db.packs.get(unfinished.id)).toBeUndefined();
   });
 
   it('writes packs with a restored study, and deletes them with the study', async () => {
