@@ -3,12 +3,13 @@
 // curves the results page draws from the same reads. Given a study (database name and study id)
 // rather than rows, the worker reads the study's rows from IndexedDB itself: for a large study
 // (200,000 reads) loading, joining and copying the rows to a worker would otherwise hold the
-// page's main thread for seconds.
-import { analyzeReads, type CovarianceMethod } from '../../analysis/engine';
-import { rocCurves } from '../../analysis/roc-curves';
+// page's main thread for seconds. A large study's report comes in two steps (analysis-steps.ts):
+// the estimates first, then the bootstrap intervals.
+import type { CovarianceMethod } from '../../analysis/engine';
 import type { ReadRow } from '../../core/read-log';
 import { openHeedDb } from '../../store/db';
 import { studyReadRows } from '../../store/read-log-rows';
+import { analyseInSteps } from './analysis-steps';
 
 export type AnalysisRequest = { seed: number; boot: number; covariance?: CovarianceMethod } & ({ rows: ReadRow[] } | { dbName: string; studyId: string });
 
@@ -27,7 +28,7 @@ self.onmessage = async (event: MessageEvent<AnalysisRequest>) => {
     const { seed, boot, covariance } = event.data;
     const rows = await rowsOf(event.data);
     if (rows.length === 0) self.postMessage({ ok: true, empty: true });
-    else self.postMessage({ ok: true, report: analyzeReads(rows, { seed, boot, covariance }), roc: rocCurves(rows) });
+    else analyseInSteps(rows, { seed, boot, covariance }, (step) => self.postMessage({ ok: true, ...step }));
   } catch (error) {
     self.postMessage({ ok: false, error: error instanceof Error ? error.message : String(error) });
   }
