@@ -9,7 +9,8 @@
  *    (loadStudyProgress), the reads.csv export (studyReadRows + readLogCsv, as the Export button),
  *    the results page's computation (runStudyAnalysis: the app's analysis worker reads the rows
  *    from IndexedDB and analyses them with the default seed and resamples, as ResultsScreen), with
- *    the main thread's long tasks meanwhile; then the engine and the ROC curves alone on this
+ *    the main thread's long tasks meanwhile, and when the estimates arrived (a large study's report
+ *    comes first without the reader averages' bootstrap intervals); then the engine and the ROC curves alone on this
  *    thread (the engine's share); then the reads alone (loadStudyReads: read packs, per-session
  *    counts), and the export's rows once more after deleting every pack (a study stored before
  *    packs: the first read rebuilds them) and again after. window.heedMeasured.
@@ -30,7 +31,7 @@ export type Built = { studyId: string; simulateMs: number; restoreMs: number; re
 export type Measured = {
   studyPageMs: number; sessions: number; answered: number;
   exportRowsMs: number; exportCsvMs: number; exportMB: number;
-  resultsWorkerMs: number; longestTaskMs: number; longTaskMs: number; longTasks: number;
+  resultsWorkerMs: number; estimatesMs: number; longestTaskMs: number; longTaskMs: number; longTasks: number;
   engineMs: number; rocMs: number; reads: number;
   /** the reads alone (packs, per-session counts, the others' records; no join) */
   loadReadsMs: number;
@@ -72,7 +73,8 @@ const measure = async (): Promise<void> => {
   const observer = new PerformanceObserver((list) => { for (const e of list.getEntries()) tasks.push({ start: e.startTime, duration: e.duration }); });
   observer.observe({ type: 'longtask' });
   const r0 = performance.now();
-  const worker = await timed(() => runStudyAnalysis(db, studyId, DEFAULT_SEED, DEFAULT_BOOT));
+  let estimatesMs = Number.NaN;
+  const worker = await timed(() => runStudyAnalysis(db, studyId, DEFAULT_SEED, DEFAULT_BOOT, 'jackknife', () => { estimatesMs = performance.now() - r0; }));
   if (!worker.value) throw new Error('the worker found no reads');
   await new Promise((resolve) => setTimeout(resolve, 100)); // let the observer deliver the last entries
   observer.disconnect();
@@ -91,7 +93,7 @@ const measure = async (): Promise<void> => {
     studyPageMs: page.ms, sessions: page.value.progress.reduce((n, r) => n + r.periods.filter((p) => p.session).length, 0),
     answered: page.value.progress.reduce((n, r) => n + r.periods.reduce((m, p) => m + p.answered, 0), 0),
     exportRowsMs: exportRows.ms, exportCsvMs: csv.ms, exportMB: csv.value.length / 1e6,
-    resultsWorkerMs: worker.ms,
+    resultsWorkerMs: worker.ms, estimatesMs,
     longestTaskMs: during.reduce((m, t) => Math.max(m, t.duration), 0), longTaskMs: during.reduce((s, t) => s + t.duration, 0), longTasks: during.length,
     engineMs: engine.ms, rocMs: roc.ms, reads: exportRows.value.length,
     loadReadsMs: loaded.ms, rebuildMs: rebuild.ms, afterRebuildMs: afterRebuild.ms, packs,
