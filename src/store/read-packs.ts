@@ -147,20 +147,27 @@ export const loadStudyReads = (db: HeedDb, studyId: string): Promise<StudyReads>
     return { sessions, reads, fresh };
   });
 
+/** Packs stored per transaction by storePacks: a reader's answer commit waits for one batch at most, not for all. */
+const PACKS_PER_TRANSACTION = 10;
+
 /**
  * Stores packs built by `loadStudyReads`, each only if its session is still completed at the same
- * time with as many reads as the pack holds (checked in the writing transaction); returns how many
- * were stored.
+ * time with as many reads as the pack holds (checked in the writing transaction), a few per
+ * transaction; resolves with how many were stored.
  */
 export const storePacks = async (db: HeedDb, packs: readonly StoredPack[]): Promise<number> => {
-  if (packs.length === 0) return 0;
-  return db.transaction('rw', db.sessions, db.reads, db.packs, async () => {
-    const checks = await Promise.all(packs.map(async (p) => {
-      const [session, count] = await Promise.all([db.sessions.get(p.sessionId), db.reads.where('sessionId').equals(p.sessionId).count()]);
-      return session !== undefined && packIsCurrent(p, session, count);
-    }));
-    const fit = packs.filter((_, i) => checks[i]);
-    await db.packs.bulkPut(fit);
-    return fit.length;
-  });
+  let stored = 0;
+  for (let at = 0; at < packs.length; at += PACKS_PER_TRANSACTION) {
+    const batch = packs.slice(at, at + PACKS_PER_TRANSACTION);
+    stored += await db.transaction('rw', db.sessions, db.reads, db.packs, async () => {
+      const checks = await Promise.all(batch.map(async (p) => {
+        const [session, count] = await Promise.all([db.sessions.get(p.sessionId), db.reads.where('sessionId').equals(p.sessionId).count()]);
+        return session !== undefined && packIsCurrent(p, session, count);
+      }));
+      const fit = batch.filter((_, i) => checks[i]);
+      await db.packs.bulkPut(fit);
+      return fit.length;
+    });
+  }
+  return stored;
 };

@@ -7,29 +7,26 @@
 // the estimates first, then the bootstrap intervals.
 import type { CovarianceMethod } from '../../analysis/engine';
 import type { ReadRow } from '../../core/read-log';
-import { openHeedDb } from '../../store/db';
-import { studyReadRows } from '../../store/read-log-rows';
+import { openHeedDb, type HeedDb } from '../../store/db';
+import { studyReadRowsPacking } from '../../store/read-log-rows';
 import { analyseInSteps } from './analysis-steps';
 
 export type AnalysisRequest = { seed: number; boot: number; covariance?: CovarianceMethod } & ({ rows: ReadRow[] } | { dbName: string; studyId: string });
 
-const rowsOf = async (request: AnalysisRequest): Promise<ReadRow[]> => {
-  if ('rows' in request) return request.rows;
-  const db = openHeedDb(request.dbName);
-  try {
-    return await studyReadRows(db, request.studyId);
-  } finally {
-    db.close();
-  }
-};
-
 self.onmessage = async (event: MessageEvent<AnalysisRequest>) => {
+  const request = event.data;
+  const db = 'rows' in request ? null : openHeedDb(request.dbName);
   try {
-    const { seed, boot, covariance } = event.data;
-    const rows = await rowsOf(event.data);
+    const { seed, boot, covariance } = request;
+    // packs the study lacked are stored while the analysis runs (read-log-rows.ts)
+    const { rows, packing } = 'rows' in request ? { rows: request.rows, packing: Promise.resolve(0) } : await studyReadRowsPacking(db as HeedDb, request.studyId);
     if (rows.length === 0) self.postMessage({ ok: true, empty: true });
     else analyseInSteps(rows, { seed, boot, covariance }, (step) => self.postMessage({ ok: true, ...step }));
+    await packing;
   } catch (error) {
     self.postMessage({ ok: false, error: error instanceof Error ? error.message : String(error) });
+  } finally {
+    db?.close();
+    self.close(); // one request per worker; it ends itself once the packs are stored
   }
 };

@@ -23,9 +23,11 @@ const inWorker = (request: AnalysisRequest, onEstimates?: OnEstimates): Promise<
         onEstimates?.({ report: reply.report, roc });
         return;
       }
-      worker.terminate();
-      if (!reply.ok) reject(new Error(reply.error));
-      else resolve(reply.empty ? null : { report: reply.report, roc: reply.roc ?? roc });
+      // the worker ends itself after the reply (it may still be storing read packs); a failed one is ended here
+      if (!reply.ok) {
+        worker.terminate();
+        reject(new Error(reply.error));
+      } else resolve(reply.empty ? null : { report: reply.report, roc: reply.roc ?? roc });
     };
     worker.onerror = (event) => { worker.terminate(); reject(new Error(event.message)); };
     worker.postMessage(request);

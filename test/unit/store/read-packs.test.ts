@@ -9,8 +9,8 @@ import { joinReadRows } from '../../../src/core/read-rows';
 import { gatherStudySnapshot, restoreStudy } from '../../../src/store/bundle';
 import { saveCaseSet } from '../../../src/store/case-sets';
 import { openHeedDb, SCHEMA_V4, type HeedDb } from '../../../src/store/db';
-import { studyReadRows } from '../../../src/store/read-log-rows';
-import { packSession, readsOfPack, type PackColumns } from '../../../src/store/read-packs';
+import { studyReadRows, studyReadRowsPacking } from '../../../src/store/read-log-rows';
+import { loadStudyReads, packSession, readsOfPack, storePacks, type PackColumns } from '../../../src/store/read-packs';
 import { withdrawReader } from '../../../src/store/reader-lifecycle';
 import { listReaders } from '../../../src/store/readers';
 import type { StoredReader, StoredSession, StoredStudy } from '../../../src/store/records';
@@ -88,6 +88,13 @@ const rowsFromReads = async (db: HeedDb, studyId: string) => {
     await db.reads.where('studyId').equals(studyId).toArray()).map((j) => j.row);
 };
 
+/** studyReadRows, then the storing of the packs it built on the way (which the rows do not wait for). */
+const rowsThenPacks = async (db: HeedDb, studyId: string) => {
+  const { rows, packing } = await studyReadRowsPacking(db, studyId);
+  await packing;
+  return rows;
+};
+
 const editPack = async (db: HeedDb, sessionId: string, edit: (c: PackColumns) => void): Promise<void> => {
   const pack = await db.packs.get(sessionId);
   const columns = JSON.parse(pack!.reads) as PackColumns;
@@ -133,7 +140,7 @@ describe('read packs', () => {
     await db.reads.delete(gone);
     await db.sessions.update(second, { completedAt: '2026-12-24T00:00:00.000Z' });
     const expected = await rowsFromReads(db, study.id);
-    const rows = await studyReadRows(db, study.id);
+    const rows = await rowsThenPacks(db, study.id);
     expect(rows).toEqual(expected);
     expect(rows.some((r) => r.total_ms === 123456)).toBe(false);
     // rebuilt on the way, so the next load uses them
@@ -147,13 +154,27 @@ describe('read packs', () => {
     const { study, completed } = await makeStudy(db);
     const expected = await rowsFromReads(db, study.id);
     await db.packs.clear();
-    expect(await studyReadRows(db, study.id)).toEqual(expected);
+    expect(await rowsThenPacks(db, study.id)).toEqual(expected);
     expect((await db.packs.toArray()).map((p) => p.sessionId).sort()).toEqual(completed);
     expect(await studyReadRows(db, study.id)).toEqual(expected);
     // a session packed by hand when not complete: nothing is stored
     const unfinished = (await db.sessions.toArray()).find((s) => s.completedAt === null)!;
     expect(await packSession(db, unfinished.id)).toBe(false);
     expect(await db.packs.get(unfinished.id)).toBeUndefined();
+  });
+
+  it('does not store a pack built on the way when its session changed before the write', async () => {
+    const db = openHeedDb(dbName());
+    const { study, completed } = await makeStudy(db);
+    await db.packs.clear();
+    const { fresh } = await loadStudyReads(db, study.id);
+    expect(fresh.map((p) => p.sessionId).sort()).toEqual(completed);
+    const [first, second] = completed as [string, string];
+    await db.reads.delete((await db.reads.where('sessionId').equals(first).primaryKeys())[0]!);
+    await db.sessions.update(second, { completedAt: '2026-12-24T00:00:00.000Z' });
+    expect(await storePacks(db, fresh)).toBe(completed.length - 2);
+    expect(await db.packs.get(first)).toBeUndefined();
+    expect(await db.packs.get(second)).toBeUndefined();
   });
 
   it('writes packs with a restored study, and deletes them with the study', async () => {
@@ -182,7 +203,7 @@ describe('read packs', () => {
     expect(upgraded.verno).toBe(5);
     expect(await upgraded.packs.count()).toBe(0);
     expect(await upgraded.reads.count()).toBe(await db.reads.count());
-    expect(await studyReadRows(upgraded, study.id)).toEqual(expected);
+    expect(await rowsThenPacks(upgraded, study.id)).toEqual(expected);
     expect(await upgraded.packs.count()).toBe(4);
   });
 });
