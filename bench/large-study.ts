@@ -114,7 +114,12 @@ const inChromium = async (caseSet: object): Promise<Figure[]> => {
       plain('chromium: rocCurves alone on the main thread', m.rocMs, 'ms'),
       plain('chromium: read packs stored (one per completed session)', m.packs, 'packs'),
       plain('chromium: the study\'s reads alone (loadStudyReads: packs, per-session counts, no join)', m.loadReadsMs, 'ms'),
-      plain('chromium: rows with every pack deleted first (read from the records, packs rebuilt)', m.rebuildMs, 'ms'),
+      plain('chromium: reads alone, of which the session records (each with its case list)', m.sessionsMs, 'ms'),
+      plain('chromium: reads alone, of which the packs (getAll)', m.packsMs, 'ms'),
+      plain('chromium: reads alone, of which the per-session read counts (index counts)', m.countsMs, 'ms'),
+      plain('chromium: reads alone, of which unpacking (JSON.parse and read objects)', m.unpackMs, 'ms'),
+      plain('chromium: rows with every pack deleted first (read from the records)', m.rebuildMs, 'ms'),
+      plain('chromium: then the packs built on the way stored (not awaited by the rows)', m.packingMs, `ms, ${m.packedSessions} packs`),
       plain('chromium: rows again after that rebuild', m.afterRebuildMs, 'ms'),
     ];
   } finally {

@@ -22,8 +22,8 @@ import { simulateStudy } from '../../src/io/bundle/simulate-study';
 import { readLogCsv } from '../../src/io/read-log-export';
 import { restoreStudy } from '../../src/store/bundle';
 import { openHeedDb } from '../../src/store/db';
-import { studyReadRows } from '../../src/store/read-log-rows';
-import { loadStudyReads } from '../../src/store/read-packs';
+import { studyReadRows, studyReadRowsPacking } from '../../src/store/read-log-rows';
+import { loadStudyReads, readsOfPack } from '../../src/store/read-packs';
 import { runStudyAnalysis } from '../../src/ui/results/run-analysis';
 import { loadStudyProgress } from '../../src/ui/screens/study-progress';
 
@@ -34,9 +34,9 @@ export type Measured = {
   resultsWorkerMs: number; estimatesMs: number; longestTaskMs: number; longTaskMs: number; longTasks: number;
   engineMs: number; rocMs: number; reads: number;
   /** the reads alone (packs, per-session counts, the others' records; no join) */
-  loadReadsMs: number;
-  /** studyReadRows with every pack deleted first (reads from the records, packs rebuilt and stored), then again */
-  rebuildMs: number; afterRebuildMs: number; packs: number;
+  loadReadsMs: number; sessionsMs: number; packsMs: number; countsMs: number; unpackMs: number;
+  /** the rows with every pack deleted first (from the records), the packs built on the way stored after them, then the rows again */
+  rebuildMs: number; packingMs: number; packedSessions: number; afterRebuildMs: number; packs: number;
 };
 declare global {
   // oxlint-disable-next-line typescript/consistent-type-definitions
@@ -84,11 +84,17 @@ const measure = async (): Promise<void> => {
   const roc = await timed(() => rocCurves(exportRows.value));
   const loaded = await timed(() => loadStudyReads(db, studyId));
   if (loaded.value.fresh.length > 0) throw new Error('a completed session had no current pack after the export');
-  const packs = await db.packs.count();
+  // the parts of loadStudyReads, each alone
+  const sessionsPart = await timed(() => db.sessions.where('studyId').equals(studyId).toArray());
+  const packsPart = await timed(() => db.packs.where('studyId').equals(studyId).toArray());
+  const countsPart = await timed(() => Promise.all(sessionsPart.value.map((s) => db.reads.where('sessionId').equals(s.id).count())));
+  const unpackPart = await timed(() => packsPart.value.reduce((n, p) => n + readsOfPack(p).length, 0));
+  const packs = packsPart.value.length;
   await db.packs.clear(); // a study stored before packs existed: the first read rebuilds them
-  const rebuild = await timed(() => studyReadRows(db, studyId));
+  const rebuild = await timed(() => studyReadRowsPacking(db, studyId));
+  const packing = await timed(() => rebuild.value.packing);
   const afterRebuild = await timed(() => studyReadRows(db, studyId));
-  if (rebuild.value.length !== exportRows.value.length || afterRebuild.value.length !== exportRows.value.length) throw new Error('rows differ after a rebuild');
+  if (rebuild.value.rows.length !== exportRows.value.length || afterRebuild.value.length !== exportRows.value.length) throw new Error('rows differ after a rebuild');
   window.heedMeasured = {
     studyPageMs: page.ms, sessions: page.value.progress.reduce((n, r) => n + r.periods.filter((p) => p.session).length, 0),
     answered: page.value.progress.reduce((n, r) => n + r.periods.reduce((m, p) => m + p.answered, 0), 0),
@@ -96,7 +102,8 @@ const measure = async (): Promise<void> => {
     resultsWorkerMs: worker.ms, estimatesMs,
     longestTaskMs: during.reduce((m, t) => Math.max(m, t.duration), 0), longTaskMs: during.reduce((s, t) => s + t.duration, 0), longTasks: during.length,
     engineMs: engine.ms, rocMs: roc.ms, reads: exportRows.value.length,
-    loadReadsMs: loaded.ms, rebuildMs: rebuild.ms, afterRebuildMs: afterRebuild.ms, packs,
+    loadReadsMs: loaded.ms, sessionsMs: sessionsPart.ms, packsMs: packsPart.ms, countsMs: countsPart.ms, unpackMs: unpackPart.ms,
+    rebuildMs: rebuild.ms, packingMs: packing.ms, packedSessions: packing.value, afterRebuildMs: afterRebuild.ms, packs,
   };
 };
 
