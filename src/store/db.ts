@@ -44,10 +44,13 @@ export const SCHEMA_V4 = {
  * Version 5: read packs, one record per completed session holding that session's reads in one
  * JSON text (read-packs.ts), keyed by session and found by study. A derived copy of the `reads`
  * records, never the source of truth; a new empty table, filled as sessions complete or a study is
- * read (packs are rebuilt when missing), so the upgrade moves nothing.
+ * read (packs are rebuilt when missing), so the upgrade moves nothing. Sessions gain an index on
+ * [studyId+completedAt]: it lists a study's completed sessions with their completion times
+ * without reading the session records (an open session's null is not a key, so it is not listed).
  */
 export const SCHEMA_V5 = {
   ...SCHEMA_V4,
+  sessions: 'id, studyId, readerId, [studyId+completedAt]',
   packs: 'sessionId, studyId',
 } as const;
 

@@ -205,5 +205,8 @@ describe('read packs', () => {
     expect(await upgraded.reads.count()).toBe(await db.reads.count());
     expect(await rowsThenPacks(upgraded, study.id)).toEqual(expected);
     expect(await upgraded.packs.count()).toBe(4);
+    // and they are used: the completion index was built over the sessions already stored
+    await editPack(upgraded, (await upgraded.packs.toCollection().primaryKeys())[0]!, (c) => { c.final[0]![2] = 123456; });
+    expect((await studyReadRows(upgraded, study.id)).filter((r) => r.total_ms === 123456)).toHaveLength(1);
   });
 });
