@@ -114,7 +114,7 @@ const inChromium = async (caseSet: object): Promise<Figure[]> => {
       plain('chromium: rocCurves alone on the main thread', m.rocMs, 'ms'),
       plain('chromium: read packs stored (one per completed session)', m.packs, 'packs'),
       plain('chromium: the study\'s reads alone (loadStudyReads: packs, per-session counts, no join)', m.loadReadsMs, 'ms'),
-      plain('chromium: reads alone, of which the session records (each with its case list)', m.sessionsMs, 'ms'),
+      plain('chromium: reads alone, of which the completed sessions (index keys, no session record)', m.sessionsMs, 'ms'),
       plain('chromium: reads alone, of which the packs (getAll)', m.packsMs, 'ms'),
       plain('chromium: reads alone, of which the per-session read counts (index counts)', m.countsMs, 'ms'),
       plain('chromium: reads alone, of which unpacking (JSON.parse and read objects)', m.unpackMs, 'ms'),

@@ -85,9 +85,9 @@ const measure = async (): Promise<void> => {
   const loaded = await timed(() => loadStudyReads(db, studyId));
   if (loaded.value.fresh.length > 0) throw new Error('a completed session had no current pack after the export');
   // the parts of loadStudyReads, each alone
-  const sessionsPart = await timed(() => db.sessions.where('studyId').equals(studyId).toArray());
+  const sessionsPart = await timed(() => db.sessions.where('[studyId+completedAt]').between([studyId, ''], [studyId, '\uffff'], true, true).primaryKeys());
   const packsPart = await timed(() => db.packs.where('studyId').equals(studyId).toArray());
-  const countsPart = await timed(() => Promise.all(sessionsPart.value.map((s) => db.reads.where('sessionId').equals(s.id).count())));
+  const countsPart = await timed(() => Promise.all(sessionsPart.value.map((id) => db.reads.where('sessionId').equals(id).count())));
   const unpackPart = await timed(() => packsPart.value.reduce((n, p) => n + readsOfPack(p).length, 0));
   const packs = packsPart.value.length;
   await db.packs.clear(); // a study stored before packs existed: the first read rebuilds them
