@@ -16,7 +16,9 @@
  * IndexedDB, and real Chromium ("chromium": the harness page bench/large-study/, built by vite,
  * simulates the same study in the page, stores it with restoreStudy in the profile's IndexedDB,
  * then a fresh page load times the three steps, the results through the app's analysis worker,
- * which reads the rows itself, with the main thread's long tasks meanwhile). Peak RSS is this Node process's.
+ * which reads the rows itself, with the main thread's long tasks meanwhile; then the reads alone and
+ * the rows after deleting every read pack, which rebuilds them). restoreStudy writes the read packs
+ * of the completed sessions, as the app does. Peak RSS is this Node process's.
  */
 import 'fake-indexeddb/auto';
 import { execFileSync, spawnSync } from 'node:child_process';
@@ -104,11 +106,21 @@ const inChromium = async (caseSet: object): Promise<Figure[]> => {
       atMost('chromium: reads.csv export (studyReadRows + readLogCsv)', m.exportRowsMs + m.exportCsvMs, 'ms', 3000),
       plain('chromium: export, of which studyReadRows (IndexedDB and the join)', m.exportRowsMs, 'ms'),
       plain('chromium: export, of which readLogCsv', m.exportCsvMs, 'ms'),
-      atMost('chromium: results computed (the app\'s analysis worker: rows from IndexedDB, engine, ROC curves)', m.resultsWorkerMs, 'ms', 3000),
+      atMost('chromium: results shown: estimates and every interval but the reader averages\' bootstrap (the worker\'s first step)', m.estimatesMs, 'ms', 3000),
+      atMost('chromium: results complete (the app\'s analysis worker: rows from IndexedDB, engine with the bootstrap, ROC curves)', m.resultsWorkerMs, 'ms', 3000),
       plain('chromium: main thread during the results: longest task', m.longestTaskMs, 'ms'),
       plain('chromium: main thread during the results: long tasks (count / total)', m.longTasks, `tasks, ${Math.round(m.longTaskMs)} ms`),
       plain('chromium: analyzeReads alone on the main thread (the engine)', m.engineMs, 'ms'),
       plain('chromium: rocCurves alone on the main thread', m.rocMs, 'ms'),
+      plain('chromium: read packs stored (one per completed session)', m.packs, 'packs'),
+      plain('chromium: the study\'s reads alone (loadStudyReads: packs, per-session counts, no join)', m.loadReadsMs, 'ms'),
+      plain('chromium: reads alone, of which the completed sessions (index keys, no session record)', m.sessionsMs, 'ms'),
+      plain('chromium: reads alone, of which the packs (getAll)', m.packsMs, 'ms'),
+      plain('chromium: reads alone, of which the per-session read counts (index counts)', m.countsMs, 'ms'),
+      plain('chromium: reads alone, of which unpacking (JSON.parse and read objects)', m.unpackMs, 'ms'),
+      plain('chromium: rows with every pack deleted first (read from the records)', m.rebuildMs, 'ms'),
+      plain('chromium: then the packs built on the way stored (not awaited by the rows)', m.packingMs, `ms, ${m.packedSessions} packs`),
+      plain('chromium: rows again after that rebuild', m.afterRebuildMs, 'ms'),
     ];
   } finally {
     await chrome.stop();

@@ -9,8 +9,11 @@
  *    (loadStudyProgress), the reads.csv export (studyReadRows + readLogCsv, as the Export button),
  *    the results page's computation (runStudyAnalysis: the app's analysis worker reads the rows
  *    from IndexedDB and analyses them with the default seed and resamples, as ResultsScreen), with
- *    the main thread's long tasks meanwhile; then the engine and the ROC curves alone on this
- *    thread (the engine's share). window.heedMeasured.
+ *    the main thread's long tasks meanwhile, and when the estimates arrived (a large study's report
+ *    comes first without the reader averages' bootstrap intervals); then the engine and the ROC curves alone on this
+ *    thread (the engine's share); then the reads alone (loadStudyReads: read packs, per-session
+ *    counts), and the export's rows once more after deleting every pack (a study stored before
+ *    packs: the first read rebuilds them) and again after. window.heedMeasured.
  */
 import { analyzeReads, DEFAULT_BOOT, DEFAULT_SEED } from '../../src/analysis/engine';
 import { rocCurves } from '../../src/analysis/roc-curves';
@@ -19,7 +22,8 @@ import { simulateStudy } from '../../src/io/bundle/simulate-study';
 import { readLogCsv } from '../../src/io/read-log-export';
 import { restoreStudy } from '../../src/store/bundle';
 import { openHeedDb } from '../../src/store/db';
-import { studyReadRows } from '../../src/store/read-log-rows';
+import { studyReadRows, studyReadRowsPacking } from '../../src/store/read-log-rows';
+import { loadStudyReads, readsOfPack } from '../../src/store/read-packs';
 import { runStudyAnalysis } from '../../src/ui/results/run-analysis';
 import { loadStudyProgress } from '../../src/ui/screens/study-progress';
 
@@ -27,8 +31,12 @@ export type Built = { studyId: string; simulateMs: number; restoreMs: number; re
 export type Measured = {
   studyPageMs: number; sessions: number; answered: number;
   exportRowsMs: number; exportCsvMs: number; exportMB: number;
-  resultsWorkerMs: number; longestTaskMs: number; longTaskMs: number; longTasks: number;
+  resultsWorkerMs: number; estimatesMs: number; longestTaskMs: number; longTaskMs: number; longTasks: number;
   engineMs: number; rocMs: number; reads: number;
+  /** the reads alone (packs, per-session counts, the others' records; no join) */
+  loadReadsMs: number; sessionsMs: number; packsMs: number; countsMs: number; unpackMs: number;
+  /** the rows with every pack deleted first (from the records), the packs built on the way stored after them, then the rows again */
+  rebuildMs: number; packingMs: number; packedSessions: number; afterRebuildMs: number; packs: number;
 };
 declare global {
   // oxlint-disable-next-line typescript/consistent-type-definitions
@@ -65,7 +73,8 @@ const measure = async (): Promise<void> => {
   const observer = new PerformanceObserver((list) => { for (const e of list.getEntries()) tasks.push({ start: e.startTime, duration: e.duration }); });
   observer.observe({ type: 'longtask' });
   const r0 = performance.now();
-  const worker = await timed(() => runStudyAnalysis(db, studyId, DEFAULT_SEED, DEFAULT_BOOT));
+  let estimatesMs = Number.NaN;
+  const worker = await timed(() => runStudyAnalysis(db, studyId, DEFAULT_SEED, DEFAULT_BOOT, 'jackknife', () => { estimatesMs = performance.now() - r0; }));
   if (!worker.value) throw new Error('the worker found no reads');
   await new Promise((resolve) => setTimeout(resolve, 100)); // let the observer deliver the last entries
   observer.disconnect();
@@ -73,13 +82,28 @@ const measure = async (): Promise<void> => {
 
   const engine = await timed(() => analyzeReads(exportRows.value, { seed: DEFAULT_SEED, boot: DEFAULT_BOOT }));
   const roc = await timed(() => rocCurves(exportRows.value));
+  const loaded = await timed(() => loadStudyReads(db, studyId));
+  if (loaded.value.fresh.length > 0) throw new Error('a completed session had no current pack after the export');
+  // the parts of loadStudyReads, each alone
+  const sessionsPart = await timed(() => db.sessions.where('[studyId+completedAt]').between([studyId, ''], [studyId, '\uffff'], true, true).primaryKeys());
+  const packsPart = await timed(() => db.packs.where('studyId').equals(studyId).toArray());
+  const countsPart = await timed(() => Promise.all(sessionsPart.value.map((id) => db.reads.where('sessionId').equals(id).count())));
+  const unpackPart = await timed(() => packsPart.value.reduce((n, p) => n + readsOfPack(p).length, 0));
+  const packs = packsPart.value.length;
+  await db.packs.clear(); // a study stored before packs existed: the first read rebuilds them
+  const rebuild = await timed(() => studyReadRowsPacking(db, studyId));
+  const packing = await timed(() => rebuild.value.packing);
+  const afterRebuild = await timed(() => studyReadRows(db, studyId));
+  if (rebuild.value.rows.length !== exportRows.value.length || afterRebuild.value.length !== exportRows.value.length) throw new Error('rows differ after a rebuild');
   window.heedMeasured = {
     studyPageMs: page.ms, sessions: page.value.progress.reduce((n, r) => n + r.periods.filter((p) => p.session).length, 0),
     answered: page.value.progress.reduce((n, r) => n + r.periods.reduce((m, p) => m + p.answered, 0), 0),
     exportRowsMs: exportRows.ms, exportCsvMs: csv.ms, exportMB: csv.value.length / 1e6,
-    resultsWorkerMs: worker.ms,
+    resultsWorkerMs: worker.ms, estimatesMs,
     longestTaskMs: during.reduce((m, t) => Math.max(m, t.duration), 0), longTaskMs: during.reduce((s, t) => s + t.duration, 0), longTasks: during.length,
     engineMs: engine.ms, rocMs: roc.ms, reads: exportRows.value.length,
+    loadReadsMs: loaded.ms, sessionsMs: sessionsPart.ms, packsMs: packsPart.ms, countsMs: countsPart.ms, unpackMs: unpackPart.ms,
+    rebuildMs: rebuild.ms, packingMs: packing.ms, packedSessions: packing.value, afterRebuildMs: afterRebuild.ms, packs,
   };
 };
 

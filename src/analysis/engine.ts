@@ -2,7 +2,7 @@ import type { ReadRow } from '../core/read-log';
 import { readersAgreementOf } from './fleiss-readers';
 import { mrmcOf } from './mrmc-adapter';
 import { COVARIANCE_METHODS, type CovarianceMethod } from './or-covariances';
-import { readerAveragedOf } from './reader-bootstrap';
+import { readerAveragedOf, type ReaderAveraged } from './reader-bootstrap';
 import type { AnalysisReport, GroupFinding, ReaderEntry } from './report-types';
 import { attributeCodes, attributeNames } from './attribute-codes';
 import { checkScores, firstAppearance, logColumns, type ReadColumns } from './read-columns';
@@ -61,38 +61,15 @@ export const analyzeColumns = (cols: ReadColumns, options: AnalyzeOptions = {}):
   const boot = options.boot ?? DEFAULT_BOOT;
   const covariance = options.covariance ?? DEFAULT_COVARIANCE;
   const includeWithdrawn = options.includeWithdrawn ?? false;
-  const excluded = { practice: 0, training: 0, withdrawn: 0 };
-  const kept: number[] = [];
-  for (let i = 0; i < cols.n; i++) {
-    if (cols.practice[i] === 1) excluded.practice++;
-    else if (cols.training[i] === 1) excluded.training++;
-    else if (cols.withdrawn[i] === 1 && !includeWithdrawn) excluded.withdrawn++;
-    else kept.push(i);
-  }
-  const reads = Int32Array.from(kept);
+  const { reads, excluded } = keptReads(cols, includeWithdrawn);
   checkScores(cols, reads);
   const attributes = attributeNames(cols, reads);
-  const findingsSeen = firstAppearance(cols.finding, reads, cols.findingIds.length);
-  const byFinding = partition(reads, cols.finding, cols.findingIds.length);
   // one index for the whole analysis: the reads as columns, each attribute's values as codes;
   // per finding the reads are split and sorted once, and every reader and subgroup takes its share
   const codes = attributeCodes(cols, attributes);
   const readers: ReaderEntry[] = [];
   const findings: GroupFinding[] = [];
-  for (const f of findingsSeen.first) {
-    const finding = cols.findingIds[f] as string;
-    const rowsOfFinding = byFinding[f] as Int32Array;
-    const perReader = partition(rowsOfFinding, cols.reader, cols.readerIds.length);
-    const order = [...perReader.keys()].filter((k) => (perReader[k] as Int32Array).length > 0);
-    order.sort((a, b) => byReaderId(cols.readerIds[a] as string, cols.readerIds[b] as string));
-    const all = new Int32Array(rowsOfFinding.length);
-    let at = 0;
-    for (const k of order) {
-      all.set(perReader[k] as Int32Array, at);
-      at += (perReader[k] as Int32Array).length;
-    }
-    const pooled = sectionReads(cols, all);
-    const readerReads = partitionReads(pooled, cols.reader, cols.readerIds.length);
+  for (const { finding, all, order, pooled, readerReads } of findingIndexes(cols, reads)) {
     for (const k of order) {
       const rs = readerReads[k] as SectionReads;
       const id = cols.readerIds[k] as string;
@@ -127,6 +104,72 @@ export const analyzeColumns = (cols: ReadColumns, options: AnalyzeOptions = {}):
     },
   };
 };
+
+/**
+ * The reader-averaged figures of every finding (group.findings[i].reader_averaged of
+ * analyzeColumns with the same options, in the same order and to the last bit), and nothing else:
+ * the results page shows a report computed with boot = 0 first and fills in the bootstrap
+ * intervals from this (withReaderAveraged). Throws as analyzeColumns.
+ */
+export const readerAveragedOfColumns = (cols: ReadColumns, options: AnalyzeOptions = {}): ReaderAveraged[] => {
+  checkOptions(options);
+  const seed = options.seed ?? DEFAULT_SEED;
+  const boot = options.boot ?? DEFAULT_BOOT;
+  const { reads } = keptReads(cols, options.includeWithdrawn ?? false);
+  checkScores(cols, reads);
+  if (options.readersOnly === true) return [];
+  return [...findingIndexes(cols, reads)].map(({ all, order, readerReads }) =>
+    readerAveragedOf(cols, all, order.map((k) => readerReads[k] as SectionReads), { seed, boot }));
+};
+
+/**
+ * The report of analyzeColumns with `boot` resamples, from its report with boot = 0 (the same
+ * other options) and readerAveragedOfColumns with `boot`.
+ */
+export const withReaderAveraged = (report: AnalysisReport, averaged: readonly ReaderAveraged[], boot: number): AnalysisReport => ({
+  ...report,
+  group: {
+    ...report.group,
+    boot,
+    findings: report.group.findings.map((f, i) => ({ ...f, reader_averaged: averaged[i] ?? f.reader_averaged })),
+  },
+});
+
+// The reads the statistics use: practice, training and (unless kept) withdrawn readers' reads left out, and counted.
+const keptReads = (cols: ReadColumns, includeWithdrawn: boolean): { reads: Int32Array; excluded: { practice: number; training: number; withdrawn: number } } => {
+  const excluded = { practice: 0, training: 0, withdrawn: 0 };
+  const kept: number[] = [];
+  for (let i = 0; i < cols.n; i++) {
+    if (cols.practice[i] === 1) excluded.practice++;
+    else if (cols.training[i] === 1) excluded.training++;
+    else if (cols.withdrawn[i] === 1 && !includeWithdrawn) excluded.withdrawn++;
+    else kept.push(i);
+  }
+  return { reads: Int32Array.from(kept), excluded };
+};
+
+type FindingIndex = { finding: string; all: Int32Array; order: number[]; pooled: SectionReads; readerReads: (SectionReads | null)[] };
+
+// Per finding, in order of first appearance: its reads grouped by reader (readers ordered by id), pooled and per reader.
+function* findingIndexes(cols: ReadColumns, reads: Int32Array): Generator<FindingIndex> {
+  const findingsSeen = firstAppearance(cols.finding, reads, cols.findingIds.length);
+  const byFinding = partition(reads, cols.finding, cols.findingIds.length);
+  for (const f of findingsSeen.first) {
+    const finding = cols.findingIds[f] as string;
+    const rowsOfFinding = byFinding[f] as Int32Array;
+    const perReader = partition(rowsOfFinding, cols.reader, cols.readerIds.length);
+    const order = [...perReader.keys()].filter((k) => (perReader[k] as Int32Array).length > 0);
+    order.sort((a, b) => byReaderId(cols.readerIds[a] as string, cols.readerIds[b] as string));
+    const all = new Int32Array(rowsOfFinding.length);
+    let at = 0;
+    for (const k of order) {
+      all.set(perReader[k] as Int32Array, at);
+      at += (perReader[k] as Int32Array).length;
+    }
+    const pooled = sectionReads(cols, all);
+    yield { finding, all, order, pooled, readerReads: partitionReads(pooled, cols.reader, cols.readerIds.length) };
+  }
+}
 
 // What the reader of the output must know about the log as a whole, or null.
 const logNote = (cols: ReadColumns, reads: Int32Array): string | null => {

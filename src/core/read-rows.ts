@@ -13,7 +13,9 @@ import type { AnswerPart, SessionItem } from './session';
 export type RowStudy = { id: string; design: StudyDesign };
 /** `withdrawn`: set when the coordinator withdrew the reader (their reads stay, marked withdrawn = 1) */
 export type RowReader = { id: string; code: string; role: string; years: number | null; sequenceIndex: number; withdrawn?: { at: string } | null };
-export type RowSession = { id: string; items: SessionItem[] };
+/** a session's plan as the join needs it: for each case its assistance, practice flag and order */
+export type RowItem = Pick<SessionItem, 'caseId' | 'practice' | 'assistance' | 'order'>;
+export type RowSession = { id: string; items: readonly RowItem[] };
 export type RowRead = {
   id: string; sessionId: string; readerId: string; period: number; caseId: string; finding: string;
   initial: AnswerPart | null; final: AnswerPart | null; shownAt: string;

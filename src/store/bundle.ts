@@ -1,7 +1,8 @@
 /**
  * A study in and out of the store as a bundle snapshot (io/bundle): gather one to save, restore
  * one on a workstation that lacks the study, or merge another workstation's copy into the stored
- * study. Restore and merge each change the database in one transaction, or not at all.
+ * study. Restore and merge each change the database in one transaction, or not at all, and write the
+ * read packs of the completed sessions (read-packs.ts) in that transaction.
  */
 import { sha256Hex } from '../core/chain';
 import { faultText } from '../io/bundle/fault';
@@ -13,6 +14,7 @@ import { getCaseSet, saveCaseSet } from './case-sets';
 import type { HeedDb } from './db';
 import { appendEvent, eventsOfStudy } from './events';
 import { InputError } from './input-error';
+import { packsOf } from './read-packs';
 import { listReaders } from './readers';
 import type { StoredCaseSet, StoredEvent, StoredRead, StoredStudy } from './records';
 import { getStudy } from './studies';
@@ -72,7 +74,7 @@ export const restoreStudy = async (db: HeedDb, snapshot: StudySnapshot): Promise
   if (!match && !snapshot.images) {
     throw new InputError(`The case set "${snapshot.caseSet.name}" (${snapshot.caseSet.manifest.cases.length} cases) of this study is not on this workstation, and the bundle does not carry its images: import that case set first, or save the bundle again with its images.`);
   }
-  return db.transaction('rw', [db.caseSets, db.images, db.studies, db.readers, db.sessions, db.reads, db.events], async () => {
+  return db.transaction('rw', [db.caseSets, db.images, db.studies, db.readers, db.sessions, db.reads, db.packs, db.events], async () => {
     const caseSet = match ?? await saveCaseSet(db, { name: snapshot.caseSet.name, source: 'import', manifest: snapshot.caseSet.manifest, images: snapshot.images ?? [] });
     const { study, events, reads } = storedRecords(snapshot, caseSet.id);
     await db.studies.add(study);
@@ -80,6 +82,7 @@ export const restoreStudy = async (db: HeedDb, snapshot: StudySnapshot): Promise
     await db.sessions.bulkAdd(snapshot.sessions);
     await db.events.bulkAdd(events);
     await db.reads.bulkAdd(reads);
+    await db.packs.bulkAdd(packsOf(snapshot.sessions, reads));
     await appendEvent(db, null, 'study-restored', { studyId: study.id, name: study.name, caseSetId: caseSet.id, head: events.at(-1)?.hash ?? null });
     return { study, caseSet, caseSetImported: !match };
   });
@@ -102,11 +105,12 @@ export const mergeIntoStudy = async (db: HeedDb, other: MergeInput): Promise<Mer
     && merged.readers.length === local.readers.length && merged.sessions.length === local.sessions.length;
   if (unchanged) return { added: 0, snapshot: local };
   const study = await getStudy(db, local.study.id);
-  await db.transaction('rw', [db.studies, db.readers, db.sessions, db.reads, db.events], async () => {
+  await db.transaction('rw', [db.studies, db.readers, db.sessions, db.reads, db.packs, db.events], async () => {
     const id = study.id;
     await db.readers.where('studyId').equals(id).delete();
     await db.sessions.where('studyId').equals(id).delete();
     await db.reads.where('studyId').equals(id).delete();
+    await db.packs.where('studyId').equals(id).delete();
     await db.events.where('studyId').equals(id).delete();
     const { events, reads } = storedRecords(merged, study.caseSetId);
     await db.studies.put({ ...study, lockedAt: merged.study.lockedAt });
@@ -114,6 +118,7 @@ export const mergeIntoStudy = async (db: HeedDb, other: MergeInput): Promise<Mer
     await db.sessions.bulkAdd(merged.sessions);
     await db.events.bulkAdd(events);
     await db.reads.bulkAdd(reads);
+    await db.packs.bulkAdd(packsOf(merged.sessions, reads));
   });
   return { added, snapshot: merged };
 };

@@ -5,7 +5,7 @@
 import { Dexie, type EntityTable } from 'dexie';
 import { chainExistingRecords } from './chain-upgrade';
 import type {
-  StoredCaseSet, StoredEvent, StoredImage, StoredRead, StoredReader, StoredSession, StoredSetting, StoredStudy,
+  StoredCaseSet, StoredEvent, StoredImage, StoredPack, StoredRead, StoredReader, StoredSession, StoredSetting, StoredStudy,
 } from './records';
 
 export const DB_NAME = 'heed';
@@ -40,6 +40,20 @@ export const SCHEMA_V4 = {
   settings: 'key',
 } as const;
 
+/**
+ * Version 5: read packs, one record per completed session holding that session's reads in one
+ * JSON text (read-packs.ts), keyed by session and found by study. A derived copy of the `reads`
+ * records, never the source of truth; a new empty table, filled as sessions complete or a study is
+ * read (packs are rebuilt when missing), so the upgrade moves nothing. Sessions gain an index on
+ * [studyId+completedAt]: it lists a study's completed sessions with their completion times
+ * without reading the session records (an open session's null is not a key, so it is not listed).
+ */
+export const SCHEMA_V5 = {
+  ...SCHEMA_V4,
+  sessions: 'id, studyId, readerId, [studyId+completedAt]',
+  packs: 'sessionId, studyId',
+} as const;
+
 export type HeedDb = Dexie & {
   caseSets: EntityTable<StoredCaseSet, 'id'>;
   images: Dexie.Table<StoredImage, [string, string]>;
@@ -49,6 +63,7 @@ export type HeedDb = Dexie & {
   reads: EntityTable<StoredRead, 'id'>;
   events: EntityTable<StoredEvent, 'seq'>;
   settings: EntityTable<StoredSetting, 'key'>;
+  packs: EntityTable<StoredPack, 'sessionId'>;
 };
 
 /** Opens (and upgrades) the database. Strict durability: a committed answer is flushed to disk. */
@@ -69,5 +84,6 @@ export const openHeedDb = (name: string = DB_NAME): HeedDb => {
   });
   db.version(3).stores(SCHEMA_V3).upgrade((tx) => chainExistingRecords(tx));
   db.version(4).stores(SCHEMA_V4);
+  db.version(5).stores(SCHEMA_V5);
   return db;
 };

@@ -95,6 +95,24 @@ export type StoredRead = {
   hash?: string;
 };
 
+/**
+ * A completed session's reads in one record (read-packs.ts), so a study is read as one record per
+ * session rather than one per answer. Derived from the `reads` records, which stay the source of
+ * truth: a pack is used only while `count` equals the number of the session's stored reads and
+ * `completedAt` the session's.
+ */
+export type StoredPack = {
+  sessionId: string;
+  studyId: string;
+  readerId: string;
+  period: number;
+  completedAt: string;
+  /** how many `reads` records the session had when the pack was made */
+  count: number;
+  /** the reads as JSON columns (read-packs.ts, PackColumns) */
+  reads: string;
+};
+
 export type StoredEvent = {
   seq?: number;
   at: string;

@@ -9,6 +9,7 @@ import type { HeedDb } from './db';
 import { appendEvent, chainHead, chainKey, guessedHead, linkEvent, rememberHead } from './events';
 import type { StoredEvent, StoredRead, StoredSession, StoredStudy, WashoutOverride } from './records';
 import { genesisHash } from '../core/chain';
+import { packSessionSoon } from './read-packs';
 
 export const sessionId = (readerId: string, period: number): string => `${readerId}/${period}`;
 const readId = (session: string, caseId: string, finding: string): string => `${session}/${caseId}/${finding}`;
@@ -101,7 +102,10 @@ export const commitAnswerAndRead = async (db: HeedDb, input: AnswerCommit): Prom
       // below decides, and gives the refusal its message
     }
   }
-  return commitChecked(db, input);
+  const committed = await commitChecked(db, input);
+  // the session's last answer (only the checked commit writes it): its read pack, in a transaction of its own, not awaited
+  if (committed.position.done) packSessionSoon(db, input.session.id);
+  return committed;
 };
 
 class GuessMissed extends Error {}

@@ -7,6 +7,7 @@
 import { applySkip, currentPosition, type SessionPosition } from '../core/session';
 import type { HeedDb } from './db';
 import { appendEvent } from './events';
+import { packSessionSoon } from './read-packs';
 import type { StoredRead } from './records';
 
 export type SkipReason = 'image-undecodable';
@@ -14,7 +15,13 @@ export type SkipReason = 'image-undecodable';
 const toAnswer = (read: StoredRead) => ({ caseId: read.caseId, finding: read.finding, initial: read.initial, final: read.final });
 
 /** Skips the current case of a session; resolves with the next position once stored. */
-export const skipCase = (db: HeedDb, sessionId: string, findings: string[], caseId: string, reason: SkipReason, detail: string): Promise<SessionPosition> =>
+export const skipCase = async (db: HeedDb, sessionId: string, findings: string[], caseId: string, reason: SkipReason, detail: string): Promise<SessionPosition> => {
+  const next = await skipInTransaction(db, sessionId, findings, caseId, reason, detail);
+  if (next.done) packSessionSoon(db, sessionId); // the session is complete: its read pack, not awaited
+  return next;
+};
+
+const skipInTransaction = (db: HeedDb, sessionId: string, findings: string[], caseId: string, reason: SkipReason, detail: string): Promise<SessionPosition> =>
   db.transaction('rw', db.reads, db.sessions, db.events, async () => {
     const session = await db.sessions.get(sessionId);
     if (!session) throw new Error(`no session ${sessionId}`);

@@ -32,7 +32,7 @@ export type DeleteStudyChoice = {
 export type DeletedStudy = { name: string; readers: number; reads: number; events: number };
 
 export const deleteStudy = (db: HeedDb, id: string, choice: DeleteStudyChoice): Promise<DeletedStudy> =>
-  db.transaction('rw', [db.studies, db.readers, db.sessions, db.reads, db.events], async () => {
+  db.transaction('rw', [db.studies, db.readers, db.sessions, db.reads, db.packs, db.events], async () => {
     const study = await db.studies.get(id);
     if (!study) throw new InputError('That study is no longer stored.');
     if (!choice.withoutBundle) {
@@ -41,6 +41,7 @@ export const deleteStudy = (db: HeedDb, id: string, choice: DeleteStudyChoice): 
     const readers = await db.readers.where('studyId').equals(id).delete();
     await db.sessions.where('studyId').equals(id).delete();
     const reads = await db.reads.where('studyId').equals(id).delete();
+    await db.packs.where('studyId').equals(id).delete();
     const events = await db.events.where('studyId').equals(id).delete();
     await db.studies.delete(id);
     await appendEvent(db, null, 'study-deleted', { studyId: id, name: study.name, readers, reads, events, withoutBundle: true });

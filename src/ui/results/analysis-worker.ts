@@ -3,32 +3,30 @@
 // curves the results page draws from the same reads. Given a study (database name and study id)
 // rather than rows, the worker reads the study's rows from IndexedDB itself: for a large study
 // (200,000 reads) loading, joining and copying the rows to a worker would otherwise hold the
-// page's main thread for seconds.
-import { analyzeReads, type CovarianceMethod } from '../../analysis/engine';
-import { rocCurves } from '../../analysis/roc-curves';
+// page's main thread for seconds. A large study's report comes in two steps (analysis-steps.ts):
+// the estimates first, then the bootstrap intervals.
+import type { CovarianceMethod } from '../../analysis/engine';
 import type { ReadRow } from '../../core/read-log';
-import { openHeedDb } from '../../store/db';
-import { studyReadRows } from '../../store/read-log-rows';
+import { openHeedDb, type HeedDb } from '../../store/db';
+import { studyReadRowsPacking } from '../../store/read-log-rows';
+import { analyseInSteps } from './analysis-steps';
 
 export type AnalysisRequest = { seed: number; boot: number; covariance?: CovarianceMethod } & ({ rows: ReadRow[] } | { dbName: string; studyId: string });
 
-const rowsOf = async (request: AnalysisRequest): Promise<ReadRow[]> => {
-  if ('rows' in request) return request.rows;
-  const db = openHeedDb(request.dbName);
-  try {
-    return await studyReadRows(db, request.studyId);
-  } finally {
-    db.close();
-  }
-};
-
 self.onmessage = async (event: MessageEvent<AnalysisRequest>) => {
+  const request = event.data;
+  const db = 'rows' in request ? null : openHeedDb(request.dbName);
   try {
-    const { seed, boot, covariance } = event.data;
-    const rows = await rowsOf(event.data);
+    const { seed, boot, covariance } = request;
+    // packs the study lacked are stored while the analysis runs (read-log-rows.ts)
+    const { rows, packing } = 'rows' in request ? { rows: request.rows, packing: Promise.resolve(0) } : await studyReadRowsPacking(db as HeedDb, request.studyId);
     if (rows.length === 0) self.postMessage({ ok: true, empty: true });
-    else self.postMessage({ ok: true, report: analyzeReads(rows, { seed, boot, covariance }), roc: rocCurves(rows) });
+    else analyseInSteps(rows, { seed, boot, covariance }, (step) => self.postMessage({ ok: true, ...step }));
+    await packing;
   } catch (error) {
     self.postMessage({ ok: false, error: error instanceof Error ? error.message : String(error) });
+  } finally {
+    db?.close();
+    self.close(); // one request per worker; it ends itself once the packs are stored
   }
 };

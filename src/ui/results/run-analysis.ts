@@ -2,20 +2,32 @@ import type { AnalysisReport, CovarianceMethod } from '../../analysis/engine';
 import type { FindingRoc } from '../../analysis/roc-curves';
 import type { ReadRow } from '../../core/read-log';
 import type { HeedDb } from '../../store/db';
+import type { AnalysisStep } from './analysis-steps';
 import type { AnalysisRequest } from './analysis-worker';
 
 export type AnalysisOutput = { report: AnalysisReport; roc: FindingRoc[] };
 
-type Reply = ({ ok: true; empty?: false } & AnalysisOutput) | { ok: true; empty: true } | { ok: false; error: string };
+type Reply = ({ ok: true; empty?: false } & AnalysisStep) | { ok: true; empty: true } | { ok: false; error: string };
 
-const inWorker = (request: AnalysisRequest): Promise<AnalysisOutput | null> =>
+/** Called with the report without its bootstrap intervals, when a large study's analysis sends it first (analysis-steps.ts). */
+export type OnEstimates = (output: AnalysisOutput) => void;
+
+const inWorker = (request: AnalysisRequest, onEstimates?: OnEstimates): Promise<AnalysisOutput | null> =>
   new Promise((resolve, reject) => {
     const worker = new Worker(new URL('./analysis-worker.ts', import.meta.url), { type: 'module' });
+    let roc: FindingRoc[] = [];
     worker.onmessage = (event: MessageEvent<Reply>) => {
-      worker.terminate();
       const reply = event.data;
-      if (!reply.ok) reject(new Error(reply.error));
-      else resolve(reply.empty ? null : { report: reply.report, roc: reply.roc });
+      if (reply.ok && !reply.empty && reply.step === 'estimates') {
+        roc = reply.roc;
+        onEstimates?.({ report: reply.report, roc });
+        return;
+      }
+      // the worker ends itself after the reply (it may still be storing read packs); a failed one is ended here
+      if (!reply.ok) {
+        worker.terminate();
+        reject(new Error(reply.error));
+      } else resolve(reply.empty ? null : { report: reply.report, roc: reply.roc ?? roc });
     };
     worker.onerror = (event) => { worker.terminate(); reject(new Error(event.message)); };
     worker.postMessage(request);
@@ -31,7 +43,8 @@ export const runAnalysis = async (rows: ReadRow[], seed: number, boot: number, c
 /**
  * A stored study's analysis, its rows read from the database by the worker itself, so the page's
  * main thread neither loads nor copies them (a large study stays responsive). Null when the study
- * has no reads yet.
+ * has no reads yet. Resolves with the complete report; a large study's estimates come first,
+ * to `onEstimates`.
  */
-export const runStudyAnalysis = (db: HeedDb, studyId: string, seed: number, boot: number, covariance: CovarianceMethod = 'jackknife'): Promise<AnalysisOutput | null> =>
-  inWorker({ dbName: db.name, studyId, seed, boot, covariance });
+export const runStudyAnalysis = (db: HeedDb, studyId: string, seed: number, boot: number, covariance: CovarianceMethod = 'jackknife', onEstimates?: OnEstimates): Promise<AnalysisOutput | null> =>
+  inWorker({ dbName: db.name, studyId, seed, boot, covariance }, onEstimates);

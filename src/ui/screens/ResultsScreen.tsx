@@ -8,7 +8,8 @@ import { useDb } from '../db-context';
 import { AnalysisOptions } from '../results/AnalysisOptions';
 import { drawAllPlotsThen } from '../results/PlotFigure';
 import { ResultsPage } from '../results/ResultsPage';
-import { runStudyAnalysis } from '../results/run-analysis';
+import { runStudyAnalysis, type AnalysisOutput } from '../results/run-analysis';
+import type { StoredStudy } from '../../store/records';
 import { signal } from '../signals';
 import { actions } from '../state/app-state';
 import { useAsync } from '../use-async';
@@ -17,16 +18,25 @@ export const ResultsScreen = ({ studyId }: { studyId: string }) => {
   const db = useDb();
   const [seed, setSeed] = useState(DEFAULT_SEED);
   const [boot, setBoot] = useState(DEFAULT_BOOT);
+  // a large study's estimates, shown while its bootstrap intervals are computed (results/analysis-steps.ts)
+  const [early, setEarly] = useState<{ study: StoredStudy; seed: number; boot: number; output: AnalysisOutput } | null>(null);
   const results = useAsync(useCallback(async () => {
     // the worker reads the study's rows itself: the page's main thread stays free on a large study
-    const [study, output] = await Promise.all([getStudy(db, studyId), runStudyAnalysis(db, studyId, seed, boot)]);
-    return { study, seed, boot, output };
+    const studyLoaded = getStudy(db, studyId);
+    const output = await runStudyAnalysis(db, studyId, seed, boot, 'jackknife', (first) => {
+      void studyLoaded.then((study) => setEarly({ study, seed, boot, output: first }), () => undefined);
+    });
+    return { study: await studyLoaded, seed, boot, output };
   }, [db, studyId, seed, boot]));
-  const value = results.value;
-  useEffect(() => { if (value || results.error) signal('ready', { screen: 'results', seed: value?.seed, boot: value?.boot }); }, [value, results.error]);
-  const busy = !results.error && (value === undefined || value.seed !== seed || value.boot !== boot);
+  const complete = results.value;
+  useEffect(() => { if (complete || results.error) signal('ready', { screen: 'results', seed: complete?.seed, boot: complete?.boot }); }, [complete, results.error]);
+  const current = (v: { seed: number; boot: number } | null | undefined) => v != null && v.seed === seed && v.boot === boot;
+  // the estimates of the current seed and resamples, until their complete report arrives
+  const estimates = !results.error && !current(complete) && current(early) ? early : null;
+  const value = estimates ?? complete;
+  const busy = !results.error && !current(complete);
   return (
-    <main className="page page-wide results-screen" data-seed={value?.seed} data-boot={value?.boot}>
+    <main className="page page-wide results-screen" data-seed={complete?.seed} data-boot={complete?.boot} data-intervals={estimates ? 'computing' : undefined}>
       <header className="page-head">
         <button type="button" className="link" onClick={() => actions.openStudy(studyId)}>← Study</button>
         <div className="head-row">
@@ -42,6 +52,7 @@ export const ResultsScreen = ({ studyId }: { studyId: string }) => {
       {value?.output && (
         <>
           <p className="muted" data-reads={value.output.report.group.reads}>{value.output.report.group.reads} reads analysed; {value.output.report.group.practice_excluded} practice reads left out.</p>
+          {estimates && <p role="status" aria-busy="true"><strong>Still computing the 95% bootstrap intervals of the reader averages</strong> ({estimates.boot} resamples): they show as missing until then. Every estimate, and every other interval, is final.</p>}
           <ResultsPage report={value.output.report} roc={value.output.roc} />
         </>
       )}

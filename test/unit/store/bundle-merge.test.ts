@@ -27,6 +27,11 @@ describe('merging a workstation bundle into a stored study', () => {
 
     const merged = await mergeStudyBundle(a, study.id, 'b.zip', fromB);
     expect(merged).toEqual({ ok: true, added: 4 });
+    // the merged study's completed sessions are packed in the merge's transaction (src/store/read-packs.ts)
+    const completed = (await a.sessions.where('studyId').equals(study.id).toArray()).filter((s) => s.completedAt !== null).map((s) => s.id).sort();
+    expect(completed.length).toBeGreaterThan(0);
+    expect((await a.packs.where('studyId').equals(study.id).toArray()).map((p) => `${p.sessionId}:${p.count}`).sort())
+      .toEqual(await Promise.all(completed.map(async (id) => `${id}:${await a.reads.where('sessionId').equals(id).count()}`)));
     expect(await studyReadRows(a, study.id)).toEqual(await studyReadRows(b, study.id));
     // the merged study is a sound chain: its bundle verifies
     expect(readBundle(writeBundle(await gatherStudySnapshot(a, study.id))).ok).toBe(true);

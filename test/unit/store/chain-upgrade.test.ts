@@ -67,7 +67,7 @@ describe('hash chain in the store', () => {
 
     const db = openHeedDb(name);
     await db.open();
-    expect(db.verno).toBe(4);
+    expect(db.verno).toBe(5);
     const events = await eventsOfStudy(db, 'st1');
     expect(events.map((e) => e.type)).toEqual(['study-created', 'initial-committed', 'final-committed']);
     let prev = genesisHash('st1');

@@ -163,7 +163,7 @@ describe('store', () => {
 
     const db = openHeedDb(name);
     await db.open();
-    expect(db.verno).toBe(4);
+    expect(db.verno).toBe(5);
     const reads = await db.reads.where('studyId').equals('st1').toArray();
     expect(reads.map((r) => [r.id, r.final?.ms])).toEqual([['rd/1/c1/target', 1200]]);
     expect((await db.events.toArray())[0]?.studyId).toBeNull();

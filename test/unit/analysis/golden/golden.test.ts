@@ -6,8 +6,8 @@
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { analyzeColumns, analyzeReads } from '../../../../src/analysis/engine';
-import { columnsBuilder, columnsOfLog } from '../../../../src/analysis/read-columns';
+import { analyzeColumns, analyzeReads, DEFAULT_BOOT, readerAveragedOfColumns, withReaderAveraged } from '../../../../src/analysis/engine';
+import { columnsBuilder, columnsOfLog, logColumns } from '../../../../src/analysis/read-columns';
 import { readLogCsv } from '../../../../src/io/read-log-export';
 import { lineCount, parseReadLog, parseReadLogBytesInto, parseReadLogColumns } from '../../../../src/io/read-log-parse';
 import { goldenLogs } from './golden-logs';
@@ -36,6 +36,13 @@ describe('analysis engine against its goldens', () => {
       parseReadLogBytesInto(bytes, columns.push);
       expect(cols).toEqual(columns.done());
       expect(JSON.stringify(analyzeColumns(cols, log.options))).toBe(golden(log.name));
+    });
+    it(`${log.name}: the results page's two steps (boot = 0 first, then the bootstrap filled in) give the golden report`, () => {
+      const cols = logColumns(log.rows);
+      const boot = log.options.boot ?? DEFAULT_BOOT;
+      const first = analyzeColumns(cols, { ...log.options, boot: 0 });
+      const averaged = readerAveragedOfColumns(cols, log.options);
+      expect(JSON.stringify(withReaderAveraged(first, averaged, boot))).toBe(golden(log.name));
     });
   }
 });

@@ -1,0 +1,36 @@
+// The results page's analysis in two steps (src/ui/results/analysis-steps.ts): on a large log the
+// estimates come first (boot = 0), then the complete report, which must be analyzeReads' own.
+import { analyzeReads } from '../../../src/analysis/engine';
+import { rocCurves } from '../../../src/analysis/roc-curves';
+import { analyseInSteps, ESTIMATES_FIRST_FROM, type AnalysisStep } from '../../../src/ui/results/analysis-steps';
+import { simulateReadRows } from '../../../bench/simulate-log';
+
+const rows = simulateReadRows({ seed: 9, readers: 5, cases: 60, practiceCases: 2 });
+const steps = (estimatesFirstFrom?: number, boot = 200): AnalysisStep[] => {
+  const sent: AnalysisStep[] = [];
+  analyseInSteps(rows, { seed: 4, boot }, (s) => sent.push(s), estimatesFirstFrom);
+  return sent;
+};
+
+describe('the results page analysis in steps', () => {
+  it('sends the estimates first on a large log, then the complete report analyzeReads gives', () => {
+    const sent = steps(rows.length);
+    expect(sent.map((s) => s.step)).toEqual(['estimates', 'complete']);
+    const [first, complete] = sent as [AnalysisStep, AnalysisStep];
+    expect(JSON.stringify(first.report)).toBe(JSON.stringify(analyzeReads(rows, { seed: 4, boot: 0 })));
+    expect(first.report.group.findings[0]?.reader_averaged.auc_difference.lower).toBeNull();
+    expect(JSON.stringify(complete.report)).toBe(JSON.stringify(analyzeReads(rows, { seed: 4, boot: 200 })));
+    expect(complete.report.group.findings[0]?.reader_averaged.auc_difference.lower).not.toBeNull();
+    expect(first.roc).toEqual(rocCurves(rows));
+    expect(complete.roc).toBeNull();
+  });
+
+  it('sends one complete report below the size, or without resamples', () => {
+    expect(rows.length).toBeLessThan(ESTIMATES_FIRST_FROM);
+    for (const sent of [steps(), steps(rows.length, 0)]) {
+      expect(sent.map((s) => s.step)).toEqual(['complete']);
+      expect(sent[0]?.roc).toEqual(rocCurves(rows));
+    }
+    expect(JSON.stringify(steps()[0]?.report)).toBe(JSON.stringify(analyzeReads(rows, { seed: 4, boot: 200 })));
+  });
+});
