@@ -54,6 +54,9 @@ export const SCHEMA_V5 = {
   packs: 'sessionId, studyId',
 } as const;
 
+/** The newest schema version (IndexedDB itself reports it times ten: Dexie's convention). */
+export const SCHEMA_VERSION = 5; // raise with each db.version() added below (test/unit/store/warm-open.test.ts checks it)
+
 export type HeedDb = Dexie & {
   caseSets: EntityTable<StoredCaseSet, 'id'>;
   images: Dexie.Table<StoredImage, [string, string]>;

@@ -5,6 +5,7 @@
  * the database and the demo set as before); on a relaunch it comes first and the app finds its data.
  */
 import { inject } from 'vitest';
+import { SCHEMA_VERSION } from '../../src/store/db';
 import { newProfileDir, removeProfileDir, startChromium, type RunningChromium } from './support/chromium';
 import { homePage } from './support/pages';
 
@@ -57,6 +58,6 @@ describe('the early open of the database', () => {
     expect(again.opens[0]?.at).toBeLessThan(again.mountedAt);
     // the stored demo set is found, not made again
     await again.chrome.page.getByText('Vesper Valley Imaging (demo)').waitFor();
-    expect(await again.chrome.page.evaluate(async () => (await indexedDB.databases()).map((d) => [d.name, d.version]))).toEqual([['heed', 40]]);
+    expect(await again.chrome.page.evaluate(async () => (await indexedDB.databases()).map((d) => [d.name, d.version]))).toEqual([['heed', SCHEMA_VERSION * 10]]);
   });
 });
