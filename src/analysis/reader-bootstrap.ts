@@ -177,13 +177,23 @@ export const readerAveragedOf = (cols: ReadColumns, all: Int32Array, perReader: 
   const cnt = new Int32Array(F);
   const w = new Int32Array(C);
 
+  // each reader's figures once per resample, however often the resample draws them (a draw of R
+  // readers from R holds about 63% of them), then added in the order drawn, as if recomputed
+  const figures = new Float64Array(R * F);
+  const computed = new Uint8Array(R);
   const average = (pick: (i: number) => number): void => {
     sum.fill(0);
     cnt.fill(0);
+    computed.fill(0);
     for (let i = 0; i < R; i++) {
-      readerFigures(readers[pick(i)] as ReaderConds, w, hist, kinds, one);
+      const k = pick(i);
+      if (computed[k] === 0) {
+        readerFigures(readers[k] as ReaderConds, w, hist, kinds, one);
+        figures.set(one, k * F);
+        computed[k] = 1;
+      }
       for (let f = 0; f < F; f++) {
-        const v = one[f] as number;
+        const v = figures[k * F + f] as number;
         if (!Number.isNaN(v)) {
           sum[f] = (sum[f] as number) + v;
           cnt[f] = (cnt[f] as number) + 1;
