@@ -1,5 +1,5 @@
 import type { ReadRow } from '../core/read-log';
-import { seededInts } from './prng';
+import { seededInts, type SeededInts } from './prng';
 import { quantileSorted } from './quantile';
 import { allRows, firstAppearance, readColumns, type ReadColumns } from './read-columns';
 import { partitionReads, sectionReads, type ReadSet, type SectionReads } from './read-set';
@@ -157,71 +157,144 @@ export const readerAveraged = (reads: readonly ReadRow[], options: { seed: numbe
  * of first appearance there), `perReader` each reader's share in order of first appearance.
  */
 export const readerAveragedOf = (cols: ReadColumns, all: Int32Array, perReader: readonly SectionReads[], options: { seed: number; boot: number }): ReaderAveraged => {
+  const plan = bootstrapPlanOf(cols, all, perReader, options);
+  return readerAveragedOfDraws(plan, bootstrapResamples(plan, 0, plan.boot));
+};
+
+/**
+ * What the resamples of one finding need, in plain data (numbers and typed arrays, so it can be
+ * copied to another thread): each reader's reads as flat arrays, the counts of readers and cases,
+ * and the point estimates. Throws RangeError when boot is not a whole number >= 0 or the seed not
+ * a whole number.
+ */
+export type BootstrapPlan = {
+  seed: number;
+  boot: number;
+  readers: ReaderConds[];
+  cases: number;
+  maxLevels: number;
+  estimate: (number | null)[];
+  readersUsed: number[];
+};
+
+export const bootstrapPlanOf = (cols: ReadColumns, all: Int32Array, perReader: readonly SectionReads[], options: { seed: number; boot: number }): BootstrapPlan => {
   const { seed, boot } = options;
   if (!Number.isInteger(boot) || boot < 0) throw new RangeError(`boot must be a whole number >= 0, got ${boot}`);
-  const rng = seededInts(seed);
+  seededInts(seed);
   const cases = firstAppearance(cols.case, all, cols.caseCount);
   const caseIndex = new Int32Array(cols.caseCount);
   cases.first.forEach((c, i) => {
     caseIndex[c] = i;
   });
   const readers: ReaderConds[] = perReader.map((g) => ({ unaided: toCond(cols, g.unaided, caseIndex), aided: toCond(cols, g.aided, caseIndex) }));
-  const R = readers.length;
-  const C = cases.count;
   let maxLevels = 1;
   for (const r of readers) maxLevels = Math.max(maxLevels, r.unaided?.levels ?? 0, r.aided?.levels ?? 0);
-  const hist = new Int32Array(2 * maxLevels);
-  const kinds = new Int32Array(32);
-  const one = new Float64Array(F);
-  const sum = new Float64Array(F);
-  const cnt = new Int32Array(F);
-  const w = new Int32Array(C);
+  const plan: BootstrapPlan = { seed, boot, readers, cases: cases.count, maxLevels, estimate: [], readersUsed: [] };
+  const work = workspace(plan);
+  work.w.fill(1);
+  average(plan, work, null);
+  plan.estimate = Array.from(work.sum, (s, f) => ((work.cnt[f] as number) > 0 ? s / (work.cnt[f] as number) : null));
+  plan.readersUsed = Array.from(work.cnt);
+  return plan;
+};
 
-  // each reader's figures once per resample, however often the resample draws them (a draw of R
-  // readers from R holds about 63% of them), then added in the order drawn, as if recomputed
-  const figures = new Float64Array(R * F);
-  const computed = new Uint8Array(R);
-  const average = (pick: (i: number) => number): void => {
-    sum.fill(0);
-    cnt.fill(0);
-    computed.fill(0);
-    for (let i = 0; i < R; i++) {
-      const k = pick(i);
-      if (computed[k] === 0) {
-        readerFigures(readers[k] as ReaderConds, w, hist, kinds, one);
-        figures.set(one, k * F);
-        computed[k] = 1;
-      }
-      for (let f = 0; f < F; f++) {
-        const v = figures[k * F + f] as number;
-        if (!Number.isNaN(v)) {
-          sum[f] = (sum[f] as number) + v;
-          cnt[f] = (cnt[f] as number) + 1;
-        }
-      }
-    }
+type Workspace = {
+  hist: Int32Array; kinds: Int32Array; one: Float64Array; sum: Float64Array; cnt: Int32Array;
+  w: Int32Array; picks: Int32Array; figures: Float64Array; computed: Uint8Array;
+};
+
+const workspace = (plan: BootstrapPlan): Workspace => {
+  const R = plan.readers.length;
+  return {
+    hist: new Int32Array(2 * plan.maxLevels), kinds: new Int32Array(32), one: new Float64Array(F),
+    sum: new Float64Array(F), cnt: new Int32Array(F), w: new Int32Array(plan.cases), picks: new Int32Array(R),
+    figures: new Float64Array(R * F), computed: new Uint8Array(R),
   };
+};
 
-  w.fill(1);
-  average((i) => i);
-  const estimate = Array.from(sum, (s, f) => ((cnt[f] as number) > 0 ? s / (cnt[f] as number) : null));
-  const readersUsed = Array.from(cnt);
-
-  const draws = AVERAGED_FIGURES.map(() => new Float64Array(boot));
-  for (let b = 0; b < boot; b++) {
-    w.fill(0);
-    for (let j = 0; j < C; j++) {
-      const c = rng.below(C);
-      w[c] = (w[c] as number) + 1;
+// Reader-averaged figures under the case weights work.w, over the readers work.picks (all
+// readers in order when picks is null) into work.sum and work.cnt. Each reader's figures are
+// computed once per resample, however often the resample draws them (a draw of R readers from R
+// holds about 63% of them), then added in the order drawn, as if recomputed.
+const average = (plan: BootstrapPlan, work: Workspace, picks: Int32Array | null): void => {
+  const { sum, cnt, computed, figures, one, w, hist, kinds } = work;
+  const R = plan.readers.length;
+  sum.fill(0);
+  cnt.fill(0);
+  computed.fill(0);
+  for (let i = 0; i < R; i++) {
+    const k = picks === null ? i : (picks[i] as number);
+    if (computed[k] === 0) {
+      readerFigures(plan.readers[k] as ReaderConds, w, hist, kinds, one);
+      figures.set(one, k * F);
+      computed[k] = 1;
     }
-    const picks = Int32Array.from({ length: R }, () => rng.below(R));
-    average((i) => picks[i] as number);
-    for (let f = 0; f < F; f++) (draws[f] as Float64Array)[b] = (cnt[f] as number) > 0 ? (sum[f] as number) / (cnt[f] as number) : Number.NaN;
+    for (let f = 0; f < F; f++) {
+      const v = figures[k * F + f] as number;
+      if (!Number.isNaN(v)) {
+        sum[f] = (sum[f] as number) + v;
+        cnt[f] = (cnt[f] as number) + 1;
+      }
+    }
   }
+};
 
+// One resample's draws from the seeded stream: C cases with replacement as weights, then R readers.
+const drawResample = (rng: SeededInts, work: Workspace, C: number, R: number): void => {
+  const { w, picks } = work;
+  w.fill(0);
+  for (let j = 0; j < C; j++) {
+    const c = rng.below(C);
+    w[c] = (w[c] as number) + 1;
+  }
+  for (let i = 0; i < R; i++) picks[i] = rng.below(R);
+};
+
+/**
+ * The reader-averaged figures of resamples [from, to) of a plan: resample b is the b-th draw of
+ * the seeded stream (the draws of the resamples before `from` are made and dropped), so the
+ * pieces of any split of [0, boot), joined in order, are bit for bit the whole. Returns
+ * (to − from)·F numbers, resample by resample in the order of AVERAGED_FIGURES (NaN where no
+ * drawn reader has the figure). Throws RangeError unless 0 <= from <= to <= boot, whole numbers.
+ */
+export const bootstrapResamples = (plan: BootstrapPlan, from: number, to: number): Float64Array => {
+  if (!Number.isInteger(from) || !Number.isInteger(to) || from < 0 || from > to || to > plan.boot) {
+    throw new RangeError(`resamples must be a range within 0..${plan.boot}, got ${from}..${to}`);
+  }
+  const out = new Float64Array((to - from) * F);
+  if (to === from) return out;
+  const rng = seededInts(plan.seed);
+  const work = workspace(plan);
+  const R = plan.readers.length;
+  const C = plan.cases;
+  for (let b = 0; b < from; b++) drawResample(rng, work, C, R);
+  for (let b = from; b < to; b++) {
+    drawResample(rng, work, C, R);
+    average(plan, work, work.picks);
+    const { sum, cnt } = work;
+    const at = (b - from) * F;
+    for (let f = 0; f < F; f++) out[at + f] = (cnt[f] as number) > 0 ? (sum[f] as number) / (cnt[f] as number) : Number.NaN;
+  }
+  return out;
+};
+
+/**
+ * The reader-averaged figures of a plan with its percentile intervals from the figures of all its
+ * resamples (bootstrapResamples of [0, boot), or its pieces joined in order).
+ * Throws RangeError when draws does not hold boot·F numbers.
+ */
+export const readerAveragedOfDraws = (plan: BootstrapPlan, draws: Float64Array): ReaderAveraged => {
+  const { boot, seed, estimate, readersUsed } = plan;
+  if (draws.length !== boot * F) throw new RangeError(`expected ${boot * F} resampled figures, got ${draws.length}`);
   const result = { boot, seed } as ReaderAveraged;
+  const column = new Float64Array(boot);
   AVERAGED_FIGURES.forEach((name, f) => {
-    const defined = (draws[f] as Float64Array).filter((v) => !Number.isNaN(v)).sort();
+    let n = 0;
+    for (let b = 0; b < boot; b++) {
+      const v = draws[b * F + f] as number;
+      if (!Number.isNaN(v)) column[n++] = v;
+    }
+    const defined = column.slice(0, n).sort();
     // common practice, no source: an interval from fewer than half the resamples is not reported
     const ok = boot > 0 && defined.length >= boot / 2 && estimate[f] !== null;
     result[name] = {
