@@ -31,12 +31,15 @@ const IDX = Object.fromEntries(AVERAGED_FIGURES.map((f, i) => [f, i])) as Record
 // One reader's reads of one condition in flat typed arrays, so a resample only reweights them.
 // kind: a read's five flags as one number (truth 1, correct 2, suggestion shown 4, followed 8,
 // suggestion wrong 16); slot: 2·level + truth, its place in the weighted histogram of levels.
-type Cond = { n: number; caseIdx: Int32Array; kind: Uint8Array; slot: Int32Array; levels: number };
+// byCase: the same kind and slot by case number (kind NO_READ and slot 2·levels, both left out of
+// the figures, where the reader has no read of the case), when each case is read at most once and
+// at least half the cases are read: a resample then visits only the cases it drew (about 63%).
+type Cond = { n: number; caseIdx: Int32Array; kind: Uint8Array; slot: Int32Array; levels: number; byCase: { kind: Uint8Array; slot: Int32Array } | null };
 
-const TRUTH = 1, CORRECT = 2, HAS_AI = 4, FOLLOW = 8, AI_WRONG = 16;
+const TRUTH = 1, CORRECT = 2, HAS_AI = 4, FOLLOW = 8, AI_WRONG = 16, NO_READ = 32;
 
 // One reader's reads of one condition, given by row numbers in read order and by score.
-const toCond = (cols: ReadColumns, set: ReadSet, caseIndex: Int32Array): Cond | null => {
+const toCond = (cols: ReadColumns, set: ReadSet, caseIndex: Int32Array, cases: number, byCase: boolean): Cond | null => {
   const n = set.rows.length;
   if (n === 0) return null;
   // score levels: the distinct scores ascending; a read's level is its score's place among them
@@ -48,7 +51,7 @@ const toCond = (cols: ReadColumns, set: ReadSet, caseIndex: Int32Array): Cond | 
     levelOf[r] = levels;
   }
   levels++;
-  const c: Cond = { n, levels, caseIdx: new Int32Array(n), kind: new Uint8Array(n), slot: new Int32Array(n) };
+  const c: Cond = { n, levels, caseIdx: new Int32Array(n), kind: new Uint8Array(n), slot: new Int32Array(n), byCase: null };
   for (let i = 0; i < n; i++) {
     const r = set.rows[i] as number;
     const y = cols.truth[r] as number;
@@ -65,25 +68,34 @@ const toCond = (cols: ReadColumns, set: ReadSet, caseIndex: Int32Array): Cond | 
     c.kind[i] = kind;
     c.slot[i] = 2 * (levelOf[r] as number) + y;
   }
+  if (byCase) c.byCase = byCaseOf(c, cases);
   return c;
+};
+
+const byCaseOf = (c: Cond, cases: number): Cond['byCase'] => {
+  if (2 * c.n < cases) return null;
+  const kind = new Uint8Array(cases).fill(NO_READ);
+  const slot = new Int32Array(cases).fill(2 * c.levels);
+  for (let i = 0; i < c.n; i++) {
+    const j = c.caseIdx[i] as number;
+    if (kind[j] !== NO_READ) return null;
+    kind[j] = c.kind[i] as number;
+    slot[j] = c.slot[i] as number;
+  }
+  return { kind, slot };
 };
 
 // Weighted figures of one condition into out[offset..]: accuracy, sensitivity, specificity, AUC
 // (Mann-Whitney over a weighted histogram of score levels, ties ½), then reliance when aided.
-const condFigures = (c: Cond, w: Int32Array, hist: Int32Array, kinds: Int32Array, out: Float64Array, aided: boolean): void => {
+const condFigures = (c: Cond, work: Workspace, out: Float64Array, aided: boolean): void => {
   // Every sum here is of whole numbers (weights times 0 or 1) far below 2^53, so exact in any
   // order: the weights are summed per kind of read and per histogram slot in one pass without
   // branches, then the figures are read off the 32 kinds.
-  hist.fill(0, 0, 2 * c.levels);
+  const { hist, kinds } = work;
+  hist.fill(0, 0, 2 * c.levels + 1);
   kinds.fill(0);
-  const { caseIdx, kind, slot } = c;
-  for (let i = 0; i < c.n; i++) {
-    const wi = w[caseIdx[i] as number] as number;
-    const k = kind[i] as number;
-    kinds[k] = (kinds[k] as number) + wi;
-    const h = slot[i] as number;
-    hist[h] = (hist[h] as number) + wi;
-  }
+  if (c.byCase !== null) sumDrawn(c.byCase.kind, c.byCase.slot, work);
+  else sumReads(c, work.w, hist, kinds);
   let nw = 0, correct = 0, p = 0, tp = 0, tn = 0, ai = 0, agree = 0, wrong = 0, fw = 0, rr = 0;
   for (let k = 0; k < 32; k++) {
     const wk = kinds[k] as number;
@@ -124,12 +136,39 @@ const condFigures = (c: Cond, w: Int32Array, hist: Int32Array, kinds: Int32Array
   }
 };
 
+// weights per kind and slot, read by read
+const sumReads = (c: Cond, w: Int32Array, hist: Int32Array, kinds: Int32Array): void => {
+  const { caseIdx, kind, slot } = c;
+  for (let i = 0; i < c.n; i++) {
+    const wi = w[caseIdx[i] as number] as number;
+    const k = kind[i] as number;
+    kinds[k] = (kinds[k] as number) + wi;
+    const h = slot[i] as number;
+    hist[h] = (hist[h] as number) + wi;
+  }
+};
+
+// the same sums over the drawn cases only (a case not drawn adds 0); a case the reader did not
+// read goes to kind NO_READ and slot 2·levels, which the figures leave out
+const sumDrawn = (kind: Uint8Array, slot: Int32Array, work: Workspace): void => {
+  const { hist, kinds, drawn, drawnWeight } = work;
+  const m = work.drawnCount;
+  for (let j = 0; j < m; j++) {
+    const c = drawn[j] as number;
+    const wc = drawnWeight[j] as number;
+    const k = kind[c] as number;
+    kinds[k] = (kinds[k] as number) + wc;
+    const h = slot[c] as number;
+    hist[h] = (hist[h] as number) + wc;
+  }
+};
+
 type ReaderConds = { unaided: Cond | null; aided: Cond | null };
 
-const readerFigures = (r: ReaderConds, w: Int32Array, hist: Int32Array, kinds: Int32Array, out: Float64Array): void => {
+const readerFigures = (r: ReaderConds, work: Workspace, out: Float64Array): void => {
   out.fill(Number.NaN);
-  if (r.unaided) condFigures(r.unaided, w, hist, kinds, out, false);
-  if (r.aided) condFigures(r.aided, w, hist, kinds, out, true);
+  if (r.unaided) condFigures(r.unaided, work, out, false);
+  if (r.aided) condFigures(r.aided, work, out, true);
   out[IDX.accuracy_difference] = (out[IDX.aided_accuracy] as number) - (out[IDX.unaided_accuracy] as number);
   out[IDX.auc_difference] = (out[IDX.aided_auc] as number) - (out[IDX.unaided_auc] as number);
 };
@@ -164,8 +203,7 @@ export const readerAveragedOf = (cols: ReadColumns, all: Int32Array, perReader: 
 /**
  * What the resamples of one finding need, in plain data (numbers and typed arrays, so it can be
  * copied to another thread): each reader's reads as flat arrays, the counts of readers and cases,
- * and the point estimates. Throws RangeError when boot is not a whole number >= 0 or the seed not
- * a whole number.
+ * and the point estimates.
  */
 export type BootstrapPlan = {
   seed: number;
@@ -177,7 +215,11 @@ export type BootstrapPlan = {
   readersUsed: number[];
 };
 
-export const bootstrapPlanOf = (cols: ReadColumns, all: Int32Array, perReader: readonly SectionReads[], options: { seed: number; boot: number }): BootstrapPlan => {
+/**
+ * The plan of readerAveragedOf's resamples (same arguments). Throws RangeError when boot is not a
+ * whole number >= 0 or the seed not a whole number.
+ */
+export const bootstrapPlanOf = (cols: ReadColumns, all: Int32Array, perReader: readonly SectionReads[], options: { seed: number; boot: number; byCase?: boolean }): BootstrapPlan => {
   const { seed, boot } = options;
   if (!Number.isInteger(boot) || boot < 0) throw new RangeError(`boot must be a whole number >= 0, got ${boot}`);
   seededInts(seed);
@@ -186,12 +228,15 @@ export const bootstrapPlanOf = (cols: ReadColumns, all: Int32Array, perReader: r
   cases.first.forEach((c, i) => {
     caseIndex[c] = i;
   });
-  const readers: ReaderConds[] = perReader.map((g) => ({ unaided: toCond(cols, g.unaided, caseIndex), aided: toCond(cols, g.aided, caseIndex) }));
+  // byCase false: every reader's sums read by read (the tests compare the two ways)
+  const byCase = options.byCase ?? true;
+  const readers: ReaderConds[] = perReader.map((g) => ({ unaided: toCond(cols, g.unaided, caseIndex, cases.count, byCase), aided: toCond(cols, g.aided, caseIndex, cases.count, byCase) }));
   let maxLevels = 1;
   for (const r of readers) maxLevels = Math.max(maxLevels, r.unaided?.levels ?? 0, r.aided?.levels ?? 0);
   const plan: BootstrapPlan = { seed, boot, readers, cases: cases.count, maxLevels, estimate: [], readersUsed: [] };
   const work = workspace(plan);
   work.w.fill(1);
+  listDrawn(work);
   average(plan, work, null);
   plan.estimate = Array.from(work.sum, (s, f) => ((work.cnt[f] as number) > 0 ? s / (work.cnt[f] as number) : null));
   plan.readersUsed = Array.from(work.cnt);
@@ -201,14 +246,17 @@ export const bootstrapPlanOf = (cols: ReadColumns, all: Int32Array, perReader: r
 type Workspace = {
   hist: Int32Array; kinds: Int32Array; one: Float64Array; sum: Float64Array; cnt: Int32Array;
   w: Int32Array; picks: Int32Array; figures: Float64Array; computed: Uint8Array;
+  /** the cases of weight > 0 (drawnCount of them) and their weights */
+  drawn: Int32Array; drawnWeight: Int32Array; drawnCount: number;
 };
 
 const workspace = (plan: BootstrapPlan): Workspace => {
   const R = plan.readers.length;
   return {
-    hist: new Int32Array(2 * plan.maxLevels), kinds: new Int32Array(32), one: new Float64Array(F),
+    hist: new Int32Array(2 * plan.maxLevels + 1), kinds: new Int32Array(NO_READ + 1), one: new Float64Array(F),
     sum: new Float64Array(F), cnt: new Int32Array(F), w: new Int32Array(plan.cases), picks: new Int32Array(R),
     figures: new Float64Array(R * F), computed: new Uint8Array(R),
+    drawn: new Int32Array(plan.cases), drawnWeight: new Int32Array(plan.cases), drawnCount: 0,
   };
 };
 
@@ -217,7 +265,7 @@ const workspace = (plan: BootstrapPlan): Workspace => {
 // computed once per resample, however often the resample draws them (a draw of R readers from R
 // holds about 63% of them), then added in the order drawn, as if recomputed.
 const average = (plan: BootstrapPlan, work: Workspace, picks: Int32Array | null): void => {
-  const { sum, cnt, computed, figures, one, w, hist, kinds } = work;
+  const { sum, cnt, computed, figures, one } = work;
   const R = plan.readers.length;
   sum.fill(0);
   cnt.fill(0);
@@ -225,7 +273,7 @@ const average = (plan: BootstrapPlan, work: Workspace, picks: Int32Array | null)
   for (let i = 0; i < R; i++) {
     const k = picks === null ? i : (picks[i] as number);
     if (computed[k] === 0) {
-      readerFigures(plan.readers[k] as ReaderConds, w, hist, kinds, one);
+      readerFigures(plan.readers[k] as ReaderConds, work, one);
       figures.set(one, k * F);
       computed[k] = 1;
     }
@@ -250,6 +298,19 @@ const drawResample = (rng: SeededInts, work: Workspace, C: number, R: number): v
   for (let i = 0; i < R; i++) picks[i] = rng.below(R);
 };
 
+const listDrawn = (work: Workspace): void => {
+  const { w, drawn, drawnWeight } = work;
+  let m = 0;
+  for (let c = 0; c < w.length; c++) {
+    const wc = w[c] as number;
+    if (wc === 0) continue;
+    drawn[m] = c;
+    drawnWeight[m] = wc;
+    m++;
+  }
+  work.drawnCount = m;
+};
+
 /**
  * The reader-averaged figures of resamples [from, to) of a plan: resample b is the b-th draw of
  * the seeded stream (the draws of the resamples before `from` are made and dropped), so the
@@ -270,6 +331,7 @@ export const bootstrapResamples = (plan: BootstrapPlan, from: number, to: number
   for (let b = 0; b < from; b++) drawResample(rng, work, C, R);
   for (let b = from; b < to; b++) {
     drawResample(rng, work, C, R);
+    listDrawn(work);
     average(plan, work, work.picks);
     const { sum, cnt } = work;
     const at = (b - from) * F;

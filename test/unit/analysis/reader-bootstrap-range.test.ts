@@ -9,11 +9,11 @@ import { partitionReads, sectionReads } from '../../../src/analysis/read-set';
 
 const F = AVERAGED_FIGURES.length;
 const rows = simulateReadRows({ seed: 5, readers: 6, cases: 60 }).filter((r) => r.practice === 0);
-const planOf = (seed: number, boot: number) => {
-  const cols = readColumns(rows);
+const planOf = (seed: number, boot: number, byCase = true, from = rows) => {
+  const cols = readColumns(from);
   const all = allRows(cols);
   const parts = partitionReads(sectionReads(cols, all), cols.reader, cols.readerIds.length).filter((p) => p !== null);
-  return bootstrapPlanOf(cols, all, parts, { seed, boot });
+  return bootstrapPlanOf(cols, all, parts, { seed, boot, byCase });
 };
 const join = (pieces: Float64Array[]): Float64Array => {
   const out = new Float64Array(pieces.reduce((n, p) => n + p.length, 0));
@@ -55,6 +55,26 @@ describe('bootstrapResamples', () => {
     expect(() => bootstrapResamples(plan, -1, 4)).toThrow(RangeError);
     expect(() => bootstrapResamples(plan, 0.5, 4)).toThrow(RangeError);
     expect(() => readerAveragedOfDraws(plan, new Float64Array(100 * F))).toThrow(RangeError);
+  });
+});
+
+describe('the sums over drawn cases (readers who read at least half the cases, each once)', () => {
+  // R1 reads a fifth of the cases, R2 two thirds, R3 half of them aided only: read by read for R1,
+  // over drawn cases for the others (and for R3's unaided reads)
+  const partial = rows.filter((r) => {
+    const c = Number(r.case_id.replace(/\D/g, ''));
+    if (r.reader_id === 'R1') return c % 5 === 0;
+    if (r.reader_id === 'R2') return c % 3 !== 0;
+    if (r.reader_id === 'R3') return r.assistance === 'none' || c % 2 === 0;
+    return true;
+  });
+  it.each([['fully crossed', rows], ['partly read', partial]])('give the read-by-read figures bit for bit (%s)', (_name, log) => {
+    expect(log.length).toBeGreaterThan(300);
+    const fast = planOf(9, 150, true, log);
+    const slow = planOf(9, 150, false, log);
+    expect(fast.estimate).toEqual(slow.estimate);
+    expect(bits(bootstrapResamples(fast, 0, 150))).toEqual(bits(bootstrapResamples(slow, 0, 150)));
+    expect(bits(bootstrapResamples(fast, 70, 150))).toEqual(bits(bootstrapResamples(slow, 70, 150)));
   });
 });
 
