@@ -10,11 +10,12 @@ import { bootstrapResamples, type BootstrapPlan } from '../analysis/reader-boots
 import type { BootAnswer, BootJob } from './boot-worker';
 
 /**
- * Reads x resamples from which a second thread pays (bench/README.md, "Bootstrap in two threads,
- * fifth session": a thread costs about 40 ms to start and load; 1,000 resamples of 100,000 reads
- * take about 1 s in one thread).
+ * Reads x resamples from which a second thread is started (bench/README.md, "Bootstrap in two
+ * threads, fifth session"): a thread costs 0.1-0.2 s of CPU to start and load its code, and at
+ * 20,000 reads x 1,000 resamples (the bootstrap about 0.2 s) two threads gained nothing measurable;
+ * at 100,000 reads x 1,000 resamples the bootstrap is most of a second.
  */
-export const THREADS_FROM = 20_000_000;
+export const THREADS_FROM = 50_000_000;
 
 /** 1 or 2: HEED_BOOT_THREADS when set to 1 or 2, else 2 from THREADS_FROM reads x resamples. */
 export const bootThreads = (reads: number, boot: number): 1 | 2 => {
