@@ -96,6 +96,11 @@ const condFigures = (c: Cond, work: Workspace, out: Float64Array, aided: boolean
   kinds.fill(0);
   if (c.byCase !== null) sumDrawn(c.byCase.kind, c.byCase.slot, work);
   else sumReads(c, work.w, hist, kinds);
+  figuresOf(c.levels, hist, kinds, out, aided);
+};
+
+// The figures of one condition from its sums per kind and per histogram slot.
+const figuresOf = (levels: number, hist: Int32Array, kinds: Int32Array, out: Float64Array, aided: boolean): void => {
   let nw = 0, correct = 0, p = 0, tp = 0, tn = 0, ai = 0, agree = 0, wrong = 0, fw = 0, rr = 0;
   for (let k = 0; k < 32; k++) {
     const wk = kinds[k] as number;
@@ -120,7 +125,7 @@ const condFigures = (c: Cond, work: Workspace, out: Float64Array, aided: boolean
   const q = nw - p;
   let below = 0;
   let u = 0;
-  for (let l = 0; l < c.levels; l++) {
+  for (let l = 0; l < levels; l++) {
     const neg = hist[2 * l] as number;
     u += (hist[2 * l + 1] as number) * (below + 0.5 * neg);
     below += neg;
@@ -163,12 +168,43 @@ const sumDrawn = (kind: Uint8Array, slot: Int32Array, work: Workspace): void => 
   }
 };
 
+// sumDrawn of both conditions in one pass over the drawn cases (the second into hist2, kinds2)
+const sumDrawnBoth = (u: { kind: Uint8Array; slot: Int32Array }, a: { kind: Uint8Array; slot: Int32Array }, work: Workspace): void => {
+  const { hist, kinds, hist2, kinds2, drawn, drawnWeight } = work;
+  const uk = u.kind, us = u.slot, ak = a.kind, as = a.slot;
+  const m = work.drawnCount;
+  for (let j = 0; j < m; j++) {
+    const c = drawn[j] as number;
+    const wc = drawnWeight[j] as number;
+    const k = uk[c] as number;
+    kinds[k] = (kinds[k] as number) + wc;
+    const h = us[c] as number;
+    hist[h] = (hist[h] as number) + wc;
+    const k2 = ak[c] as number;
+    kinds2[k2] = (kinds2[k2] as number) + wc;
+    const h2 = as[c] as number;
+    hist2[h2] = (hist2[h2] as number) + wc;
+  }
+};
+
 type ReaderConds = { unaided: Cond | null; aided: Cond | null };
 
 const readerFigures = (r: ReaderConds, work: Workspace, out: Float64Array): void => {
   out.fill(Number.NaN);
-  if (r.unaided) condFigures(r.unaided, work, out, false);
-  if (r.aided) condFigures(r.aided, work, out, true);
+  const u = r.unaided, a = r.aided;
+  if (u !== null && a !== null && u.byCase !== null && a.byCase !== null) {
+    const { hist, kinds, hist2, kinds2 } = work;
+    hist.fill(0, 0, 2 * u.levels + 1);
+    kinds.fill(0);
+    hist2.fill(0, 0, 2 * a.levels + 1);
+    kinds2.fill(0);
+    sumDrawnBoth(u.byCase, a.byCase, work);
+    figuresOf(u.levels, hist, kinds, out, false);
+    figuresOf(a.levels, hist2, kinds2, out, true);
+  } else {
+    if (u) condFigures(u, work, out, false);
+    if (a) condFigures(a, work, out, true);
+  }
   out[IDX.accuracy_difference] = (out[IDX.aided_accuracy] as number) - (out[IDX.unaided_accuracy] as number);
   out[IDX.auc_difference] = (out[IDX.aided_auc] as number) - (out[IDX.unaided_auc] as number);
 };
@@ -244,7 +280,7 @@ export const bootstrapPlanOf = (cols: ReadColumns, all: Int32Array, perReader: r
 };
 
 type Workspace = {
-  hist: Int32Array; kinds: Int32Array; one: Float64Array; sum: Float64Array; cnt: Int32Array;
+  hist: Int32Array; kinds: Int32Array; hist2: Int32Array; kinds2: Int32Array; one: Float64Array; sum: Float64Array; cnt: Int32Array;
   w: Int32Array; picks: Int32Array; figures: Float64Array; computed: Uint8Array;
   /** the cases of weight > 0 (drawnCount of them) and their weights */
   drawn: Int32Array; drawnWeight: Int32Array; drawnCount: number;
@@ -253,7 +289,8 @@ type Workspace = {
 const workspace = (plan: BootstrapPlan): Workspace => {
   const R = plan.readers.length;
   return {
-    hist: new Int32Array(2 * plan.maxLevels + 1), kinds: new Int32Array(NO_READ + 1), one: new Float64Array(F),
+    hist: new Int32Array(2 * plan.maxLevels + 1), kinds: new Int32Array(NO_READ + 1),
+    hist2: new Int32Array(2 * plan.maxLevels + 1), kinds2: new Int32Array(NO_READ + 1), one: new Float64Array(F),
     sum: new Float64Array(F), cnt: new Int32Array(F), w: new Int32Array(plan.cases), picks: new Int32Array(R),
     figures: new Float64Array(R * F), computed: new Uint8Array(R),
     drawn: new Int32Array(plan.cases), drawnWeight: new Int32Array(plan.cases), drawnCount: 0,
