@@ -19,6 +19,7 @@ export const cliPaths = (root = ROOT) => ({
 });
 
 const NPM_TREE = 'node_modules/.package-lock.json';
+const WORKER = 'src/cli/boot-worker.ts';
 
 const mtimeOf = (file) => {
   try {
@@ -62,7 +63,11 @@ export const buildCli = async (root = ROOT) => {
   const started = Date.now() / 1000;
   const result = await build({
     absWorkingDir: root,
-    entryPoints: ['src/cli/main.ts'],
+    // the CLI, and the bootstrap's second thread (src/cli/boot-threads.ts), which shares its chunks
+    entryPoints: {
+      [path.basename(bundle, '.mjs')]: 'src/cli/main.ts',
+      ...(mtimeOf(path.join(root, WORKER)) === null ? {} : { 'boot-worker': WORKER }),
+    },
     bundle: true,
     platform: 'node',
     target: 'node20',
@@ -73,7 +78,7 @@ export const buildCli = async (root = ROOT) => {
     // compile the bundle reader, the demo generator or the planner (a third of its start-up).
     splitting: true,
     outdir: path.dirname(bundle),
-    entryNames: path.basename(bundle, '.mjs'),
+    entryNames: '[name]',
     chunkNames: 'chunks/[name]-[hash]',
     outExtension: { '.js': '.mjs' },
     logLevel: 'silent',
@@ -92,9 +97,11 @@ export const buildCli = async (root = ROOT) => {
   const tag = `${process.pid}-${Math.random().toString(36).slice(2)}`;
   // Chunks are named by their content, so one already there holds these very bytes; new ones
   // are written (and dated like the bundle) before the entry that imports them is renamed in.
+  // Entries other than the bundle (the worker) are not named by content: always written anew.
   const chunks = result.outputFiles.filter((f) => f !== code);
+  const entries = new Set(chunks.filter((f) => path.dirname(f.path) === path.dirname(bundle)).map((f) => f.path));
   for (const chunk of chunks) {
-    if (mtimeOf(chunk.path) !== null) continue;
+    if (!entries.has(chunk.path) && mtimeOf(chunk.path) !== null) continue;
     mkdirSync(path.dirname(chunk.path), { recursive: true });
     writeFileSync(`${chunk.path}.${tag}`, chunk.contents);
     utimesSync(`${chunk.path}.${tag}`, started, started);

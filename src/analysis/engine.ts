@@ -2,7 +2,7 @@ import type { ReadRow } from '../core/read-log';
 import { readersAgreementOf } from './fleiss-readers';
 import { mrmcOf } from './mrmc-adapter';
 import { COVARIANCE_METHODS, type CovarianceMethod } from './or-covariances';
-import { readerAveragedOf, type ReaderAveraged } from './reader-bootstrap';
+import { bootstrapPlanOf, bootstrapResamples, readerAveragedOf, readerAveragedOfDraws, type BootstrapPlan, type ReaderAveraged } from './reader-bootstrap';
 import type { AnalysisReport, GroupFinding, ReaderEntry } from './report-types';
 import { attributeCodes, attributeNames } from './attribute-codes';
 import { checkScores, firstAppearance, logColumns, type ReadColumns } from './read-columns';
@@ -55,7 +55,36 @@ export const analyzeReads = (rows: readonly ReadRow[], options: AnalyzeOptions =
  * analyzeReads of a log held as columns (the CLI parses straight into them: parseReadLogColumns),
  * with the same report to the last bit. Throws as analyzeReads.
  */
-export const analyzeColumns = (cols: ReadColumns, options: AnalyzeOptions = {}): AnalysisReport => {
+export const analyzeColumns = (cols: ReadColumns, options: AnalyzeOptions = {}): AnalysisReport =>
+  analyzeWith(cols, options, (plan) => readerAveragedOfDraws(plan, bootstrapResamples(plan, 0, plan.boot)));
+
+/**
+ * The analysis with its bootstrap resamples left to the caller (the CLI runs them in two threads):
+ * `report` is analyzeColumns' report but for each finding's reader_averaged, which
+ * `complete(draws)` fills in from the resampled figures of each finding's plan, in the order of
+ * `plans` (bootstrapResamples of [0, plan.boot), or its pieces joined in order). The completed
+ * report equals analyzeColumns' to the last bit. Throws as analyzeReads; complete throws
+ * RangeError when the draws do not fit the plans.
+ */
+export const analyzeColumnsDeferred = (cols: ReadColumns, options: AnalyzeOptions = {}): { plans: BootstrapPlan[]; complete: (draws: readonly Float64Array[]) => AnalysisReport } => {
+  const plans: BootstrapPlan[] = [];
+  const report = analyzeWith(cols, options, (plan) => {
+    plans.push(plan);
+    return null as unknown as ReaderAveraged;
+  });
+  return {
+    plans,
+    complete: (draws) => {
+      if (draws.length !== plans.length) throw new RangeError(`expected the draws of ${plans.length} findings, got ${draws.length}`);
+      report.group.findings.forEach((g, i) => {
+        g.reader_averaged = readerAveragedOfDraws(plans[i] as BootstrapPlan, draws[i] as Float64Array);
+      });
+      return report;
+    },
+  };
+};
+
+const analyzeWith = (cols: ReadColumns, options: AnalyzeOptions, averaged: (plan: BootstrapPlan) => ReaderAveraged): AnalysisReport => {
   checkOptions(options);
   const seed = options.seed ?? DEFAULT_SEED;
   const boot = options.boot ?? DEFAULT_BOOT;
@@ -83,7 +112,7 @@ export const analyzeColumns = (cols: ReadColumns, options: AnalyzeOptions = {}):
       readers: order.length,
       cases: distinctCount(cols.case, all, cols.caseCount),
       pooled: sectionsOf(cols, pooled),
-      reader_averaged: readerAveragedOf(cols, all, order.map((k) => readerReads[k] as SectionReads), { seed, boot }),
+      reader_averaged: averaged(bootstrapPlanOf(cols, all, order.map((k) => readerReads[k] as SectionReads), { seed, boot })),
       fleiss_kappa: { unaided: readersAgreementOf(cols, pooled.unaided.rows), aided: readersAgreementOf(cols, pooled.aided.rows) },
       subgroups: subgroupsOf(cols, pooled, codes),
       mrmc: m.result,

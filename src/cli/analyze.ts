@@ -1,7 +1,7 @@
 // `heed analyze FILE [--json] [--seed N] [--boot N] [--covariance jackknife|delong]`: statistics of
 // a reads.csv (docs/formats.md),
 // as JSON or as a readable table per reader and finding, then the group.
-import { analyzeColumns, DEFAULT_BOOT, DEFAULT_COVARIANCE, DEFAULT_SEED, type CovarianceMethod } from '../analysis/engine';
+import { analyzeColumns, analyzeColumnsDeferred, DEFAULT_BOOT, DEFAULT_COVARIANCE, DEFAULT_SEED, type CovarianceMethod } from '../analysis/engine';
 import type { ORInterval } from '../analysis/or-single-treatment';
 import type { AveragedValue } from '../analysis/reader-bootstrap';
 import type { AnalysisReport, GroupFinding, ReaderEntry } from '../analysis/report-types';
@@ -10,6 +10,7 @@ import type { WeightOfAdvice } from '../analysis/weight-of-advice';
 import type { Proportion } from '../analysis/wilson';
 import { parseReadLogColumns, ReadLogError } from '../io/read-log-parse';
 import { columnsOfLog } from '../analysis/read-columns';
+import { bootThreads, startBootThread } from './boot-threads';
 import { CliError } from './cli-error';
 import { readAnalyzeInput } from './analyze-input';
 
@@ -69,10 +70,24 @@ export const runAnalyze = async (args: string[]): Promise<number> => {
     }
     throw error;
   }
+  const options = { seed, boot, covariance, includeWithdrawn };
+  const thread = bootThreads(cols.n, boot) === 2 ? startBootThread() : null;
   let report;
   try {
-    report = analyzeColumns(cols, { seed, boot, covariance, includeWithdrawn });
+    if (thread === null) report = analyzeColumns(cols, options);
+    else {
+      const deferred = analyzeColumnsDeferred(cols, options);
+      let draws;
+      try {
+        draws = await thread.run(deferred.plans);
+      } catch (error) {
+        process.stderr.write(`heed: ${error instanceof Error ? error.message : String(error)}\n`);
+        return 1;
+      }
+      report = deferred.complete(draws);
+    }
   } catch (error) {
+    thread?.stop();
     if (error instanceof RangeError) throw new CliError(`${file}: ${error.message}`);
     throw error;
   }
