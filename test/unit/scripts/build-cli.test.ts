@@ -17,6 +17,10 @@ beforeEach(() => {
   put('src/cli/main.ts', "import { word } from './word';\nconsole.log(word satisfies string);\n");
   put('src/cli/word.ts', "export const word: string = 'first';\n");
   put('src/ui/unrelated.ts', 'export const x = 1;\n');
+  // written a minute ago: the build's start is taken in whole milliseconds, so a source written
+  // within the same millisecond as the build could count as newer than the bundle
+  const earlier = Date.now() / 1000 - 60;
+  for (const rel of ['src/cli/main.ts', 'src/cli/word.ts', 'src/ui/unrelated.ts']) utimesSync(path.join(root, rel), earlier, earlier);
 });
 afterEach(() => rmSync(root, { recursive: true, force: true }));
 
@@ -46,6 +50,8 @@ describe('the pre-built CLI bundle', () => {
   });
   it('puts a lazily imported module in a chunk that counts as an input: the bundle is stale without it', async () => {
     put('src/cli/main.ts', "const { word } = await import('./word');\nconsole.log(word satisfies string);\n");
+    const earlier = Date.now() / 1000 - 60; // as in beforeEach
+    utimesSync(path.join(root, 'src/cli/main.ts'), earlier, earlier);
     const bundle = await ensureCliBundle(root);
     expect(runBundle(bundle as string)).toBe('first');
     const inputs: string[] = JSON.parse(readFileSync(cliPaths(root).inputs, 'utf8'));
