@@ -7,20 +7,29 @@ import type { AnalysisRequest } from './analysis-worker';
 
 export type AnalysisOutput = { report: AnalysisReport; roc: FindingRoc[] };
 
+/** A large study's report without its bootstrap intervals; `roc` is null until the curves are drawn. */
+export type EarlyOutput = { report: AnalysisReport; roc: FindingRoc[] | null };
+
 type Reply = ({ ok: true; empty?: false } & AnalysisStep) | { ok: true; empty: true } | { ok: false; error: string };
 
-/** Called with the report without its bootstrap intervals, when a large study's analysis sends it first (analysis-steps.ts). */
-export type OnEstimates = (output: AnalysisOutput) => void;
+/** Called with the report without its bootstrap intervals, when a large study's analysis sends it first (analysis-steps.ts), and again with the ROC curves. */
+export type OnEstimates = (output: EarlyOutput) => void;
 
 const inWorker = (request: AnalysisRequest, onEstimates?: OnEstimates): Promise<AnalysisOutput | null> =>
   new Promise((resolve, reject) => {
     const worker = new Worker(new URL('./analysis-worker.ts', import.meta.url), { type: 'module' });
     let roc: FindingRoc[] = [];
+    let early: AnalysisReport | null = null;
     worker.onmessage = (event: MessageEvent<Reply>) => {
       const reply = event.data;
       if (reply.ok && !reply.empty && reply.step === 'estimates') {
+        early = reply.report;
+        onEstimates?.({ report: early, roc: null });
+        return;
+      }
+      if (reply.ok && !reply.empty && reply.step === 'roc') {
         roc = reply.roc;
-        onEstimates?.({ report: reply.report, roc });
+        if (early) onEstimates?.({ report: early, roc });
         return;
       }
       // the worker ends itself after the reply (it may still be storing read packs); a failed one is ended here
