@@ -12,6 +12,7 @@ import { analyzeColumns, readerAveragedOfColumns, withReaderAveraged, type Analy
 import { logColumns } from '../../analysis/read-columns';
 import { rocCurves, type FindingRoc } from '../../analysis/roc-curves';
 import type { ReadRow } from '../../core/read-log';
+import type { ReadColumns } from '../../analysis/read-columns';
 
 /** Rule of thumb, no source: below this many reads the bootstrap is quick enough to wait for. */
 export const ESTIMATES_FIRST_FROM = 20_000;
@@ -27,16 +28,34 @@ export type AnalysisStep =
 
 export type StepOptions = { seed: number; boot: number; covariance?: CovarianceMethod };
 
+/**
+ * Hands the columns to a second worker that computes the reader averages' bootstrap
+ * (`bootstrapOfColumns`) on the other core while this one computes the estimates and the curves;
+ * when given, no `complete` step is sent here: the page puts the two together (`completeReport`).
+ */
+export type BootstrapElsewhere = (cols: ReadColumns) => void;
+
+/** The second worker's part: the reader-averaged figures with the bootstrap, as the one-worker path computes them. */
+export const bootstrapOfColumns = (cols: ReadColumns, options: StepOptions) =>
+  readerAveragedOfColumns(cols, { seed: options.seed, boot: options.boot, covariance: options.covariance });
+
+/** The complete report from the estimates' report and the second worker's reader averages: the same as the `complete` step's. */
+export const completeReport = (estimates: AnalysisReport, averaged: ReturnType<typeof bootstrapOfColumns>, boot: number): AnalysisReport =>
+  withReaderAveraged(estimates, averaged, boot);
+
 /** Analyses `rows` (at least one), sending each step to `send` as soon as it is ready. Throws what analyzeReads throws. */
-export const analyseInSteps = (rows: readonly ReadRow[], options: StepOptions, send: (step: AnalysisStep) => void, estimatesFirstFrom = ESTIMATES_FIRST_FROM): void => {
+export const analyseInSteps = (
+  rows: readonly ReadRow[], options: StepOptions, send: (step: AnalysisStep) => void, estimatesFirstFrom = ESTIMATES_FIRST_FROM, elsewhere?: BootstrapElsewhere,
+): void => {
   const { seed, boot, covariance } = options;
   const cols = logColumns(rows);
   if (boot === 0 || rows.length < estimatesFirstFrom) {
     send({ step: 'complete', report: analyzeColumns(cols, { seed, boot, covariance }), roc: rocCurves(rows) });
     return;
   }
+  elsewhere?.(cols);
   const first = analyzeColumns(cols, { seed, boot: 0, covariance });
   send({ step: 'estimates', report: first });
   send({ step: 'roc', roc: rocCurves(rows) });
-  send({ step: 'complete', report: withReaderAveraged(first, readerAveragedOfColumns(cols, { seed, boot, covariance }), boot), roc: null });
+  if (!elsewhere) send({ step: 'complete', report: completeReport(first, bootstrapOfColumns(cols, options), boot), roc: null });
 };

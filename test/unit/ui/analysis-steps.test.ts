@@ -2,7 +2,8 @@
 // estimates come first (boot = 0), then the complete report, which must be analyzeReads' own.
 import { analyzeReads } from '../../../src/analysis/engine';
 import { rocCurves } from '../../../src/analysis/roc-curves';
-import { analyseInSteps, ESTIMATES_FIRST_FROM, type AnalysisStep } from '../../../src/ui/results/analysis-steps';
+import type { ReadColumns } from '../../../src/analysis/read-columns';
+import { analyseInSteps, bootstrapOfColumns, completeReport, ESTIMATES_FIRST_FROM, type AnalysisStep } from '../../../src/ui/results/analysis-steps';
 import { simulateReadRows } from '../../../bench/simulate-log';
 
 const rows = simulateReadRows({ seed: 9, readers: 5, cases: 60, practiceCases: 2 });
@@ -34,4 +35,17 @@ describe('the results page analysis in steps', () => {
     }
     expect(JSON.stringify((steps()[0] as Extract<AnalysisStep, { step: 'complete' }>).report)).toBe(JSON.stringify(analyzeReads(rows, { seed: 4, boot: 200 })));
   });
+
+  it('with the bootstrap in a second worker: the columns go out first, no complete step, and the report put together is analyzeReads\' own', () => {
+    const sent: AnalysisStep[] = [];
+    const order: string[] = [];
+    let copy: ReadColumns | null = null;
+    // structuredClone: what postMessage does to the columns on their way to the second worker
+    analyseInSteps(rows, { seed: 4, boot: 200 }, (s) => { sent.push(s); order.push(s.step); }, rows.length, (cols) => { copy = structuredClone(cols); order.push('columns'); });
+    expect(order).toEqual(['columns', 'estimates', 'roc']);
+    const estimates = sent[0] as Extract<AnalysisStep, { step: 'estimates' }>;
+    const averaged = bootstrapOfColumns(copy as unknown as ReadColumns, { seed: 4, boot: 200 });
+    expect(JSON.stringify(completeReport(estimates.report, averaged, 200))).toBe(JSON.stringify(analyzeReads(rows, { seed: 4, boot: 200 })));
+  });
 });
+
