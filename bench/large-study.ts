@@ -107,6 +107,7 @@ const inChromium = async (caseSet: object): Promise<Figure[]> => {
       plain('chromium: export, of which studyReadRows (IndexedDB and the join)', m.exportRowsMs, 'ms'),
       plain('chromium: export, of which readLogCsv', m.exportCsvMs, 'ms'),
       atMost('chromium: results shown: estimates and every interval but the reader averages\' bootstrap (the worker\'s first step)', m.estimatesMs, 'ms', 3000),
+      plain('chromium: results shown: the ROC curves (sent after the estimates)', m.curvesMs, 'ms'),
       atMost('chromium: results complete (the app\'s analysis worker: rows from IndexedDB, engine with the bootstrap, ROC curves)', m.resultsWorkerMs, 'ms', 3000),
       plain('chromium: main thread during the results: longest task', m.longestTaskMs, 'ms'),
       plain('chromium: main thread during the results: long tasks (count / total)', m.longTasks, `tasks, ${Math.round(m.longTaskMs)} ms`),

@@ -4,14 +4,16 @@
 // rather than rows, the worker reads the study's rows from IndexedDB itself: for a large study
 // (200,000 reads) loading, joining and copying the rows to a worker would otherwise hold the
 // page's main thread for seconds. A large study's report comes in two steps (analysis-steps.ts):
-// the estimates first, then the bootstrap intervals.
+// the estimates first, then the bootstrap intervals. With `bootstrapElsewhere`, the columns are sent
+// to the page (step `columns`) for a second worker to compute the bootstrap (bootstrap-worker.ts).
 import type { CovarianceMethod } from '../../analysis/engine';
+import type { ReadColumns } from '../../analysis/read-columns';
 import type { ReadRow } from '../../core/read-log';
 import { openHeedDb, type HeedDb } from '../../store/db';
 import { studyReadRowsPacking } from '../../store/read-log-rows';
 import { analyseInSteps } from './analysis-steps';
 
-export type AnalysisRequest = { seed: number; boot: number; covariance?: CovarianceMethod } & ({ rows: ReadRow[] } | { dbName: string; studyId: string });
+export type AnalysisRequest = { seed: number; boot: number; covariance?: CovarianceMethod; bootstrapElsewhere?: boolean } & ({ rows: ReadRow[] } | { dbName: string; studyId: string });
 
 self.onmessage = async (event: MessageEvent<AnalysisRequest>) => {
   const request = event.data;
@@ -21,7 +23,10 @@ self.onmessage = async (event: MessageEvent<AnalysisRequest>) => {
     // packs the study lacked are stored while the analysis runs (read-log-rows.ts)
     const { rows, packing } = 'rows' in request ? { rows: request.rows, packing: Promise.resolve(0) } : await studyReadRowsPacking(db as HeedDb, request.studyId);
     if (rows.length === 0) self.postMessage({ ok: true, empty: true });
-    else analyseInSteps(rows, { seed, boot, covariance }, (step) => self.postMessage({ ok: true, ...step }));
+    else {
+      const elsewhere = request.bootstrapElsewhere === true ? (cols: ReadColumns) => self.postMessage({ ok: true, step: 'columns', cols }) : undefined;
+      analyseInSteps(rows, { seed, boot, covariance }, (step) => self.postMessage({ ok: true, ...step }), undefined, elsewhere);
+    }
     await packing;
   } catch (error) {
     self.postMessage({ ok: false, error: error instanceof Error ? error.message : String(error) });

@@ -1,35 +1,82 @@
 import type { AnalysisReport, CovarianceMethod } from '../../analysis/engine';
+import type { ReaderAveraged } from '../../analysis/reader-bootstrap';
+import type { ReadColumns } from '../../analysis/read-columns';
 import type { FindingRoc } from '../../analysis/roc-curves';
 import type { ReadRow } from '../../core/read-log';
 import type { HeedDb } from '../../store/db';
-import type { AnalysisStep } from './analysis-steps';
+import { completeReport, type AnalysisStep } from './analysis-steps';
+import type { BootstrapRequest } from './bootstrap-worker';
 import type { AnalysisRequest } from './analysis-worker';
 
 export type AnalysisOutput = { report: AnalysisReport; roc: FindingRoc[] };
 
-type Reply = ({ ok: true; empty?: false } & AnalysisStep) | { ok: true; empty: true } | { ok: false; error: string };
+/** A large study's report without its bootstrap intervals; `roc` is null until the curves are drawn. */
+export type EarlyOutput = { report: AnalysisReport; roc: FindingRoc[] | null };
 
-/** Called with the report without its bootstrap intervals, when a large study's analysis sends it first (analysis-steps.ts). */
-export type OnEstimates = (output: AnalysisOutput) => void;
+type Reply = ({ ok: true; empty?: false } & (AnalysisStep | { step: 'columns'; cols: ReadColumns })) | { ok: true; empty: true } | { ok: false; error: string };
+type BootstrapReply = { ok: true; averaged: ReaderAveraged[] } | { ok: false; error: string };
+
+/** The buffers of the columns' typed arrays, each once: moved to the second worker, not copied. */
+const buffersOf = (cols: ReadColumns): ArrayBuffer[] => {
+  const buffers = new Set<ArrayBuffer>();
+  const add = (value: unknown) => { if (ArrayBuffer.isView(value) && value.buffer instanceof ArrayBuffer) buffers.add(value.buffer); };
+  for (const value of Object.values(cols)) add(value);
+  for (const a of cols.attributes.values()) add(a.code);
+  for (const scratch of cols.caseScratch) add(scratch);
+  return [...buffers];
+};
+
+/** Called with the report without its bootstrap intervals, when a large study's analysis sends it first (analysis-steps.ts), and again with the ROC curves. */
+export type OnEstimates = (output: EarlyOutput) => void;
 
 const inWorker = (request: AnalysisRequest, onEstimates?: OnEstimates): Promise<AnalysisOutput | null> =>
   new Promise((resolve, reject) => {
     const worker = new Worker(new URL('./analysis-worker.ts', import.meta.url), { type: 'module' });
     let roc: FindingRoc[] = [];
+    let early: AnalysisReport | null = null;
+    // a large study's bootstrap in a second worker (analysis-steps.ts): done when the estimates, the curves and the reader averages are all in
+    let second: Worker | null = null;
+    let curves: FindingRoc[] | null = null;
+    let averaged: ReaderAveraged[] | null = null;
+    const finishWhenAllIn = () => {
+      if (early && curves && averaged) resolve({ report: completeReport(early, averaged, request.boot), roc: curves });
+    };
+    const fail = (message: string) => {
+      worker.terminate();
+      second?.terminate();
+      reject(new Error(message));
+    };
     worker.onmessage = (event: MessageEvent<Reply>) => {
       const reply = event.data;
+      if (reply.ok && !reply.empty && reply.step === 'columns') {
+        const boot = new Worker(new URL('./bootstrap-worker.ts', import.meta.url), { type: 'module' });
+        second = boot;
+        boot.onmessage = (e: MessageEvent<BootstrapReply>) => {
+          if (!e.data.ok) { fail(e.data.error); return; }
+          averaged = e.data.averaged;
+          finishWhenAllIn();
+        };
+        boot.onerror = (e) => fail(e.message);
+        const message: BootstrapRequest = { cols: reply.cols, seed: request.seed, boot: request.boot, covariance: request.covariance };
+        boot.postMessage(message, buffersOf(reply.cols));
+        return;
+      }
       if (reply.ok && !reply.empty && reply.step === 'estimates') {
+        early = reply.report;
+        onEstimates?.({ report: early, roc: null });
+        return;
+      }
+      if (reply.ok && !reply.empty && reply.step === 'roc') {
         roc = reply.roc;
-        onEstimates?.({ report: reply.report, roc });
+        if (early) onEstimates?.({ report: early, roc });
+        if (second) { curves = roc; finishWhenAllIn(); }
         return;
       }
       // the worker ends itself after the reply (it may still be storing read packs); a failed one is ended here
-      if (!reply.ok) {
-        worker.terminate();
-        reject(new Error(reply.error));
-      } else resolve(reply.empty ? null : { report: reply.report, roc: reply.roc ?? roc });
+      if (!reply.ok) fail(reply.error);
+      else resolve(reply.empty ? null : { report: reply.report, roc: reply.roc ?? roc });
     };
-    worker.onerror = (event) => { worker.terminate(); reject(new Error(event.message)); };
+    worker.onerror = (event) => fail(event.message);
     worker.postMessage(request);
   });
 
@@ -47,4 +94,4 @@ export const runAnalysis = async (rows: ReadRow[], seed: number, boot: number, c
  * to `onEstimates`.
  */
 export const runStudyAnalysis = (db: HeedDb, studyId: string, seed: number, boot: number, covariance: CovarianceMethod = 'jackknife', onEstimates?: OnEstimates): Promise<AnalysisOutput | null> =>
-  inWorker({ dbName: db.name, studyId, seed, boot, covariance }, onEstimates);
+  inWorker({ dbName: db.name, studyId, seed, boot, covariance, bootstrapElsewhere: true }, onEstimates);

@@ -8,7 +8,7 @@ import { useDb } from '../db-context';
 import { AnalysisOptions } from '../results/AnalysisOptions';
 import { drawAllPlotsThen } from '../results/PlotFigure';
 import { ResultsPage } from '../results/ResultsPage';
-import { runStudyAnalysis, type AnalysisOutput } from '../results/run-analysis';
+import { runStudyAnalysis, type EarlyOutput } from '../results/run-analysis';
 import type { StoredStudy } from '../../store/records';
 import { signal } from '../signals';
 import { actions } from '../state/app-state';
@@ -19,7 +19,7 @@ export const ResultsScreen = ({ studyId }: { studyId: string }) => {
   const [seed, setSeed] = useState(DEFAULT_SEED);
   const [boot, setBoot] = useState(DEFAULT_BOOT);
   // a large study's estimates, shown while its bootstrap intervals are computed (results/analysis-steps.ts)
-  const [early, setEarly] = useState<{ study: StoredStudy; seed: number; boot: number; output: AnalysisOutput } | null>(null);
+  const [early, setEarly] = useState<{ study: StoredStudy; seed: number; boot: number; output: EarlyOutput } | null>(null);
   const results = useAsync(useCallback(async () => {
     // the worker reads the study's rows itself: the page's main thread stays free on a large study
     const studyLoaded = getStudy(db, studyId);
@@ -52,7 +52,7 @@ export const ResultsScreen = ({ studyId }: { studyId: string }) => {
       {value?.output && (
         <>
           <p className="muted" data-reads={value.output.report.group.reads}>{value.output.report.group.reads} reads analysed; {value.output.report.group.practice_excluded} practice reads left out.</p>
-          {estimates && <p role="status" aria-busy="true"><strong>Still computing the 95% bootstrap intervals of the reader averages</strong> ({estimates.boot} resamples): they show as missing until then. Every estimate, and every other interval, is final.</p>}
+          {estimates && <p role="status" aria-busy="true"><strong>Still computing the 95% bootstrap intervals of the reader averages</strong> ({estimates.boot} resamples): they show as missing until then. Every estimate, and every other interval, is final.{estimates.output?.roc ? '' : ' The ROC curves are being drawn.'}</p>}
           <ResultsPage report={value.output.report} roc={value.output.roc} />
         </>
       )}
