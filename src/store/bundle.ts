@@ -82,7 +82,8 @@ export const restoreStudy = async (db: HeedDb, snapshot: StudySnapshot): Promise
     await db.sessions.bulkAdd(snapshot.sessions);
     await db.events.bulkAdd(events);
     await db.reads.bulkAdd(reads);
-    await db.packs.bulkAdd(packsOf(snapshot.sessions, reads));
+    // put, not add: a build from before packs deletes a study without its packs
+    await db.packs.bulkPut(packsOf(snapshot.sessions, reads));
     await appendEvent(db, null, 'study-restored', { studyId: study.id, name: study.name, caseSetId: caseSet.id, head: events.at(-1)?.hash ?? null });
     return { study, caseSet, caseSetImported: !match };
   });

@@ -2,7 +2,7 @@
  * Joins a study's stored reads with its readers, sessions and case set into read-log rows
  * (docs/formats.md). The reads of completed sessions come from their read packs (read-packs.ts),
  * one record per session; a completed session without a current pack gets one on the way, stored
- * after the rows are returned.
+ * once the caller's own work on the rows is done.
  */
 import { joinReadRows } from '../core/read-rows';
 import type { ReadRow } from '../core/read-log';
@@ -13,18 +13,24 @@ import { listReaders } from './readers';
 import { getStudy } from './studies';
 
 /**
- * The rows, and `packing`: the storing of packs built on the way for completed sessions that had
- * none (read-packs.ts, storePacks), which the rows do not wait for; it resolves with how many were
- * stored and never rejects (a pack not stored is built again next time).
+ * The rows, and `storeFresh`: stores the packs built on the way for completed sessions that had
+ * none (read-packs.ts, storePacks); it resolves with how many were stored and never rejects (a pack
+ * not stored is built again next time). Call it when the work on the rows is done, not before: its
+ * read-write transaction holds the `reads` store until this thread takes the results of its
+ * requests, so started before a long computation it would hold up every answer committed
+ * meanwhile, in any window.
  */
-export const studyReadRowsPacking = async (db: HeedDb, studyId: string): Promise<{ rows: ReadRow[]; packing: Promise<number> }> => {
+export const studyReadRowsPacking = async (db: HeedDb, studyId: string): Promise<{ rows: ReadRow[]; storeFresh: () => Promise<number> }> => {
   const study = await getStudy(db, studyId);
   const caseSet = await getCaseSet(db, study.caseSetId);
   const readers = await listReaders(db, studyId);
   const { sessions, reads, fresh } = await loadStudyReads(db, studyId);
-  const packing = storePacks(db, fresh).catch(() => 0);
-  return { rows: joinReadRows(study, caseSet.manifest, readers, sessions, reads).map((j) => j.row), packing };
+  return { rows: joinReadRows(study, caseSet.manifest, readers, sessions, reads).map((j) => j.row), storeFresh: () => storePacks(db, fresh).catch(() => 0) };
 };
 
-export const studyReadRows = async (db: HeedDb, studyId: string): Promise<ReadRow[]> =>
-  (await studyReadRowsPacking(db, studyId)).rows;
+/** The rows; packs built on the way are stored in a later task, after the caller's synchronous work on the rows (an export's CSV). */
+export const studyReadRows = async (db: HeedDb, studyId: string): Promise<ReadRow[]> => {
+  const { rows, storeFresh } = await studyReadRowsPacking(db, studyId);
+  setTimeout(() => { void storeFresh(); }, 0);
+  return rows;
+};

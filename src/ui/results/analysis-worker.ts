@@ -20,14 +20,15 @@ self.onmessage = async (event: MessageEvent<AnalysisRequest>) => {
   const db = 'rows' in request ? null : openHeedDb(request.dbName);
   try {
     const { seed, boot, covariance } = request;
-    // packs the study lacked are stored while the analysis runs (read-log-rows.ts)
-    const { rows, packing } = 'rows' in request ? { rows: request.rows, packing: Promise.resolve(0) } : await studyReadRowsPacking(db as HeedDb, request.studyId);
+    // packs the study lacked are stored after the analysis (read-log-rows.ts: before it, their
+    // transaction would hold up answers committed meanwhile)
+    const { rows, storeFresh } = 'rows' in request ? { rows: request.rows, storeFresh: () => Promise.resolve(0) } : await studyReadRowsPacking(db as HeedDb, request.studyId);
     if (rows.length === 0) self.postMessage({ ok: true, empty: true });
     else {
       const elsewhere = request.bootstrapElsewhere === true ? (cols: ReadColumns) => self.postMessage({ ok: true, step: 'columns', cols }) : undefined;
       analyseInSteps(rows, { seed, boot, covariance }, (step) => self.postMessage({ ok: true, ...step }), undefined, elsewhere);
     }
-    await packing;
+    await storeFresh();
   } catch (error) {
     self.postMessage({ ok: false, error: error instanceof Error ? error.message : String(error) });
   } finally {

@@ -57,6 +57,7 @@ const inWorker = (request: AnalysisRequest, onEstimates?: OnEstimates): Promise<
           finishWhenAllIn();
         };
         boot.onerror = (e) => fail(e.message);
+        boot.onmessageerror = () => fail('the bootstrap worker’s answer could not be read (is the computer short of memory?)');
         const message: BootstrapRequest = { cols: reply.cols, seed: request.seed, boot: request.boot, covariance: request.covariance };
         boot.postMessage(message, buffersOf(reply.cols));
         return;
@@ -77,6 +78,7 @@ const inWorker = (request: AnalysisRequest, onEstimates?: OnEstimates): Promise<
       else resolve(reply.empty ? null : { report: reply.report, roc: reply.roc ?? roc });
     };
     worker.onerror = (event) => fail(event.message);
+    worker.onmessageerror = () => fail('the analysis worker’s answer could not be read (is the computer short of memory?)');
     worker.postMessage(request);
   });
 

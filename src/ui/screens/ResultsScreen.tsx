@@ -32,7 +32,7 @@ export const ResultsScreen = ({ studyId }: { studyId: string }) => {
   useEffect(() => { if (complete || results.error) signal('ready', { screen: 'results', seed: complete?.seed, boot: complete?.boot }); }, [complete, results.error]);
   const current = (v: { seed: number; boot: number } | null | undefined) => v != null && v.seed === seed && v.boot === boot;
   // the estimates of the current seed and resamples, until their complete report arrives
-  const estimates = !results.error && !current(complete) && current(early) ? early : null;
+  const estimates = !results.error && !current(complete) && current(early) && early?.study.id === studyId ? early : null;
   const value = estimates ?? complete;
   const busy = !results.error && !current(complete);
   return (

@@ -90,8 +90,8 @@ const rowsFromReads = async (db: HeedDb, studyId: string) => {
 
 /** studyReadRows, then the storing of the packs it built on the way (which the rows do not wait for). */
 const rowsThenPacks = async (db: HeedDb, studyId: string) => {
-  const { rows, packing } = await studyReadRowsPacking(db, studyId);
-  await packing;
+  const { rows, storeFresh } = await studyReadRowsPacking(db, studyId);
+  await storeFresh();
   return rows;
 };
 
@@ -147,6 +147,23 @@ describe('read packs', () => {
     expect((await db.packs.get(first))?.count).toBe(await db.reads.where('sessionId').equals(first).count());
     expect((await db.packs.get(second))?.completedAt).toBe('2026-12-24T00:00:00.000Z');
     expect(await studyReadRows(db, study.id)).toEqual(expected);
+  });
+
+  it('stores packs built on the way only when the caller is done with the rows (their transaction would hold up answers)', async () => {
+    const db = openHeedDb(dbName());
+    const { study, completed } = await makeStudy(db);
+    await db.packs.clear();
+    const { rows, storeFresh } = await studyReadRowsPacking(db, study.id);
+    expect(rows).toEqual(await rowsFromReads(db, study.id));
+    await new Promise((resolve) => { setTimeout(resolve, 30); });
+    expect(await db.packs.count()).toBe(0); // no write started while the caller works
+    expect(await storeFresh()).toBe(completed.length);
+    expect(await db.packs.count()).toBe(completed.length);
+    // the plain entry (export, reader's report) stores them in a later task of its own
+    await db.packs.clear();
+    await studyReadRows(db, study.id);
+    expect(await db.packs.count()).toBe(0);
+    await vi.waitFor(async () => { expect(await db.packs.count()).toBe(completed.length); }, { timeout: 10_000, interval: 20 });
   });
 
   it('rebuilds missing packs when the study is read, for completed sessions only', async () => {
