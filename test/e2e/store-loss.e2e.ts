@@ -44,7 +44,7 @@ describe('a database the browser lost', () => {
     await homePage(page).waitUntilReady();
     await notice.waitFor();
     await page.getByRole('button', { name: 'I have read this' }).click();
-    expect(await notice.count()).toBe(0);
+    await notice.waitFor({ state: 'detached' }); // once the read mark is stored
     await page.reload();
     await homePage(page).waitUntilReady();
     expect(await notice.count()).toBe(0);
