@@ -4,18 +4,22 @@ export type AsyncValue<T> = { value: T | undefined; error: Error | null; reload:
 
 /**
  * Loads a value whenever `load` changes (pass a useCallback with the inputs as its deps);
- * `reload` loads it again after a change.
+ * `reload` loads it again after a change. `load` gets a signal that is aborted when its result is
+ * no longer wanted.
  */
-export const useAsync = <T,>(load: () => Promise<T>): AsyncValue<T> => {
+export const useAsync = <T,>(load: (cancel: AbortSignal) => Promise<T>): AsyncValue<T> => {
   const [value, setValue] = useState<T | undefined>(undefined);
   const [error, setError] = useState<Error | null>(null);
   const run = useCallback(() => {
     let live = true;
-    load().then(
+    // aborted when the inputs change or the screen goes: a load that can stop early (the results
+    // page's workers) stops; any other load's result is dropped
+    const cancel = new AbortController();
+    load(cancel.signal).then(
       (v) => { if (live) { setValue(v); setError(null); } },
       (e: unknown) => { if (live) setError(e instanceof Error ? e : new Error(String(e))); },
     );
-    return () => { live = false; };
+    return () => { live = false; cancel.abort(); };
   }, [load]);
   useEffect(run, [run]);
   const reload = useCallback(() => { run(); }, [run]);

@@ -29,9 +29,23 @@ const buffersOf = (cols: ReadColumns): ArrayBuffer[] => {
 /** Called with the report without its bootstrap intervals, when a large study's analysis sends it first (analysis-steps.ts), and again with the ROC curves. */
 export type OnEstimates = (output: EarlyOutput) => void;
 
-const inWorker = (request: AnalysisRequest, onEstimates?: OnEstimates): Promise<AnalysisOutput | null> =>
+/** The two workers, made here (Vite bundles a worker from this literal form); tests give stand-ins. */
+export type WorkerMakers = { analysis: () => Worker; bootstrap: () => Worker };
+const workerMakers: WorkerMakers = {
+  analysis: () => new Worker(new URL('./analysis-worker.ts', import.meta.url), { type: 'module' }),
+  bootstrap: () => new Worker(new URL('./bootstrap-worker.ts', import.meta.url), { type: 'module' }),
+};
+
+/**
+ * Runs one analysis request. `cancel` (the page moved on: other seed or resamples typed, screen
+ * left) ends both workers at once, so superseded analyses of a large study do not keep the cores
+ * busy, and rejects with an AbortError; the packs a cancelled worker had not stored yet are built
+ * again next time (their transaction is all or nothing).
+ */
+export const inWorker = (request: AnalysisRequest, onEstimates?: OnEstimates, cancel?: AbortSignal, makers: WorkerMakers = workerMakers): Promise<AnalysisOutput | null> =>
   new Promise((resolve, reject) => {
-    const worker = new Worker(new URL('./analysis-worker.ts', import.meta.url), { type: 'module' });
+    if (cancel?.aborted) { reject(new DOMException('analysis cancelled', 'AbortError')); return; }
+    const worker = makers.analysis();
     let roc: FindingRoc[] = [];
     let early: AnalysisReport | null = null;
     // a large study's bootstrap in a second worker (analysis-steps.ts): done when the estimates, the curves and the reader averages are all in
@@ -46,10 +60,16 @@ const inWorker = (request: AnalysisRequest, onEstimates?: OnEstimates): Promise<
       second?.terminate();
       reject(new Error(message));
     };
+    cancel?.addEventListener('abort', () => {
+      worker.terminate();
+      second?.terminate();
+      reject(new DOMException('analysis cancelled', 'AbortError'));
+    }, { once: true });
     worker.onmessage = (event: MessageEvent<Reply>) => {
       const reply = event.data;
       if (reply.ok && !reply.empty && reply.step === 'columns') {
-        const boot = new Worker(new URL('./bootstrap-worker.ts', import.meta.url), { type: 'module' });
+        if (cancel?.aborted) return;
+        const boot = makers.bootstrap();
         second = boot;
         boot.onmessage = (e: MessageEvent<BootstrapReply>) => {
           if (!e.data.ok) { fail(e.data.error); return; }
@@ -95,5 +115,5 @@ export const runAnalysis = async (rows: ReadRow[], seed: number, boot: number, c
  * has no reads yet. Resolves with the complete report; a large study's estimates come first,
  * to `onEstimates`.
  */
-export const runStudyAnalysis = (db: HeedDb, studyId: string, seed: number, boot: number, covariance: CovarianceMethod = 'jackknife', onEstimates?: OnEstimates): Promise<AnalysisOutput | null> =>
-  inWorker({ dbName: db.name, studyId, seed, boot, covariance, bootstrapElsewhere: true }, onEstimates);
+export const runStudyAnalysis = (db: HeedDb, studyId: string, seed: number, boot: number, covariance: CovarianceMethod = 'jackknife', onEstimates?: OnEstimates, cancel?: AbortSignal): Promise<AnalysisOutput | null> =>
+  inWorker({ dbName: db.name, studyId, seed, boot, covariance, bootstrapElsewhere: true }, onEstimates, cancel);

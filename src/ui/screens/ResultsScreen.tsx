@@ -20,12 +20,12 @@ export const ResultsScreen = ({ studyId }: { studyId: string }) => {
   const [boot, setBoot] = useState(DEFAULT_BOOT);
   // a large study's estimates, shown while its bootstrap intervals are computed (results/analysis-steps.ts)
   const [early, setEarly] = useState<{ study: StoredStudy; seed: number; boot: number; output: EarlyOutput } | null>(null);
-  const results = useAsync(useCallback(async () => {
+  const results = useAsync(useCallback(async (cancel: AbortSignal) => {
     // the worker reads the study's rows itself: the page's main thread stays free on a large study
     const studyLoaded = getStudy(db, studyId);
     const output = await runStudyAnalysis(db, studyId, seed, boot, 'jackknife', (first) => {
       void studyLoaded.then((study) => setEarly({ study, seed, boot, output: first }), () => undefined);
-    });
+    }, cancel);
     return { study: await studyLoaded, seed, boot, output };
   }, [db, studyId, seed, boot]));
   const complete = results.value;
