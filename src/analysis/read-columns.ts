@@ -8,8 +8,8 @@ import { finalLikelihood, finalScore, initialLikelihood, isAided, scoreOf } from
  * A read log as typed columns (issue 10): one entry per read, in the order given, so the
  * statistics walk numbers instead of one object per read (about 100 bytes a read instead of
  * about 300). Ids are interned as small integers in first-appearance order; null calls are −1,
- * null numbers NaN. Built from row objects (readColumns) or straight from the parse
- * (columnsBuilder), so the CLI never holds one object per read.
+ * null numbers NaN. Built from row objects (logColumns, columnsBuilder) or from the columns the
+ * CLI's parse types straight from the bytes (columnsOfLog), so the CLI never holds one object per read.
  */
 export type ReadColumns = {
   n: number;

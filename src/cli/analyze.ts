@@ -10,7 +10,7 @@ import type { WeightOfAdvice } from '../analysis/weight-of-advice';
 import type { Proportion } from '../analysis/wilson';
 import { parseReadLogColumns, ReadLogError } from '../io/read-log-parse';
 import { columnsOfLog } from '../analysis/read-columns';
-import { bootThreads, startBootThread } from './boot-threads';
+import { BootThreadError, bootThreads, startBootThread } from './boot-threads';
 import { CliError } from './cli-error';
 import { readAnalyzeInput } from './analyze-input';
 
@@ -81,7 +81,8 @@ export const runAnalyze = async (args: string[]): Promise<number> => {
       try {
         draws = await thread.run(deferred.plans);
       } catch (error) {
-        process.stderr.write(`heed: ${error instanceof Error ? error.message : String(error)}\n`);
+        if (!(error instanceof BootThreadError)) throw error;
+        process.stderr.write(`heed: ${error.message}\n`);
         return 1;
       }
       report = deferred.complete(draws);

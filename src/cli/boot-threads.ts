@@ -41,6 +41,9 @@ const startWorker = (): Worker | null => {
   return null;
 };
 
+/** The second thread failed or stopped; this thread's own errors (a RangeError of a bad option) are thrown as they are. */
+export class BootThreadError extends Error {}
+
 /** A started worker thread that will compute resamples once given a job. */
 export type BootThread = { run: (plans: BootstrapPlan[]) => Promise<Float64Array[]>; stop: () => void };
 
@@ -67,11 +70,16 @@ export const startBootThread = (): BootThread | null => {
         if (early !== null) resolve(early);
       });
       worker.postMessage(job);
-      // this thread's half while the worker computes its own
-      const mine = plans.map((p) => bootstrapResamples(p, 0, half(p.boot)));
-      const theirs = await answer;
-      void worker.terminate();
-      if (!theirs.ok) throw new Error(`the bootstrap's second thread failed: ${theirs.message}`);
+      let mine: Float64Array[];
+      let theirs: BootAnswer;
+      try {
+        // this thread's half while the worker computes its own
+        mine = plans.map((p) => bootstrapResamples(p, 0, half(p.boot)));
+        theirs = await answer;
+      } finally {
+        void worker.terminate();
+      }
+      if (!theirs.ok) throw new BootThreadError(`the bootstrap's second thread failed: ${theirs.message}`);
       return mine.map((m, i) => {
         const t = theirs.draws[i] as Float64Array;
         const joined = new Float64Array(m.length + t.length);

@@ -144,16 +144,23 @@ export type StudyReads = { sessions: RowSession[]; reads: RowRead[]; fresh: Stor
  * completed session without a current pack, its pack is built from the reads just read and
  * returned in `fresh`, for `storePacks`.
  */
+/**
+ * When each completed session of a study completed, by session id, from the `[studyId+completedAt]`
+ * index alone (no session record, with its list of cases, is read). Call inside a transaction over `sessions`.
+ */
+const completionTimes = async (db: HeedDb, studyId: string): Promise<Map<string, string>> => {
+  const completedIndex = db.sessions.where('[studyId+completedAt]').between([studyId, ''], [studyId, '\uffff'], true, true); // completion times are ISO texts
+  const [keys, ids] = await Promise.all([completedIndex.keys(), completedIndex.primaryKeys()]);
+  return new Map(ids.map((id, i) => [id, (keys[i] as unknown as [string, string])[1]]));
+};
+
 export const loadStudyReads = (db: HeedDb, studyId: string): Promise<StudyReads> =>
   db.transaction('r', db.sessions, db.reads, db.packs, async () => {
-    const completedIndex = db.sessions.where('[studyId+completedAt]').between([studyId, ''], [studyId, '\uffff'], true, true); // completion times are ISO texts
-    const [ids, completedKeys, completedIds, packs] = await Promise.all([
+    const [ids, completedAt, packs] = await Promise.all([
       db.sessions.where('studyId').equals(studyId).primaryKeys(),
-      completedIndex.keys(),
-      completedIndex.primaryKeys(),
+      completionTimes(db, studyId),
       db.packs.where('studyId').equals(studyId).toArray(),
     ]);
-    const completedAt = new Map(completedIds.map((id, i) => [id, (completedKeys[i] as unknown as [string, string])[1]]));
     const known = new Set(ids);
     const candidates = packs.filter((p) => known.has(p.sessionId) && completedAt.get(p.sessionId) === p.completedAt);
     const counts = await Promise.all(candidates.map((p) => db.reads.where('sessionId').equals(p.sessionId).count()));
@@ -187,10 +194,11 @@ export const storePacks = async (db: HeedDb, packs: readonly StoredPack[]): Prom
   for (let at = 0; at < packs.length; at += PACKS_PER_TRANSACTION) {
     const batch = packs.slice(at, at + PACKS_PER_TRANSACTION);
     stored += await db.transaction('rw', db.sessions, db.reads, db.packs, async () => {
-      const checks = await Promise.all(batch.map(async (p) => {
-        const [session, count] = await Promise.all([db.sessions.get(p.sessionId), db.reads.where('sessionId').equals(p.sessionId).count()]);
-        return packIsCurrent(p, session?.completedAt, count);
-      }));
+      // completion times from the index of each study in the batch, not from the session records
+      const studies = [...new Set(batch.map((p) => p.studyId))];
+      const times = new Map((await Promise.all(studies.map((id) => completionTimes(db, id)))).flatMap((m) => [...m]));
+      const counts = await Promise.all(batch.map((p) => db.reads.where('sessionId').equals(p.sessionId).count()));
+      const checks = batch.map((p, i) => packIsCurrent(p, times.get(p.sessionId), counts[i] ?? -1));
       const fit = batch.filter((_, i) => checks[i]);
       await db.packs.bulkPut(fit);
       return fit.length;
