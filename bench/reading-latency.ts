@@ -4,7 +4,8 @@
  * A fresh profile, the app built and served; first launch to the home screen's `ready` (this
  * includes generating and storing the demo set); a study with the aided condition
  * "concurrent", readers enrolled until one whose first period is aided, and that period read
- * with the keyboard: the practice cases first (not measured), then READS main cases quiet and
+ * with the keyboard (P or A, a confidence digit, and Enter a reader's pause later: ENTER_AFTER_MS
+ * below): the practice cases first (not measured), then READS main cases quiet and
  * READS more with two CPU-bound processes running beside the browser (started here, the load
  * average reported). Per read, in page time: Enter keydown to `heed:saved` (the durable commit),
  * to `heed:case-painted` of the next case (commit + render + draw: the figure with the targets,
@@ -30,6 +31,11 @@ const SCREENSHOT_AT = Math.min(50, READS);
 // HEED_BENCH_TRACE=file.json also records a Chrome trace of the quiet reads.
 // HEED_BENCH_PHASES=1 also splits each commit into its phases (bench/support/commit-phases.ts)
 const PHASES = Boolean(process.env.HEED_BENCH_PHASES);
+// The pause between the confidence digit and Enter (ms). A reader choosing a confidence and then
+// committing takes well over 100 ms; pressed at once (0, the method before the sixth session), the
+// digit's own frame is still pending when Enter is handled, and Chromium then holds the page's
+// IndexedDB replies until that frame is drawn (bench/README.md, "Reading view p95, sixth session").
+const ENTER_AFTER_MS = Number(process.env.HEED_BENCH_ENTER_AFTER_MS ?? 100);
 
 const app = await buildAndServe();
 const profile = benchProfileDir();
@@ -56,13 +62,21 @@ try {
     const practice = await readPracticeCases(page, reading);
 
     if (PHASES) await installCommitPhases(page);
+    // P or A, the digit, a reader's pause, then Enter (ENTER_AFTER_MS = 0: all three at once)
+    const answer = async (call: 0 | 1, digit: number): Promise<void> => {
+      if (ENTER_AFTER_MS <= 0) { await reading.answerByKeys(call, digit); return; }
+      await page.keyboard.press(call === 1 ? 'p' : 'a');
+      await page.keyboard.press(String(digit));
+      await new Promise((resolve) => { setTimeout(resolve, ENTER_AFTER_MS); });
+      await reading.commitWithKeys([]);
+    };
     const split = new Map<string, CommitPhases>();
     const phase = async (label: string, reads: number): Promise<ReadTiming[]> => {
       await resetLatencyRecord(page);
       if (PHASES) await resetCommitPhases(page);
       for (let i = 1; i <= reads; i++) {
         if (await reading.isDone()) throw new Error(`the period ended during the ${label} reads, after ${i - 1} of ${reads}`);
-        await reading.answerByKeys(i % 3 === 0 ? 1 : 0, 1 + (i % 9));
+        await answer(i % 3 === 0 ? 1 : 0, 1 + (i % 9));
         if (label === 'quiet' && i === Math.min(SCREENSHOT_AT, reads)) {
           mkdirSync(RESULTS_DIR, { recursive: true });
           await page.screenshot({ path: join(RESULTS_DIR, 'reading-view.png') });
@@ -138,6 +152,7 @@ try {
     ];
     notes.push(
       `reader ${reader}, sequence AU, period 1 (aided, concurrent); the ${practice} practice cases were read first and not measured`,
+      ENTER_AFTER_MS > 0 ? `keys per read: P or A, a confidence digit, then Enter ${ENTER_AFTER_MS} ms later (HEED_BENCH_ENTER_AFTER_MS)` : 'keys per read: P or A, a confidence digit and Enter at once (HEED_BENCH_ENTER_AFTER_MS=0)',
       `quiet: ${READS} reads with no load of our own (1-min load average ${loadBefore} before, ${loadQuiet} after; other work on the machine counts in it)`,
       `under load: the next ${READS} reads with 2 CPU-bound processes (node busy loops) running beside the browser; 1-min load average ${loadUnder} after`,
       `floor: ${READS} bare IndexedDB transactions per shape after each phase, ${floorQuiet.bytes} bytes of JSON per answer (the last stored read and its event), spaced 60 ms; "to next frame" adds the wait for the first animation frame after the flush`,

@@ -50,3 +50,17 @@ for (a,b) in commits:
 n=len(commits)
 print('renderer main thread during the commit transactions, per commit (ms; nested events overlap):')
 for k,v in tot.most_common(22): print(f"  {k:60s} {v/n:6.2f}")
+# Replies held for the frame: the first IndexedDB reply the page's main thread took after the transaction started,
+# against the first BeginMainFrame after the Enter (a reply within 0.5 ms after that frame's start counts as held)
+replies=sorted(e['ts'] for e in ev if e.get('name')=='Receive mojo reply' and (e['pid'],e['tid']) in mainkeys and 'IDB' in json.dumps(e.get('args',{})))
+frames=sorted(e['ts'] for e in main if e.get('args',{}).get('src_func')=='ScheduledActionSendBeginMainFrame')
+held=0; lag=[]
+for (a,b) in commits:
+    k=max([t for t in kd if t<=a], default=a)
+    r=min([t for t in replies if t>=a], default=None)
+    f=min([t for t in frames if t>=k], default=None)
+    if r is None: continue
+    lag.append((r-a)/1000)
+    if f is not None and f<=r: held+=1
+print(f"first reply on the main thread after the transaction start: median {st.median(lag):.2f} ms, max {max(lag):.2f} ms")
+print(f"commits whose first reply came only after the first frame after the Enter: {held} of {len(lag)}")
