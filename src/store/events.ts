@@ -16,21 +16,27 @@ export const chainHead = async (db: HeedDb, key: string): Promise<string> =>
  */
 export const appendEvent = async (db: HeedDb, studyId: string | null, type: string, detail: Record<string, unknown>): Promise<StoredEvent> => {
   const event = linkEvent(await chainHead(db, chainKey(studyId)), studyId, type, detail);
-  event.seq = await db.events.add(event);
-  rememberHead(db, event.chain, event.hash);
+  const seq = await db.events.add(event);
+  event.seq = seq;
+  rememberHead(db, event.chain, event.hash, seq);
   return event;
 };
+
+/** The last link this connection appended to a chain: its hash and its key (seq) in the event log. */
+export type KnownHead = { hash: string; seq: number };
 
 // The head each chain had after this connection's last append: a guess only (its transaction may
 // still abort, another window may append), which a caller must check against the stored head
 // inside its own transaction before relying on it.
-const heads = new WeakMap<HeedDb, Map<string, string>>();
+const heads = new WeakMap<HeedDb, Map<string, KnownHead>>();
 
-export const guessedHead = (db: HeedDb, chain: string): string | undefined => heads.get(db)?.get(chain);
+export const guessedHead = (db: HeedDb, chain: string): KnownHead | undefined => heads.get(db)?.get(chain);
 
-export const rememberHead = (db: HeedDb, chain: string, hash: string): void => {
-  const known = heads.get(db) ?? new Map<string, string>();
-  known.set(chain, hash);
+/** Remembers a chain's new head; without its key (never expected) the chain's guess is dropped. */
+export const rememberHead = (db: HeedDb, chain: string, hash: string, seq: number | undefined): void => {
+  const known = heads.get(db) ?? new Map<string, KnownHead>();
+  if (seq === undefined) known.delete(chain);
+  else known.set(chain, { hash, seq });
   heads.set(db, known);
 };
 

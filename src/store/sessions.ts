@@ -6,9 +6,8 @@
 import type { Bit } from '../core/read-log';
 import { applyCommit, currentPosition, positionAt, stepIndexOf, type CommittedAnswer, type Phase, type SessionItem, type SessionPosition } from '../core/session';
 import type { HeedDb } from './db';
-import { appendEvent, chainHead, chainKey, guessedHead, linkEvent, rememberHead } from './events';
+import { appendEvent, chainHead, chainKey, guessedHead, linkEvent, rememberHead, type KnownHead } from './events';
 import type { StoredEvent, StoredRead, StoredSession, StoredStudy, WashoutOverride } from './records';
-import { genesisHash } from '../core/chain';
 import { packSessionSoon } from './read-packs';
 
 export const sessionId = (readerId: string, period: number): string => `${readerId}/${period}`;
@@ -116,13 +115,18 @@ class GuessMissed extends Error {}
  * and that the chain's head is the one this connection last wrote. The reads are issued first, so
  * they see the database as it was before the writes; when any assumption proves wrong the
  * transaction is aborted (nothing of it is stored) and the caller falls back to commitChecked.
+ * The head is checked on the event log's primary key, not the `chain` index: the log from the key
+ * of the link this connection last wrote holds exactly that link only when no event of any chain
+ * was appended since, and then that link is still its chain's head (a range read of one record,
+ * cheaper than a cursor on the index; another window's event, on any chain, sends the commit to
+ * commitChecked).
  * It runs on IndexedDB itself, not through Dexie: the reader waits for this, and a trace showed
  * Dexie's promise zone costing several milliseconds of main-thread time per commit. The records
  * are the ones Dexie would store (plain objects; events keyed by their auto-incremented seq), in
  * one transaction with the same strict durability. The last answer of a session (which also
  * updates the session record) always takes the checked commit.
  */
-const commitInOneTrip = async (db: HeedDb, input: AnswerCommit, guessed: string): Promise<Committed> => {
+const commitInOneTrip = async (db: HeedDb, input: AnswerCommit, guessed: KnownHead): Promise<Committed> => {
   const { session } = input;
   const plan = { items: session.items, findings: input.findings, skipped: session.skipped };
   const stepIndex = stepIndexOf(plan, input.step);
@@ -132,7 +136,7 @@ const commitInOneTrip = async (db: HeedDb, input: AnswerCommit, guessed: string)
   const before = stepIndex > 0 ? positionAt(plan, stepIndex - 1) : null;
   const beforeId = before && !before.done ? readId(session.id, before.item.caseId, before.step.finding) : null;
   if (beforeId === id) throw new GuessMissed();
-  const { read, events, next } = answerRecords(input, item, id, positionAt(plan, stepIndex), undefined, guessed, stepIndex);
+  const { read, events, next } = answerRecords(input, item, id, positionAt(plan, stepIndex), undefined, guessed.hash, stepIndex);
   if (next.done) throw new GuessMissed();
   const chain = chainKey(session.studyId);
   if (!db.isOpen()) await db.open();
@@ -149,19 +153,19 @@ const commitInOneTrip = async (db: HeedDb, input: AnswerCommit, guessed: string)
   });
   const reads = tx.objectStore('reads');
   const eventStore = tx.objectStore('events');
-  // the head: the last event of the chain (the `chain` index, ordered by seq within a chain)
-  const headCursor = eventStore.index('chain').openCursor(IDBKeyRange.only(chain), 'prev');
   const checks = Promise.all([
     request<StoredSession | undefined>(tx.objectStore('sessions').get(session.id)),
     request<StoredRead | undefined>(reads.get(id)),
     beforeId === null ? Promise.resolve(undefined) : request<StoredRead | undefined>(reads.get(beforeId)),
-    request(headCursor).then((cursor) => (cursor ? (cursor.value as StoredEvent).hash : genesisHash(chain))),
+    // the event log from this connection's last link on: that link alone, still on this chain
+    request<StoredEvent[]>(eventStore.getAll(IDBKeyRange.lowerBound(guessed.seq), 2)).then((from) =>
+      from.length === 1 && from[0]?.seq === guessed.seq && from[0].chain === chain ? from[0].hash : null),
   ]);
-  for (const e of events) eventStore.add(e);
+  const added = events.map((e) => eventStore.add(e));
   reads.put(read);
   try {
     const [stored, previous, beforeRead, head] = await checks;
-    const current = stored !== undefined && head === guessed && previous === undefined
+    const current = stored !== undefined && head === guessed.hash && previous === undefined
       && !(stored.skipped ?? []).includes(item.caseId)
       && (before === null || before.done || answered(beforeRead, before.step.phase));
     if (!current) throw new GuessMissed();
@@ -170,7 +174,8 @@ const commitInOneTrip = async (db: HeedDb, input: AnswerCommit, guessed: string)
     throw e;
   }
   await done;
-  rememberHead(db, chain, events[events.length - 1]?.hash ?? guessed);
+  const last = events.length - 1;
+  rememberHead(db, chain, events[last]?.hash ?? guessed.hash, Number(added[last]?.result ?? guessed.seq));
   return { position: next, read };
 };
 
@@ -230,10 +235,12 @@ const commitChecked = (db: HeedDb, input: AnswerCommit): Promise<Committed> =>
     // refuses any step but that one, naming the step that is current
     const position = current ? positionAt(plan, stepIndex) : await sessionPosition(db, stored ?? session, input.findings);
     const { read, events, next } = answerRecords(input, item, id, position, previous, head, stepIndex);
-    const writes: Promise<unknown>[] = [...events.map((e) => db.events.add(e)), db.reads.put(read)];
+    const added = Promise.all(events.map((e) => db.events.add(e)));
+    const writes: Promise<unknown>[] = [added, db.reads.put(read)];
     if (next.done) writes.push(db.sessions.update(session.id, { completedAt: new Date().toISOString() }));
     await Promise.all(writes);
-    rememberHead(db, chainKey(session.studyId), events[events.length - 1]?.hash ?? head);
+    const seqs = await added;
+    rememberHead(db, chainKey(session.studyId), events[events.length - 1]?.hash ?? head, seqs[seqs.length - 1]);
     return { position: next, read };
   });
 

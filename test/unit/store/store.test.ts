@@ -129,6 +129,27 @@ describe('store', () => {
     expect((await db.reads.get(`${session.id}/k3/target`))?.hash).toBe(events[events.length - 1]?.hash);
   });
 
+  it('links an answer to its own chain when another study appended to the event log in between', async () => {
+    const name = `heed-test-${process.pid}-${++counter}`;
+    const db = openHeedDb(name);
+    const { manifest, set, study } = await setUpStudy(db);
+    const reader = await enrolReader(db, study.id, { code: 'R01', role: 'radiologist', years: 3 }, () => 0);
+    const session = await startSession(db, { study, readerId: reader.id, period: 1, items: tinyItems(manifest, 'concurrent'), orderSeed: 's1', override: null });
+    const base = { session, findings: ['target'], shownAt: '2026-12-01T10:00:00.000Z', suggestion: null, cautionShown: false, call: 1 as const, confidence: 50, ms: 800 };
+    const step = (itemIndex: number) => ({ itemIndex, finding: 'target', phase: 'final' as const });
+    await commitAnswer(db, { ...base, step: step(0) });
+    // a second window creates another study: the newest event of the log is on that study's chain
+    const other = openHeedDb(name);
+    const second = await createStudy(other, { name: 'T', caseSetId: set.id, design: tinyDesign(), suggestions: tinySuggestions(manifest) });
+    other.close();
+    await commitAnswer(db, { ...base, step: step(1) });
+    await commitAnswer(db, { ...base, step: step(2) });
+    const events = await eventsOfStudy(db, study.id);
+    expect(events.map((e) => e.type).slice(-3)).toEqual(['final-committed', 'final-committed', 'final-committed']);
+    for (let i = 1; i < events.length; i++) expect(events[i]?.prev).toBe(events[i - 1]?.hash);
+    expect((await eventsOfStudy(db, second.id)).map((e) => e.type)).toEqual(['study-created']);
+  });
+
   it('marks the session complete on its last answer and exports read-log rows', async () => {
     const db = freshDb();
     const { manifest, study } = await setUpStudy(db);
