@@ -246,9 +246,16 @@ export const ReadingScreen = ({ studyId, sessionId, notice }: Props) => {
 
   const endFeedback = useCallback(() => setFeedback(null), []);
 
-  // a layout effect: the handler with this render's answer is in place before the next key can arrive
+  // The window's key listener is added once; it calls the handler of the latest render, put in
+  // place by a layout effect, so this render's answer is used before the next key can arrive.
+  const keyHandler = useRef<(event: KeyboardEvent) => void>(() => undefined);
   useLayoutEffect(() => {
-    const onKey = (event: KeyboardEvent) => {
+    const onKey = (event: KeyboardEvent) => keyHandler.current(event);
+    window.addEventListener('keydown', onKey);
+    return () => window.removeEventListener('keydown', onKey);
+  }, []);
+  useLayoutEffect(() => {
+    keyHandler.current = (event: KeyboardEvent) => {
       const action = readingKeyAction(event, scale.kind);
       if (!action) return;
       event.preventDefault();
@@ -273,8 +280,6 @@ export const ReadingScreen = ({ studyId, sessionId, notice }: Props) => {
         case 'image': setImageIndex((i) => Math.min(Math.max(0, i + action.step), (caseRecord?.images.length ?? 1) - 1)); break;
       }
     };
-    window.addEventListener('keydown', onKey);
-    return () => window.removeEventListener('keydown', onKey);
   }, [paused, breakFor, feedback, scale.kind, doCommit, togglePause, toggleFullscreen, endBreak, endFeedback, caseRecord, setView, setImageIndex]);
 
   if (error) return <main className="reading"><p role="alert">Cannot open this session: {error}</p></main>;
