@@ -63,4 +63,4 @@ for (a,b) in commits:
     lag.append((r-a)/1000)
     if f is not None and f<=r: held+=1
 print(f"first reply on the main thread after the transaction start: median {st.median(lag):.2f} ms, max {max(lag):.2f} ms")
-print(f"commits whose first reply came only after the first frame after the Enter: {held} of {len(lag)}")
+print(f"commits whose first reply came only after the first frame after the Enter (held for it, or simply later): {held} of {len(lag)}")
