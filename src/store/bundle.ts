@@ -26,17 +26,29 @@ const storedImageHashes = async (db: HeedDb, setId: string): Promise<Map<string,
   return hashes;
 };
 
+/**
+ * A study as it is stored now. Its records are read in one read-only transaction, so the snapshot
+ * is one moment of the study (an answer committed meanwhile in another window is either wholly in it
+ * or not at all); the image hashes are taken after it, since a stored case set's images never change.
+ */
 export const gatherStudySnapshot = async (db: HeedDb, studyId: string, withImages = false): Promise<StudySnapshot> => {
-  const study = await getStudy(db, studyId);
-  const caseSet = await getCaseSet(db, study.caseSetId);
-  const events = await eventsOfStudy(db, studyId);
+  const { study, caseSet, readers, sessions, events } = await db.transaction('r', [db.studies, db.caseSets, db.readers, db.sessions, db.events], async () => {
+    const stored = await getStudy(db, studyId);
+    return {
+      study: stored,
+      caseSet: await getCaseSet(db, stored.caseSetId),
+      readers: await listReaders(db, studyId),
+      sessions: await db.sessions.where('studyId').equals(studyId).toArray(),
+      events: await eventsOfStudy(db, studyId),
+    };
+  });
   return {
     study: { id: study.id, name: study.name, design: study.design, createdAt: study.createdAt, lockedAt: study.lockedAt },
     suggestions: study.suggestions,
     caseSet: { name: caseSet.name, manifest: caseSet.manifest, imageSha256: await storedImageHashes(db, caseSet.id) },
     images: withImages ? (await db.images.where('setId').equals(caseSet.id).toArray()).map((i) => ({ path: i.path, mime: i.mime, bytes: i.bytes })) : null,
-    readers: await listReaders(db, studyId),
-    sessions: await db.sessions.where('studyId').equals(studyId).toArray(),
+    readers,
+    sessions,
     events: events.map((e) => ({ at: e.at, type: e.type, detail: e.detail, prev: e.prev, hash: e.hash })),
   };
 };
@@ -75,6 +87,10 @@ export const restoreStudy = async (db: HeedDb, snapshot: StudySnapshot): Promise
     throw new InputError(`The case set "${snapshot.caseSet.name}" (${snapshot.caseSet.manifest.cases.length} cases) of this study is not on this workstation, and the bundle does not carry its images: import that case set first, or save the bundle again with its images.`);
   }
   return db.transaction('rw', [db.caseSets, db.images, db.studies, db.readers, db.sessions, db.reads, db.packs, db.events], async () => {
+    // checked again here: another window may have restored the study, or deleted the matching case set, since
+    const restored = await db.studies.get(snapshot.study.id);
+    if (restored) throw new InputError(`Study "${restored.name}" was stored on this workstation meanwhile (another window): open it and merge the bundle into it instead.`);
+    if (match && !(await db.caseSets.get(match.id))) throw new InputError(`The case set "${match.name}" was deleted meanwhile (another window): open the bundle again.`);
     const caseSet = match ?? await saveCaseSet(db, { name: snapshot.caseSet.name, source: 'import', manifest: snapshot.caseSet.manifest, images: snapshot.images ?? [] });
     const { study, events, reads } = storedRecords(snapshot, caseSet.id);
     await db.studies.add(study);
@@ -91,12 +107,38 @@ export const restoreStudy = async (db: HeedDb, snapshot: StudySnapshot): Promise
 
 export type MergeOutcome = { added: number; snapshot: StudySnapshot };
 
+/** How many times a merge is computed again when the study changes under it before it gives up. */
+export const MERGE_TRIES = 3;
+
+/** The study changed (another window) between gathering its copy and storing the merge. */
+class StudyChangedMeanwhile extends Error {}
+
 /**
  * Merges another workstation's copy of a stored study (io/bundle/merge.ts rules) and stores the
  * result in place of the study's readers, sessions, reads and events. Merging a copy that adds
  * nothing leaves the store untouched.
+ *
+ * The merge is computed from a snapshot gathered before the transaction that replaces the
+ * study's records. Every change to a study's readers, sessions and reads appends to its chain in
+ * the change's own transaction, so the replacing transaction first checks the chain's head and
+ * length against the snapshot's: if another window changed the study meanwhile (an answer
+ * committed, a reader withdrawn), nothing is written, and the merge is gathered and computed
+ * again, at most MERGE_TRIES times; then it is refused with an InputError, nothing changed.
  */
 export const mergeIntoStudy = async (db: HeedDb, other: MergeInput): Promise<MergeOutcome> => {
+  for (let attempt = 1; ; attempt++) {
+    try {
+      return await mergeOnce(db, other);
+    } catch (error) {
+      if (!(error instanceof StudyChangedMeanwhile)) throw error;
+      if (attempt >= MERGE_TRIES) {
+        throw new InputError(`the study kept changing in another window of this workstation while the bundle was merged (${MERGE_TRIES} tries), so nothing was merged; merge it again when no reader is answering in this study.`);
+      }
+    }
+  }
+};
+
+const mergeOnce = async (db: HeedDb, other: MergeInput): Promise<MergeOutcome> => {
   const local = await gatherStudySnapshot(db, other.snapshot.study.id);
   const before = readsOfChain(local.events);
   const merged = mergeSnapshots([{ label: 'this workstation', snapshot: local }, other]);
@@ -105,9 +147,14 @@ export const mergeIntoStudy = async (db: HeedDb, other: MergeInput): Promise<Mer
   const unchanged = merged.events.length === local.events.length && merged.events.every((e, i) => e.hash === local.events[i]?.hash)
     && merged.readers.length === local.readers.length && merged.sessions.length === local.sessions.length;
   if (unchanged) return { added: 0, snapshot: local };
-  const study = await getStudy(db, local.study.id);
   await db.transaction('rw', [db.studies, db.readers, db.sessions, db.reads, db.packs, db.events], async () => {
-    const id = study.id;
+    const id = local.study.id;
+    // the snapshot must still be the study as stored: same chain head, same number of links
+    const study = await db.studies.get(id);
+    if (!study) throw new InputError('the study was deleted meanwhile (another window), so nothing was merged.');
+    const head = (await db.events.where('chain').equals(id).last())?.hash ?? null;
+    const links = await db.events.where('chain').equals(id).count();
+    if (head !== (local.events.at(-1)?.hash ?? null) || links !== local.events.length) throw new StudyChangedMeanwhile();
     await db.readers.where('studyId').equals(id).delete();
     await db.sessions.where('studyId').equals(id).delete();
     await db.reads.where('studyId').equals(id).delete();
@@ -149,7 +196,7 @@ export const mergeStudyBundle = async (db: HeedDb, studyId: string, fileName: st
     const outcome = await mergeIntoStudy(db, { label: fileName, snapshot: read.snapshot });
     return { ok: true, added: outcome.added };
   } catch (error) {
-    if (error instanceof BundleMergeError) return { ok: false, message: `${fileName} was not merged: ${error.message}` };
+    if (error instanceof BundleMergeError || error instanceof InputError) return { ok: false, message: `${fileName} was not merged: ${error.message}` };
     throw error;
   }
 };

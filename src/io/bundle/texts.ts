@@ -21,9 +21,20 @@ export const BUNDLE_VERSION = 1;
 /** The extra columns of the bundle's reads.csv, after every read-log column (docs/formats.md). */
 export const CHAIN_COLUMNS = ['read_id', 'read_hash'] as const;
 
+// Fingerprints remembered by manifest object: a verify, a merge and a write each ask for the same
+// manifest's several times, and a large case set's canonical text takes tens of milliseconds.
+// Manifests are never changed in place (as event details, io/bundle/detail-text.ts).
+const fingerprints = new WeakMap<CaseSetManifest, string>();
+
 /** A fingerprint of the case set's content (cases, truths, model outputs, attributes), independent of its name and key order. */
-export const caseSetFingerprint = (manifest: CaseSetManifest): string =>
-  sha256Hex(canonicalJson({ cases: manifest.cases, findings: manifest.findings, attributeNames: manifest.attributeNames }));
+export const caseSetFingerprint = (manifest: CaseSetManifest): string => {
+  let fingerprint = fingerprints.get(manifest);
+  if (fingerprint === undefined) {
+    fingerprint = sha256Hex(canonicalJson({ cases: manifest.cases, findings: manifest.findings, attributeNames: manifest.attributeNames }));
+    fingerprints.set(manifest, fingerprint);
+  }
+  return fingerprint;
+};
 
 /** What makes two workstations' copies "the same study": its design over the same cases. */
 export const designFingerprint = (snapshot: Pick<StudySnapshot, 'study' | 'caseSet'>): string =>

@@ -1,6 +1,6 @@
 /** The study page's bundle actions: save the whole study as one file, and merge another workstation's copy. */
 import { useState } from 'react';
-import { writeBundle } from '../../io/bundle/write';
+import { writeBundleAsync } from '../../io/bundle/write';
 import { gatherStudySnapshot, mergeStudyBundle } from '../../store/bundle';
 import type { StoredStudy } from '../../store/records';
 import { getHost } from '../../host';
@@ -23,7 +23,7 @@ export const BundlePanel = ({ study, onMerged }: Props) => {
   const save = () => run(async () => {
     try {
       const file = `${safeName(study.name)}-bundle.zip`;
-      const bytes = writeBundle(await gatherStudySnapshot(db, study.id, withImages));
+      const bytes = await writeBundleAsync(await gatherStudySnapshot(db, study.id, withImages));
       const result = await getHost().saveFile(file, bytes, 'application/zip');
       setStatus(result.handedTo === 'downloads' ? `${file} handed to the browser's downloads.` : result.saved ? `Saved ${file}${result.where ? ` to ${result.where}` : ''}.` : 'Not saved.');
       signal('saved', { file });

@@ -4,7 +4,7 @@
  * committed before a backup starts, and a failed backup is logged as a `backup-failed` event of
  * the study, never thrown at the reading screen.
  */
-import { writeBundle } from '../../io/bundle/write';
+import { writeBundleAsync } from '../../io/bundle/write';
 import { gatherStudySnapshot } from '../../store/bundle';
 import type { HeedDb } from '../../store/db';
 import { appendEvent } from '../../store/events';
@@ -33,7 +33,7 @@ export const backUpStudy = async (db: HeedDb, studyId: string, reason: BackupRea
       outcome = { ok: false, skipped: true, message: `No backup was written: ${listing.reason}` };
     } else {
       const study = await getStudy(db, studyId);
-      const bytes = writeBundle(await gatherStudySnapshot(db, studyId, false));
+      const bytes = await writeBundleAsync(await gatherStudySnapshot(db, studyId, false));
       const entry = await host.saveBackup(studyId, backupFileName(study.name, new Date()), bytes);
       outcome = { ok: true, entry, folder: listing.folder };
     }

@@ -1,6 +1,6 @@
 import { unzipSync } from 'fflate';
 import { generateDemoCaseSet } from '../../../../demo-cases/generator/generate';
-import { chainLinks, genesisHash, sha256Hex } from '../../../../src/core/chain';
+import { canonicalJson, chainLinks, genesisHash, sha256Hex } from '../../../../src/core/chain';
 import { BundleMergeError, mergeSnapshots } from '../../../../src/io/bundle/merge';
 import { readBundle } from '../../../../src/io/bundle/read';
 import { simulateStudy, splitSnapshot } from '../../../../src/io/bundle/simulate-study';
@@ -18,6 +18,14 @@ const label = (i: number) => ({ label: `workstation-${i + 1}.zip`, snapshot: cop
 const readIds = (s: StudySnapshot) => [...readsOfChain(s.events).keys()].sort();
 
 describe('merging workstation bundles', () => {
+  it('simulates events whose details are already in canonical key order (canonicalJson\'s fast path: JSON.stringify gives the canonical text)', () => {
+    for (const study of [whole, simulateStudy(caseSet, { readers: 2, seed: 7, assistance: 'concurrent' })]) {
+      const types = new Set(study.events.map((e) => e.type));
+      for (const t of ['study-created', 'reader-enrolled', 'session-started', 'final-committed']) expect(types.has(t)).toBe(true);
+      for (const e of study.events) expect(JSON.stringify(e.detail)).toBe(canonicalJson(e.detail));
+    }
+  });
+
   it('three workstation copies hold disjoint reads that merge into exactly the unsplit study', () => {
     const ids = copies.map(readIds);
     expect(ids.map((x) => x.length)).toEqual([2, 2, 2].map(() => (6 / 3) * 21 * 2));
