@@ -188,18 +188,19 @@ const answerRecords = (input: AnswerCommit, item: SessionItem, id: string, posit
   const answer = applyCommit(position, input.step, previous ? toAnswer(previous) : null, {
     call: input.call, confidence: input.confidence, ms: input.ms, ...(input.rating == null ? {} : { rating: input.rating }),
   });
+  // Keys in canonical (sorted) order here and in the event's detail: canonicalJson (core/chain.ts)
+  // then takes its fast path when this answer is hashed and each time a bundle or backup is written.
   const read: StoredRead = {
-    id, sessionId: session.id, studyId: session.studyId, readerId: session.readerId, period: session.period,
-    caseId: item.caseId, finding: input.step.finding, initial: answer.initial, final: answer.final,
-    shownAt: previous?.shownAt ?? input.shownAt,
-    aiCall: input.suggestion?.call ?? null, aiScore: input.suggestion?.score ?? null,
-    aiPlanted: input.suggestion?.planted ?? false, cautionShown: input.cautionShown,
+    aiCall: input.suggestion?.call ?? null, aiPlanted: input.suggestion?.planted ?? false, aiScore: input.suggestion?.score ?? null,
+    caseId: item.caseId, cautionShown: input.cautionShown, final: answer.final, finding: input.step.finding, id,
+    initial: answer.initial, period: session.period, readerId: session.readerId, sessionId: session.id,
+    shownAt: previous?.shownAt ?? input.shownAt, studyId: session.studyId,
   };
   // The event carries the read as stored, so the chain covers the answer; the read keeps the link's hash.
   const event = linkEvent(head, session.studyId, input.step.phase === 'initial' ? 'initial-committed' : 'final-committed', {
-    sessionId: session.id, caseId: item.caseId, finding: input.step.finding, call: input.call, confidence: input.confidence, ms: input.ms,
+    call: input.call, caseId: item.caseId, confidence: input.confidence, finding: input.step.finding, ms: input.ms,
     ...(input.rating == null ? {} : { rating: input.rating }),
-    read: { ...read },
+    read: { ...read }, sessionId: session.id,
   });
   read.hash = event.hash;
   const next = positionAt({ items: session.items, findings: input.findings }, stepIndex + 1);

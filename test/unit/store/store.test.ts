@@ -7,6 +7,7 @@ import { createStudy, updateStudyDesign, getStudy } from '../../../src/store/stu
 import { commitAnswer, logSessionMoment, sessionPosition, startSession } from '../../../src/store/sessions';
 import { studyReadRows } from '../../../src/store/read-log-rows';
 import { eventsOfStudy } from '../../../src/store/events';
+import { canonicalJson } from '../../../src/core/chain';
 import { tinyDesign, tinyImages, tinyItems, tinyManifest, tinySuggestions } from '../support/tiny-study';
 
 let counter = 0;
@@ -76,6 +77,22 @@ describe('store', () => {
     expect(read?.final).toEqual({ call: 1, confidence: 60, ms: 1500 });
     const types = (await eventsOfStudy(db, study.id)).map((e) => e.type);
     expect(types).toEqual(['study-created', 'reader-enrolled', 'design-locked', 'session-started', 'initial-committed', 'final-committed', 'initial-committed']);
+  });
+
+  it('stores answer events whose detail is already in canonical key order (the hash and every bundle take the fast path)', async () => {
+    const db = freshDb();
+    const { manifest, study } = await setUpStudy(db);
+    const reader = await enrolReader(db, study.id, { code: 'R01', role: 'radiologist', years: 3 }, () => 0);
+    const session = await startSession(db, { study, readerId: reader.id, period: 1, items: tinyItems(manifest, 'sequential'), orderSeed: 's1', override: null });
+    const base = { session, findings: ['target'], shownAt: '2026-12-01T10:00:00.000Z', suggestion: { call: 1 as const, score: 0.7, planted: true }, cautionShown: true };
+    await commitAnswer(db, { ...base, step: { itemIndex: 0, finding: 'target', phase: 'initial' }, call: 0, confidence: 40, ms: 900, rating: 2 });
+    await commitAnswer(db, { ...base, step: { itemIndex: 0, finding: 'target', phase: 'final' }, call: 1, confidence: 60, ms: 1500 });
+    const answers = (await eventsOfStudy(db, study.id)).filter((e) => e.type.endsWith('-committed'));
+    expect(answers).toHaveLength(2);
+    // JSON.stringify keeps insertion order; canonicalJson sorts: equal only when the keys were stored sorted
+    for (const e of answers) expect(JSON.stringify(e.detail)).toBe(canonicalJson(e.detail));
+    const { hash: _hash, ...read } = (await db.reads.get(`${session.id}/k1/target`))!;
+    expect(JSON.stringify(read)).toBe(canonicalJson(read));
   });
 
   it('refuses, inside the transaction and with nothing written, a commit for a step already answered, ahead of the current one, or from a stale window', async () => {
