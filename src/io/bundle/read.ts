@@ -17,6 +17,7 @@ import { manifestFileSchema, studyBundlePartSchema, type StudyBundlePart } from 
 import { ANSWER_EVENTS, type StudySnapshot } from './snapshot';
 import { BUNDLE_FORMAT, BUNDLE_VERSION, bundleCasesCsv, caseSetFingerprint, designFingerprint, readsCsv } from './texts';
 import { IMAGE_FOLDER, MANIFEST, type BundleManifest } from './write';
+import { zipBombFault } from './zip-guard';
 
 export type ReadBundle = { ok: true; snapshot: StudySnapshot; manifest: BundleManifest } | { ok: false; fault: BundleFault };
 
@@ -101,6 +102,8 @@ export const checkEventLines = (body: string, studyId: string): ChainCheck => {
 };
 
 export const readBundle = (zip: Uint8Array): ReadBundle => {
+  const bomb = zipBombFault(zip);
+  if (bomb) return { ok: false, fault: bomb };
   let entries: Record<string, Uint8Array>;
   try {
     entries = unzipSync(zip);

@@ -1,0 +1,40 @@
+/**
+ * Checks a study bundle's zip before anything is unpacked, so a hostile or damaged file cannot
+ * exhaust memory: fflate's unzipSync gives every entry a buffer of its declared size (and never
+ * writes past it), so the declared sizes are what unpacking costs. Refused: a zip whose directory
+ * cannot be read, entries that share compressed bytes (zip/case-set directory reader), an entry
+ * that declares more than 100 times its compressed size beyond 1 MB, and declared sizes that add
+ * up to more than 100 times the zip (plus 1 MB) or to more than 2 GB.
+ */
+import { readZipDirectory } from '../case-set/zip-directory';
+import type { BundleFault } from './fault';
+
+// The same ratio as the case-set reader (src/io/case-set/zip-source.ts: Apache POI's
+// ZipSecureFile default of 100:1). A bundle's texts shrink perhaps 3-10 times (hashes and ids do
+// not compress well) and its images hardly at all, so an honest bundle stays far below it.
+const MAX_RATIO = 100;
+const GRACE = 1024 * 1024;
+/** What one bundle may unpack to: about what a browser tab can hold at once beside the app. */
+export const MAX_UNPACKED_BYTES = 2 * 1024 * 1024 * 1024;
+
+const mb = (bytes: number): string => (bytes < 1048576 ? `${Math.ceil(bytes / 1024)} kB` : `${Math.round(bytes / 1048576)} MB`);
+
+/** The first reason not to unpack this zip, or null. */
+export const zipBombFault = (zip: Uint8Array): BundleFault | null => {
+  const directory = readZipDirectory(zip);
+  if (!directory.ok) return { file: '(bundle)', line: null, message: `not a readable zip (${directory.message})` };
+  let declared = 0;
+  for (const entry of directory.entries) {
+    if (entry.size > GRACE && entry.size > MAX_RATIO * entry.compressedSize) {
+      return { file: entry.name, line: null, message: `would unpack to ${mb(entry.size)} from ${entry.compressedSize} bytes, more than ${MAX_RATIO} times its packed size: the mark of a zip bomb; nothing was unpacked` };
+    }
+    declared += entry.size;
+  }
+  if (declared > MAX_UNPACKED_BYTES) {
+    return { file: '(bundle)', line: null, message: `would unpack to ${mb(declared)}, more than the ${mb(MAX_UNPACKED_BYTES)} Heed opens at once; save the bundle again without its images (the study's case set is then imported on its own)` };
+  }
+  if (declared > MAX_RATIO * zip.length + GRACE) {
+    return { file: '(bundle)', line: null, message: `its files would unpack to ${mb(declared)} from a ${mb(zip.length)} zip, more than ${MAX_RATIO} times its size: the mark of a zip bomb; nothing was unpacked` };
+  }
+  return null;
+};
