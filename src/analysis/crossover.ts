@@ -2,7 +2,6 @@ import type { ReadRow } from '../core/read-log';
 import { delongPairedTest, type PairedAucTest } from './delong-paired';
 import { mcnemar, type McNemar } from './mcnemar';
 import { allRows, readColumns, type ReadColumns } from './read-columns';
-import { partition } from './read-set';
 import { wilson, type Proportion } from './wilson';
 
 export type CrossoverPair = { unaided: ReadRow; aided: ReadRow };
@@ -97,18 +96,15 @@ const byFirstReader = (cols: ReadColumns, rows: Int32Array): Int32Array[] => {
   let one = true;
   for (let k = 1; k < rows.length && one; k++) one = cols.reader[rows[k] as number] === first;
   if (one) return [rows];
-  // split by reader (each part keeps the rows' order), then listed in order of first appearance
-  const parts = partition(rows, cols.reader, cols.readerIds.length);
-  const listed = new Uint8Array(cols.readerIds.length);
-  const out: Int32Array[] = [];
+  const groups = new Map<number, number[]>();
   for (let k = 0; k < rows.length; k++) {
-    const id = cols.reader[rows[k] as number] as number;
-    if (listed[id] === 0) {
-      listed[id] = 1;
-      out.push(parts[id] as Int32Array);
-    }
+    const r = rows[k] as number;
+    const id = cols.reader[r] as number;
+    const list = groups.get(id);
+    if (list === undefined) groups.set(id, [r]);
+    else list.push(r);
   }
-  return out;
+  return [...groups.values()].map((g) => Int32Array.from(g));
 };
 
 /**
