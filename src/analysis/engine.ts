@@ -7,6 +7,7 @@ import type { AnalysisReport, GroupFinding, ReaderEntry } from './report-types';
 import { attributeCodes, attributeNames } from './attribute-codes';
 import { checkScores, firstAppearance, logColumns, type ReadColumns } from './read-columns';
 import { partition, partitionReads, sectionReads, type SectionReads } from './read-set';
+import { compareReaderIds } from './reader-order';
 import { sectionsOf } from './sections';
 import { subgroupsOf } from './subgroups';
 
@@ -29,7 +30,7 @@ export const DEFAULT_COVARIANCE: CovarianceMethod = 'jackknife';
 export const DEFAULT_SEED = 1;
 export const DEFAULT_BOOT = 1000;
 
-const byReaderId = (a: string, b: string) => a.localeCompare(b, 'en', { numeric: true });
+const byReaderId = compareReaderIds;
 
 /**
  * The whole analysis of a read log (docs/methods.md, docs/formats.md): per reader and finding the

@@ -217,11 +217,31 @@ export const parseReadLogBytesInto = (bytes: Uint8Array, keep: (read: ReadRow) =
  * Example: parseReadLogColumns(bytes).readerIds → ['R1', 'R2'].
  */
 export const parseReadLogColumns = (bytes: Uint8Array): LogColumns => {
-  const builder = logColumnsBuilder(lineCount(bytes));
   const begin = plainLinesFrom(bytes);
-  if (begin === -1) parseReadLogBytesInto(bytes, builder.pushRow);
-  else typeLinesFrom(bytes, begin, builder);
+  if (begin === -1) {
+    const builder = logColumnsBuilder(lineCount(bytes));
+    parseReadLogBytesInto(bytes, builder.pushRow);
+    return builder.done();
+  }
+  // the direct parse grows its columns when the estimate falls short
+  const builder = logColumnsBuilder(estimatedLines(bytes, begin));
+  typeLinesFrom(bytes, begin, builder);
   return builder.done();
+};
+
+const SAMPLE_BYTES = 1 << 18;
+
+/**
+ * About how many lines the bytes from `begin` hold, a little more rather than less: the exact
+ * count when they are short, else their length over the mean line length of the first
+ * SAMPLE_BYTES, plus 5% (counting the newlines of a whole large log takes longer than the guess).
+ */
+export const estimatedLines = (bytes: Uint8Array, begin: number): number => {
+  const to = Math.min(bytes.length, begin + SAMPLE_BYTES);
+  let lines = 1;
+  for (let i = bytes.indexOf(0x0a, begin); i !== -1 && i < to; i = bytes.indexOf(0x0a, i + 1)) lines++;
+  if (to === bytes.length) return lines;
+  return Math.ceil(((bytes.length - begin) / (to - begin)) * lines * 1.05) + 64;
 };
 
 // The direct parse of a file that plainLinesFrom passes: lines split at newline bytes, cells at
@@ -262,6 +282,7 @@ const typeLinesFrom = (bytes: Uint8Array, begin: number, builder: LogColumnsBuil
         const col = header[Math.min(cells, width - 1)] ?? null;
         throw new ReadLogError(line, cells < width ? col : null, `row has ${cells} fields, the header has ${width}`);
       }
+      if (builder.n === builder.capacity()) builder.grow();
       type(bytes, starts, ends, line);
     } catch (error) {
       if (!(error instanceof ReadLogError)) throw error;

@@ -33,13 +33,20 @@ export type LogColumnsBuilder = {
   withAttributes: (names: readonly string[]) => Attribute[];
   /** reads written so far */
   n: number;
+  /** how many reads the arrays hold now */
+  capacity: () => number;
+  /** more room: every array made about half as long again, its reads kept (the bytes parse calls it when full) */
+  grow: () => void;
   pushRow: (r: ReadRow) => void;
   done: () => LogColumns;
 };
 
-/** An empty builder for at most `capacity` reads. Example: b = logColumnsBuilder(2); b.pushRow(r); b.done().n → 1. */
+/**
+ * An empty builder with room for `capacity` reads (pushRow refuses more; the bytes parse grows it).
+ * Example: b = logColumnsBuilder(2); b.pushRow(r); b.done().n → 1.
+ */
 export const logColumnsBuilder = (capacity: number): LogColumnsBuilder => {
-  const cap = capacity;
+  let cap = capacity;
   const nan = (): Float64Array => new Float64Array(cap).fill(Number.NaN);
   const c = {
     reader: new Int32Array(cap), case: new Int32Array(cap), finding: new Int32Array(cap), role: new Int32Array(cap),
@@ -54,12 +61,27 @@ export const logColumnsBuilder = (capacity: number): LogColumnsBuilder => {
     attrs = names.map((name) => ({ name, table: idTable(restoreText), code: new Int32Array(cap) }));
     return attrs;
   };
+  const grow = (): void => {
+    const n = b.n;
+    cap = Math.ceil(cap * 1.5) + 1024;
+    // every cell of a read is written when it is typed, so the new room needs no filling
+    const longer = <T extends Int32Array | Uint8Array | Int8Array | Float64Array>(a: T): T => {
+      const made = new (a.constructor as new (length: number) => T)(cap);
+      made.set(a.subarray(0, n));
+      return made;
+    };
+    const cols = c as unknown as Record<string, Int32Array | Uint8Array | Int8Array | Float64Array>;
+    for (const key of Object.keys(cols)) cols[key] = longer(cols[key] as Int32Array);
+    for (const a of attrs ?? []) a.code = longer(a.code);
+  };
   const b: LogColumnsBuilder = {
     c,
     ids,
     attributes: () => attrs ?? [],
     withAttributes,
     n: 0,
+    capacity: () => cap,
+    grow,
     pushRow: (r) => {
       const i = b.n;
       if (i >= cap) throw new RangeError(`more than the ${cap} reads the columns were made for`);
@@ -90,8 +112,10 @@ export const logColumnsBuilder = (capacity: number): LogColumnsBuilder => {
     },
     done: () => {
       const n = b.n;
-      // views of the first n (the columns are sized by the file's line count, a few more than its reads)
-      const cut = <T extends Int32Array | Uint8Array | Int8Array | Float64Array>(a: T): T => (n === cap ? a : (a.subarray(0, n) as T));
+      // views of the first n (the columns are sized by the file's line count, or an estimate of it,
+      // a few more than its reads); copies when grown arrays would hold much room never used
+      const roomy = cap - n > (n >> 3) + 1024;
+      const cut = <T extends Int32Array | Uint8Array | Int8Array | Float64Array>(a: T): T => (n === cap ? a : roomy ? (a.slice(0, n) as T) : (a.subarray(0, n) as T));
       // no reads, no attributes: as a log of rows, which has no read to name them
       const byName = new Map((n === 0 ? [] : attrs ?? []).map((a) => [a.name, a]));
       return {

@@ -1,4 +1,6 @@
-import { crossoverPairs, crossoverSection } from '../../../src/analysis/crossover';
+import { crossoverPairs, crossoverPairsOf, crossoverSection } from '../../../src/analysis/crossover';
+import { readColumns } from '../../../src/analysis/read-columns';
+import type { ReadRow } from '../../../src/core/read-log';
 import { aided, makeRead } from './make-read';
 
 const pair = (caseId: string, truth: 0 | 1, unaidedCall: 0 | 1, ai: 0 | 1, aidedCall: 0 | 1, conf = 80) => [
@@ -31,5 +33,42 @@ describe('crossover', () => {
   });
   it('is null without pairs', () => {
     expect(crossoverSection([makeRead()])).toBeNull();
+  });
+});
+
+describe('crossoverPairsOf over several readers', () => {
+  // The oracle: each reader's pairs found on that reader's reads alone, readers taken in order
+  // of first appearance in the rows given.
+  it('pairs within each reader, readers in order of first appearance, rows in the order given', () => {
+    const reads: ReadRow[] = [];
+    let x = 11;
+    const next = (n: number): number => {
+      x = (Math.imul(x, 1103515245) + 12345) >>> 0;
+      return (x >>> 8) % n;
+    };
+    for (const reader of ['R3', 'R1', 'R2']) {
+      for (let c = 0; c < 12; c++) {
+        const truth = next(2) as 0 | 1;
+        if (next(5) > 0) reads.push(makeRead({ reader_id: reader, case_id: `C${c}`, truth, period: 1, final_call: next(2) as 0 | 1 }));
+        if (next(5) > 0) reads.push(aided(truth, next(2) as 0 | 1, next(2) as 0 | 1, { reader_id: reader, case_id: `C${c}`, period: 2 }));
+      }
+    }
+    // interleaved: R2 appears first, then the others mixed
+    const order = reads.map((_, i) => i).sort((a, b) => ((a * 7919) % 31) - ((b * 7919) % 31));
+    order.unshift(...order.splice(order.findIndex((i) => reads[i]?.reader_id === 'R2'), 1));
+    const cols = readColumns(reads);
+    const rows = Int32Array.from(order);
+    const got = crossoverPairsOf(cols, rows);
+    const firstSeen = [...new Set(order.map((i) => reads[i]?.reader_id))];
+    expect(firstSeen[0]).toBe('R2');
+    const expected: [number, number][] = [];
+    for (const reader of firstSeen) {
+      const own = order.filter((i) => reads[i]?.reader_id === reader);
+      const p = crossoverPairsOf(cols, Int32Array.from(own));
+      p.unaided.forEach((u, k) => expected.push([u, p.aided[k] as number]));
+    }
+    expect(got.readers).toBe(3);
+    expect(expected.length).toBeGreaterThan(10);
+    expect(Array.from(got.unaided, (u, k) => [u, got.aided[k]])).toEqual(expected);
   });
 });

@@ -3,7 +3,7 @@
 // columns read by read (the oracle), or the same refusal at the same line and column with the
 // same words. Inputs: the sample and hand-made variants (quotes, CRLF, byte-order marks, empty
 // cells, bad and odd numbers, semicolons, bad bytes), then many cells broken at random.
-import { parseReadLogBytes, parseReadLogColumns } from '../../../../src/io/read-log-parse';
+import { estimatedLines, parseReadLogBytes, parseReadLogColumns } from '../../../../src/io/read-log-parse';
 import { logColumnsBuilder } from '../../../../src/io/read-log/log-columns';
 import { numberAt } from '../../../../src/io/read-log/fields';
 import { ReadLogError } from '../../../../src/io/read-log/read-log-error';
@@ -128,6 +128,27 @@ describe('parseReadLogColumns against today\'s parser', () => {
     const early = utf8(withCell(2, 'truth', '7'));
     early[early.indexOf(0x48)] = 0xe9; // line 2, before the bad truth on line 4
     expect(expectSame(early)).toEqual({ line: 2, column: null, problem: expect.stringMatching(/not UTF-8/) });
+  });
+
+  // The direct parse sizes its columns by the mean line length of the file's first 256 KB and
+  // grows them when that falls short: long lines first, then many short ones, grow them several times.
+  it('grows its columns when the first lines are much longer than the rest', () => {
+    const rows: string[][] = [];
+    const [unaided, , sequential] = sampleRows() as [string[], string[], string[]];
+    for (let k = 0; k < 20_400; k++) {
+      // each case read once in each period
+      const r = [...(k % 2 === 0 ? unaided : sequential)];
+      r[col('case_id')] = `C${k >> 1}`;
+      if (k < 400) r[col('case_scanner')] = `Halden ${'x'.repeat(800)} ${k % 3}`;
+      rows.push(r);
+    }
+    const bytes = utf8(toCsv(rows));
+    expect(estimatedLines(bytes, 0)).toBeLessThan(10_000);
+    const got = expectSame(bytes) as { log: { n: number; attributes: { values: string[] }[] } };
+    expect(got.log.n).toBe(20_400);
+    expect(got.log.attributes[0]?.values.length).toBe(4);
+    // a short log is counted, not estimated
+    expect(estimatedLines(utf8(SAMPLE_CSV), 0)).toBe(6);
   });
 
   // Random logs: each cell of a few rows replaced by a value from a list of troublesome ones; the
