@@ -68,22 +68,22 @@ try {
  * The same relaunches in the launcher's real app window, on a profile of its own (its first
  * launch generates the demo set): spawn to the start screen's `ready`, as a user gets it.
  */
-async function appWindowFigures(url: string, notes: string[]): Promise<Figure[]> {
+async function appWindowFigures(url: string, out: string[]): Promise<Figure[]> {
   const xvfb = await startXvfb();
-  if (xvfb === null) { notes.push('app window not timed: Xvfb is not installed'); return []; }
-  const profile = benchProfileDir();
+  if (xvfb === null) { out.push('app window not timed: Xvfb is not installed'); return []; }
+  const windowProfile = benchProfileDir();
   try {
-    const first = await windowLaunch(xvfb.display, url, profile);
+    const first = await windowLaunch(xvfb.display, url, windowProfile);
     if (!first.demoGenerated) throw new Error('app window: the first launch on a fresh profile did not generate the demo set');
     const runs: WindowLaunch[] = [];
     for (let i = 0; i < RUNS; i++) {
-      const launch = await windowLaunch(xvfb.display, url, profile);
+      const launch = await windowLaunch(xvfb.display, url, windowProfile);
       if (launch.demoGenerated) throw new Error(`app window: relaunch ${i + 1} generated the demo set again`);
       runs.push(launch);
     }
     const med = (pick: (l: WindowLaunch) => number) => median(runs.map(pick));
     const early = runs.filter((l) => l.attachedEarly).length;
-    notes.push(
+    out.push(
       `app window relaunch (spawn to ready) times: ${runs.map((l) => Math.round(l.readyMs)).join(', ')} ms`,
       ...(early > 0 ? [`app window: ${early} of ${RUNS} relaunches were not ready when DevTools connected (raise HEED_BENCH_WINDOW_WAIT_MS)`] : []),
     );
@@ -96,6 +96,6 @@ async function appWindowFigures(url: string, notes: string[]): Promise<Figure[]>
     ];
   } finally {
     xvfb.stop();
-    removeProfileDir(profile);
+    removeProfileDir(windowProfile);
   }
 }

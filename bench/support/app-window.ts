@@ -56,9 +56,11 @@ const ATTACH_AFTER_MS = Number(process.env.HEED_BENCH_WINDOW_WAIT_MS ?? 4000);
  * after the launcher's own (a later `--disable-features` replaces an earlier one in Chromium).
  */
 export const windowLaunch = async (display: string, url: string, profileDir: string, extra: string[] = []): Promise<WindowLaunch> => {
-  const args = [...chromiumArgs({ url, profileDir, isRoot: process.getuid?.() === 0, debugPort: 0, engine: 'sqlite' }), ...extra];
+  // `--heed-binary=PATH` among the extra flags (diagnostic) starts that executable instead of CHROMIUM
+  const binary = extra.find((f) => f.startsWith('--heed-binary='))?.slice('--heed-binary='.length) ?? CHROMIUM;
+  const args = [...chromiumArgs({ url, profileDir, isRoot: process.getuid?.() === 0, debugPort: 0, engine: 'sqlite' }), ...extra.filter((f) => !f.startsWith('--heed-binary='))];
   const spawnedAt = Date.now();
-  const child = spawn(CHROMIUM, args, { stdio: ['ignore', 'ignore', 'pipe'], detached: true, env: { ...process.env, DISPLAY: display } });
+  const child = spawn(binary, args, { stdio: ['ignore', 'ignore', 'pipe'], detached: true, env: { ...process.env, DISPLAY: display } });
   try {
     const { wsUrl, upAt } = await new Promise<{ wsUrl: string; upAt: number }>((resolve, reject) => {
       let buffered = '';

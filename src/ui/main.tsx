@@ -3,16 +3,19 @@ import { openHeedDb } from '../store/db';
 import { App } from './App';
 import { DbProvider } from './db-context';
 import { signal } from './signals';
-import { startLoading } from './startup';
+import { drawWhenSettled, FIRST_RENDER_WAIT_MS, launchSettled, startLoading } from './startup';
 import './styles.css';
 
 const root = document.getElementById('root');
 if (!root) throw new Error('index.html has no #root');
 const db = openHeedDb();
 startLoading(db);
-createRoot(root).render(
-  <DbProvider db={db}>
-    <App />
-  </DbProvider>,
-);
-signal('mounted');
+// the first render waits (a little) for the launch's queries, so the start screen is drawn once
+drawWhenSettled(launchSettled(), () => {
+  createRoot(root).render(
+    <DbProvider db={db}>
+      <App />
+    </DbProvider>,
+  );
+  signal('mounted');
+}, FIRST_RENDER_WAIT_MS);
