@@ -73,18 +73,17 @@ export const homeSettledAtLaunch = (): HomeData | undefined => home.takeSettled(
 export const FIRST_RENDER_WAIT_MS = 400;
 
 /**
- * Calls `draw` once: when every query in `settled` has answered, or after `waitMs`, whichever is
- * first. Returns a function that draws at once (if not drawn yet).
+ * Calls `draw` once: when every query in `settled` has answered (`draw(true)`), or after `waitMs`
+ * (`draw(false)`), whichever is first.
  */
 export const drawWhenSettled = (
-  settled: Promise<unknown>, draw: () => void, waitMs: number,
+  settled: Promise<unknown>, draw: (answered: boolean) => void, waitMs: number,
   setTimer: (run: () => void, ms: number) => unknown = setTimeout,
-): (() => void) => {
+): void => {
   let drawn = false;
-  const once = (): void => { if (drawn) return; drawn = true; draw(); };
-  void settled.then(once, once);
-  setTimer(once, waitMs);
-  return once;
+  const once = (answered: boolean): void => { if (drawn) return; drawn = true; draw(answered); };
+  void settled.then(() => { once(true); }, () => { once(true); });
+  setTimer(() => { once(false); }, waitMs);
 };
 
 /** Resolves once both launch queries have answered (or failed). */

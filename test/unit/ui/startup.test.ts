@@ -70,37 +70,37 @@ describe('drawWhenSettled', () => {
   };
 
   it('draws once when the queries answer before the limit', async () => {
-    let draws = 0;
+    const draws: boolean[] = [];
     const t = timers();
     let answer = (): void => undefined;
     const settled = new Promise<void>((resolve) => { answer = resolve; });
-    drawWhenSettled(settled, () => { draws++; }, 400, t.set);
-    expect(draws).toBe(0);
+    drawWhenSettled(settled, (answered) => { draws.push(answered); }, 400, t.set);
+    expect(draws).toEqual([]);
     answer();
     await tick();
-    expect(draws).toBe(1);
+    expect(draws).toEqual([true]);
     for (const run of t.pending) run();
-    expect(draws).toBe(1);
+    expect(draws).toEqual([true]);
   });
 
   it('draws at the limit when the queries are still out, and not again when they answer', async () => {
-    let draws = 0;
+    const draws: boolean[] = [];
     const t = timers();
     let answer = (): void => undefined;
     const settled = new Promise<void>((resolve) => { answer = resolve; });
-    drawWhenSettled(settled, () => { draws++; }, 400, t.set);
+    drawWhenSettled(settled, (answered) => { draws.push(answered); }, 400, t.set);
     for (const run of t.pending) run();
-    expect(draws).toBe(1);
+    expect(draws).toEqual([false]);
     answer();
     await tick();
-    expect(draws).toBe(1);
+    expect(draws).toEqual([false]);
   });
 
   it('draws when a query fails (the screen shows the error)', async () => {
-    let draws = 0;
+    const draws: boolean[] = [];
     const t = timers();
-    drawWhenSettled(Promise.reject(new Error('no database')), () => { draws++; }, 400, t.set);
+    drawWhenSettled(Promise.reject(new Error('no database')), (answered) => { draws.push(answered); }, 400, t.set);
     await tick();
-    expect(draws).toBe(1);
+    expect(draws).toEqual([true]);
   });
 });
