@@ -25,7 +25,9 @@ type TraceEvent = { name: string; cat: string; ph: string; ts: number; dur?: num
 
 const server = await startStaticServer({ root: dist });
 const profile = benchProfileDir();
-const CATEGORIES = ['disabled-by-default-v8.cpu_profiler', 'devtools.timeline', 'v8', 'v8.execute', 'blink.user_timing', 'loading', 'disabled-by-default-devtools.timeline', 'blink', 'netlog', 'navigation'];
+// HEED_TRACE_CATEGORIES=a,b adds trace categories (e.g. fonts,mojom,ipc)
+const CATEGORIES = ['disabled-by-default-v8.cpu_profiler', 'devtools.timeline', 'v8', 'v8.execute', 'blink.user_timing', 'loading', 'disabled-by-default-devtools.timeline', 'blink', 'netlog', 'navigation',
+  ...(process.env.HEED_TRACE_CATEGORIES ?? '').split(',').filter(Boolean)];
 console.log(machineNote('start'));
 try {
   const first = await startChromium(profile, server.url);

@@ -9,6 +9,8 @@ export declare const hasDisplay: (env: Env) => boolean;
 export declare const parsePort: (name: string, value: string | undefined) => { ok: true; port: number | null } | { ok: false; error: string };
 export declare const chromiumProfileDir: (env: Env, home: string) => string;
 export declare const appUrl: (url: string, mode: 'chromium' | 'serve', profileDir: string | null, backupSecret?: string | null, engine?: StoreEngine | null) => string;
+/** Chromium features the app window switches off (one --disable-features switch). */
+export declare const DISABLED_FEATURES: readonly string[];
 export declare const chromiumArgs: (o: { url: string; profileDir: string; isRoot: boolean; debugPort: number | null; engine: StoreEngine }) => string[];
 export declare const electronBinary: (root: string) => string | null;
 export declare const findChromium: (env: Env) => string | null;

@@ -83,8 +83,15 @@ export const chromiumProfileDir = (env, home) => {
  * Chromium's command line for an app window on `url`. Background services that would reach the
  * network are switched off. `--no-sandbox` only as root, where Chromium refuses to start otherwise.
  * `engine` is the profile's IndexedDB engine (store-engine.mjs).
+ *
+ * BackgroundResourceFetch is switched off so a relaunch runs the app's scripts from V8's code cache:
+ * with it (Chromium 156), module scripts are always parsed again from source, although Chromium
+ * writes their code cache at the second launch (bench/README.md, "Cold start, sixth session").
+ * It is the only --disable-features switch here: Chromium keeps the last one given.
  * @param {{ url: string; profileDir: string; isRoot: boolean; debugPort: number | null; engine: 'sqlite' | 'leveldb' }} o
  */
+export const DISABLED_FEATURES = Object.freeze(['BackgroundResourceFetch']);
+
 export const chromiumArgs = ({ url, profileDir, isRoot, debugPort, engine }) => [
   `--app=${url}`,
   `--user-data-dir=${profileDir}`,
@@ -94,6 +101,7 @@ export const chromiumArgs = ({ url, profileDir, isRoot, debugPort, engine }) => 
   '--disable-component-update',
   '--disable-sync',
   '--disable-quic',
+  `--disable-features=${DISABLED_FEATURES.join(',')}`,
   ...storeEngineArgs(engine),
   ...(isRoot ? ['--no-sandbox'] : []),
   ...(debugPort !== null ? [`--remote-debugging-port=${debugPort}`] : []),

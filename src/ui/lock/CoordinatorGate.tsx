@@ -4,11 +4,11 @@
  * coordinator's side. The reader's own screens (reading, handover) are never behind it. Without a
  * passphrase nothing is locked, and the start page asks for one.
  */
-import { useCallback, useEffect, useState, type ReactNode } from 'react';
+import { useCallback, useEffect, useRef, useState, type ReactNode } from 'react';
 import { engageLock, type LockInfo } from '../../store/coordinator-lock';
 import { useDb } from '../db-context';
 import type { Screen } from '../state/app-state';
-import { lockAtLaunch } from '../startup';
+import { lockAtLaunch, lockSettledAtLaunch } from '../startup';
 import { createIdleTimer } from './idle-timer';
 import { LockScreen } from './LockScreen';
 import { LockSetup } from './LockSetup';
@@ -20,14 +20,21 @@ let setupDismissed = false;
 
 export const CoordinatorGate = ({ screen, children }: { screen: Screen; children: ReactNode }) => {
   const db = useDb();
-  const [info, setInfo] = useState<LockInfo | null>(null);
+  // the lock as read at launch when it has already arrived (src/ui/startup.ts): no "Opening…" first
+  const [info, setInfo] = useState<LockInfo | null>(() => lockSettledAtLaunch() ?? null);
+  const readAtLaunch = useRef(info !== null);
   const [dismissed, setDismissed] = useState(setupDismissed);
   // the first read is the one started at launch (src/ui/startup.ts)
   const refresh = useCallback(() => { lockAtLaunch(db).then(setInfo, () => setInfo(null)); }, [db]);
   const readerFlow = isReaderFlow(screen);
 
-  // read again on every change of screen: another window may have locked in between
-  useEffect(refresh, [refresh, screen]);
+  // read again on every change of screen: another window may have locked in between (the first
+  // screen's read is the launch's, when the gate started with it)
+  const onScreen = useCallback(() => {
+    if (readAtLaunch.current) { readAtLaunch.current = false; return; }
+    refresh();
+  }, [refresh]);
+  useEffect(onScreen, [onScreen, screen]);
 
   useEffect(() => {
     if (screen.name !== 'read' || !info?.hasPassphrase || info.locked) return;

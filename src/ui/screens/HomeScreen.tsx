@@ -1,11 +1,11 @@
 /** The start screen: the caution, the case sets, the studies, and any reading left unfinished. */
-import { useCallback, useEffect } from 'react';
+import { useCallback, useEffect, useState } from 'react';
 import { CautionLine } from '../components/CautionLine';
 import { useDb } from '../db-context';
 import { LockSetupSlot } from '../lock/lock-setup-slot';
 import { signal } from '../signals';
 import { preloadReading } from '../reading/load-reading';
-import { homeAtLaunch } from '../startup';
+import { homeAtLaunch, homeSettledAtLaunch } from '../startup';
 import { actions } from '../state/app-state';
 import { useAsync } from '../use-async';
 import { BackupsPanel } from './BackupsPanel';
@@ -16,8 +16,10 @@ import { StoreLossNotice } from './StoreLossNotice';
 
 export const HomeScreen = () => {
   const db = useDb();
-  // the first load is the one started at launch (src/ui/startup.ts)
-  const home = useAsync(useCallback(() => homeAtLaunch(db), [db]));
+  // the first load is the one started at launch (src/ui/startup.ts); when it has already arrived,
+  // the screen starts with it and is drawn once
+  const [atLaunch] = useState(homeSettledAtLaunch);
+  const home = useAsync(useCallback(() => homeAtLaunch(db), [db]), atLaunch);
 
   useEffect(() => {
     if (!home.value) return;

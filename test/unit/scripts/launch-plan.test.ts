@@ -84,6 +84,11 @@ describe('chromiumArgs', () => {
     expect(chromiumArgs({ ...base, debugPort: 9333 })).toContain('--remote-debugging-port=9333');
   });
 
+  it('switches off background resource fetching (so scripts run from the code cache), in one --disable-features', () => {
+    const disabled = chromiumArgs(base).filter((a) => a.startsWith('--disable-features='));
+    expect(disabled).toEqual(['--disable-features=BackgroundResourceFetch']);
+  });
+
   it('turns on Chromium\'s SQLite IndexedDB engine for a SQLite profile only', () => {
     expect(chromiumArgs(base)).toContain('--enable-features=IdbSqliteBackingStore');
     expect(chromiumArgs({ ...base, engine: 'leveldb' }).some((a) => a.startsWith('--enable-features'))).toBe(false);
