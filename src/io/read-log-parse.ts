@@ -241,7 +241,10 @@ export const estimatedLines = (bytes: Uint8Array, begin: number): number => {
   let lines = 1;
   for (let i = bytes.indexOf(0x0a, begin); i !== -1 && i < to; i = bytes.indexOf(0x0a, i + 1)) lines++;
   if (to === bytes.length) return lines;
-  return Math.ceil(((bytes.length - begin) / (to - begin)) * lines * 1.05) + 64;
+  // never more reads than the bytes can hold (a row has a comma between each required column),
+  // so a log opening with blank or short lines cannot ask for columns the size of the file
+  const most = Math.ceil((bytes.length - begin) / (READ_LOG_COLUMNS.length - 1)) + 64;
+  return Math.min(most, Math.ceil(((bytes.length - begin) / (to - begin)) * lines * 1.05) + 64);
 };
 
 // The direct parse of a file that plainLinesFrom passes: lines split at newline bytes, cells at

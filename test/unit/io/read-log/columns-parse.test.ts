@@ -3,6 +3,7 @@
 // columns read by read (the oracle), or the same refusal at the same line and column with the
 // same words. Inputs: the sample and hand-made variants (quotes, CRLF, byte-order marks, empty
 // cells, bad and odd numbers, semicolons, bad bytes), then many cells broken at random.
+import { READ_LOG_COLUMNS } from '../../../../src/core/read-log';
 import { estimatedLines, parseReadLogBytes, parseReadLogColumns } from '../../../../src/io/read-log-parse';
 import { logColumnsBuilder } from '../../../../src/io/read-log/log-columns';
 import { numberAt } from '../../../../src/io/read-log/fields';
@@ -149,6 +150,15 @@ describe('parseReadLogColumns against today\'s parser', () => {
     expect(got.log.attributes[0]?.values.length).toBe(4);
     // a short log is counted, not estimated
     expect(estimatedLines(utf8(SAMPLE_CSV), 0)).toBe(6);
+  });
+
+  it('never estimates more reads than the bytes can hold, whatever the first 256 KB look like', () => {
+    // 300,000 blank lines, then one long line: the sample's mean line length is one byte, so an
+    // estimate from it alone would size every column like the file (over a million reads)
+    const bytes = utf8(`${'\n'.repeat(300_000)}${'x'.repeat(1_000_000)}`);
+    const most = Math.ceil(bytes.length / (READ_LOG_COLUMNS.length - 1)) + 64;
+    expect(estimatedLines(bytes, 0)).toBe(most);
+    expect(most).toBeLessThan(bytes.length / 10);
   });
 
   // Random logs: each cell of a few rows replaced by a value from a list of troublesome ones; the
