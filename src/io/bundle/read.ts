@@ -6,7 +6,6 @@
  * manifest's entries and chain head for the chained files. Returns the first fault, named by
  * file and line, or the study as a snapshot. Pure and synchronous (no Node APIs).
  */
-import { unzipSync } from 'fflate';
 import { canonicalJson, contentText, eventLine, genesisHash, sha256Hex, type ChainedEvent } from '../../core/chain';
 import { parseStudyJson } from '../../core/study-json';
 import type { CaseImage } from '../../core/case-set';
@@ -17,7 +16,7 @@ import { manifestFileSchema, studyBundlePartSchema, type StudyBundlePart } from 
 import { ANSWER_EVENTS, type StudySnapshot } from './snapshot';
 import { BUNDLE_FORMAT, BUNDLE_VERSION, bundleCasesCsv, caseSetFingerprint, designFingerprint, readsCsv } from './texts';
 import { IMAGE_FOLDER, MANIFEST, type BundleManifest } from './write';
-import { zipBombFault } from './zip-guard';
+import { unzipBundle } from './zip-guard';
 
 export type ReadBundle = { ok: true; snapshot: StudySnapshot; manifest: BundleManifest } | { ok: false; fault: BundleFault };
 
@@ -102,14 +101,9 @@ export const checkEventLines = (body: string, studyId: string): ChainCheck => {
 };
 
 export const readBundle = (zip: Uint8Array): ReadBundle => {
-  const bomb = zipBombFault(zip);
-  if (bomb) return { ok: false, fault: bomb };
-  let entries: Record<string, Uint8Array>;
-  try {
-    entries = unzipSync(zip);
-  } catch (error) {
-    return fail('(bundle)', null, `not a readable zip (${error instanceof Error ? error.message : String(error)})`);
-  }
+  const unzipped = unzipBundle(zip);
+  if (!unzipped.ok) return unzipped;
+  const entries = unzipped.entries;
   const files = new Map(Object.entries(entries).filter(([path]) => !path.endsWith('/')));
   const manifestBytes = files.get(MANIFEST);
   if (!manifestBytes) return fail(MANIFEST, null, 'missing: this is not a Heed study bundle');

@@ -1,11 +1,15 @@
 /**
- * Checks a study bundle's zip before anything is unpacked, so a hostile or damaged file cannot
- * exhaust memory: fflate's unzipSync gives every entry a buffer of its declared size (and never
- * writes past it), so the declared sizes are what unpacking costs. Refused: a zip whose directory
- * cannot be read, entries that share compressed bytes (zip/case-set directory reader), an entry
- * that declares more than 100 times its compressed size beyond 1 MB, and declared sizes that add
- * up to more than 100 times the zip (plus 1 MB) or to more than 2 GB.
+ * Unpacks a study bundle's zip so that a hostile or damaged file cannot exhaust memory. fflate's
+ * unzipSync gives every deflated entry a buffer of its declared size (and never writes past it)
+ * and copies a stored one, so the declared sizes are what unpacking costs. Refused: a zip whose
+ * directory cannot be read, entries that share compressed bytes (the case sets' directory reader),
+ * an entry that declares more than 100 times its compressed size beyond 1 MB, and declared sizes
+ * that add up to more than 100 times the zip (plus 1 MB) or to more than 2 GB. The same limits
+ * are kept again as fflate itself walks the directory (its filter sees each entry before its
+ * buffer is made), since two readers of one zip can be led to see different directories (an end
+ * record whose two entry counts differ, a ZIP64 locator).
  */
+import { unzipSync } from 'fflate';
 import { readZipDirectory } from '../case-set/zip-directory';
 import type { BundleFault } from './fault';
 
@@ -37,4 +41,36 @@ export const zipBombFault = (zip: Uint8Array): BundleFault | null => {
     return { file: '(bundle)', line: null, message: `its files would unpack to ${mb(declared)} from a ${mb(zip.length)} zip, more than ${MAX_RATIO} times its size: the mark of a zip bomb; nothing was unpacked` };
   }
   return null;
+};
+
+class Refused extends Error {}
+
+export type Unzipped = { ok: true; entries: Record<string, Uint8Array> } | { ok: false; fault: BundleFault };
+
+/** The bundle's entries, or the first reason not to unpack them (nothing larger than the limits is ever made). */
+export const unzipBundle = (zip: Uint8Array): Unzipped => {
+  const early = zipBombFault(zip);
+  if (early) return { ok: false, fault: early };
+  let fault: BundleFault | null = null;
+  let total = 0;
+  try {
+    const entries = unzipSync(zip, {
+      filter: (f) => {
+        const cost = f.compression === 0 ? f.size : f.originalSize;
+        if (f.compression !== 0 && f.originalSize > GRACE && f.originalSize > MAX_RATIO * f.size) {
+          fault = { file: f.name, line: null, message: `would unpack to ${mb(f.originalSize)} from ${f.size} bytes, more than ${MAX_RATIO} times its packed size: the mark of a zip bomb; nothing was unpacked` };
+        }
+        total += cost;
+        if (!fault && (total > MAX_UNPACKED_BYTES || total > MAX_RATIO * zip.length + GRACE)) {
+          fault = { file: '(bundle)', line: null, message: `its entries as the unzipper reads them would unpack to more than ${mb(Math.min(MAX_UNPACKED_BYTES, MAX_RATIO * zip.length + GRACE))}: the mark of a zip bomb or a damaged directory; refused` };
+        }
+        if (fault) throw new Refused();
+        return true;
+      },
+    });
+    return { ok: true, entries };
+  } catch (error) {
+    if (fault) return { ok: false, fault };
+    return { ok: false, fault: { file: '(bundle)', line: null, message: `not a readable zip (${error instanceof Error ? error.message : String(error)})` } };
+  }
 };

@@ -4,7 +4,7 @@
 import { unzipSync, zipSync } from 'fflate';
 import { readBundle } from '../../../../src/io/bundle/read';
 import { writeBundle } from '../../../../src/io/bundle/write';
-import { MAX_UNPACKED_BYTES, zipBombFault } from '../../../../src/io/bundle/zip-guard';
+import { MAX_UNPACKED_BYTES, unzipBundle, zipBombFault } from '../../../../src/io/bundle/zip-guard';
 import { gatherStudySnapshot, openStudyBundle } from '../../../../src/store/bundle';
 import { deflatedEntry, rawZip, type RawEntry } from '../case-set/hostile-zips';
 import { freshDb, readTinyStudy } from '../../support/bundle-study';
@@ -51,12 +51,30 @@ describe('a study bundle that would unpack to too much', () => {
   });
 
   it('refuses declared sizes over 2 GB in all, even at a plausible ratio', () => {
-    // stored entries of 1 MB whose directory claims 90 MB each (the reader would allocate that)
-    const data = new Uint8Array(1024 * 1024).map((_, i) => (i * 2654435761) >>> 24);
-    const entries: RawEntry[] = Array.from({ length: 25 }, (_, i) => ({ name: `image-${i}.png`, stored: data, method: 0, crc: 0, size: 90 * 1024 * 1024 }));
-    const fault = zipBombFault(rawZip(entries));
+    // 25 deflated entries of 1 MB of noise (they do not shrink) whose directory claims 90 MB each:
+    // the unzipper would make a 90 MB buffer for each
+    let x = 1;
+    const noise = new Uint8Array(1024 * 1024).map(() => { x ^= x << 13; x ^= x >>> 17; x ^= x << 5; return x & 0xff; });
+    const one = deflatedEntry('image-0.png', noise, 90 * 1024 * 1024);
+    const entries: RawEntry[] = Array.from({ length: 25 }, (_, i) => ({ ...one, name: `image-${i}.png` }));
+    const zip = rawZip(entries);
+    expect(one.stored.length).toBeGreaterThan(1000 * 1024); // about 1:1, so 90 MB is under 100 times it
     expect(25 * 90 * 1024 * 1024).toBeGreaterThan(MAX_UNPACKED_BYTES);
-    expect(fault?.message).toMatch(/would unpack to 2250 MB, more than the 2048 MB Heed opens at once; save the bundle again without its images/);
+    const read = readBundle(zip);
+    expect(read.ok).toBe(false);
+    if (!read.ok) expect(read.fault.message).toMatch(/would unpack to 2250 MB, more than the 2048 MB Heed opens at once; save the bundle again without its images/);
+  });
+
+  it('keeps the limits as the unzipper itself walks the directory, when the end record shows the guard fewer entries', () => {
+    // one deflated MB of zeros listed 61 times; the end record's total count (what the directory
+    // reader takes) says 1, its count on this disk (what fflate takes) says 61
+    const zip = rawZip([deflatedEntry('a.txt', new Uint8Array(1024 * 1024))], Array.from({ length: 60 }, (_, i) => ({ name: `alias-${i}.txt`, of: 0 })));
+    const end = zip.length - 22;
+    new DataView(zip.buffer).setUint16(end + 10, 1, true);
+    expect(zipBombFault(zip)).toBeNull(); // the directory reader alone is fooled
+    const unzipped = unzipBundle(zip);
+    expect(unzipped.ok).toBe(false);
+    if (!unzipped.ok) expect(unzipped.fault.message).toMatch(/as the unzipper reads them would unpack to more than \d+ (kB|MB): the mark of a zip bomb or a damaged directory/);
   });
 
   it('names an unreadable zip as such', () => {
