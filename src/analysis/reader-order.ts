@@ -7,6 +7,8 @@
 const letters = (code: number): boolean => (code >= 65 && code <= 90) || (code >= 97 && code <= 122);
 const digit = (code: number): boolean => code >= 48 && code <= 57;
 
+const MAX_PLAIN_DIGITS = 254;
+
 // where the number of a plain id starts, or -1 when the id is not letters then a plain number
 const numberStart = (id: string): number => {
   let i = 0;
@@ -14,6 +16,8 @@ const numberStart = (id: string): number => {
   if (i === id.length) return -1;
   // a leading zero ('R01') is left to the collator, which ranks it against 'R1' by its own rules
   if (id.charCodeAt(i) === 48 && i + 1 < id.length) return -1;
+  // ICU compares a number of over 254 digits in 254-digit pieces: left to the collator too
+  if (id.length - i > MAX_PLAIN_DIGITS) return -1;
   for (let j = i; j < id.length; j++) if (!digit(id.charCodeAt(j))) return -1;
   return i;
 };

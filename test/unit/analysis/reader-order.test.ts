@@ -30,6 +30,10 @@ describe('compareReaderIds', () => {
       expect(compareReaderIds(a, a)).toBe(0);
     }
   });
+  it('leaves numbers of over 254 digits to the collator, which compares them in 254-digit pieces', () => {
+    const ids = [`R2${'0'.repeat(254)}`, `R1${'0'.repeat(255)}`, `R9${'9'.repeat(253)}`, `R1${'0'.repeat(254)}`, `R${'9'.repeat(300)}`, 'R7'];
+    for (const a of ids) for (const b of ids) expect([a.length, b.length, Math.sign(compareReaderIds(a, b))]).toEqual([a.length, b.length, icu(a, b)]);
+  });
   it('sorts a shuffled list of plain ids as the collator does', () => {
     const ids = Array.from({ length: 300 }, (_, i) => `R${(i * 7919) % 1000}`);
     expect([...ids].sort(compareReaderIds)).toEqual([...ids].sort((a, b) => a.localeCompare(b, 'en', { numeric: true })));
