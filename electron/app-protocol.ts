@@ -8,9 +8,14 @@ export const APP_SCHEME = 'heed';
 export const APP_HOST = 'app';
 export const APP_URL = `${APP_SCHEME}://${APP_HOST}/index.html`;
 
-/** Privileges for protocol.registerSchemesAsPrivileged. No CORS, no service workers, no streams. */
+/**
+ * Privileges for protocol.registerSchemesAsPrivileged. No CORS, no service workers, no streams.
+ * codeCache: V8 keeps the compiled app scripts between launches (Electron does this for http(s)
+ * only unless a standard scheme asks for it), as Chromium does for the launcher's window.
+ */
 export const APP_SCHEME_PRIVILEGES = {
   standard: true,
+  codeCache: true,
   secure: true,
   supportFetchAPI: true,
   corsEnabled: false,

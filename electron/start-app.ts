@@ -3,6 +3,7 @@
 // medical device.
 import { mkdirSync } from 'node:fs';
 import { app, ipcMain, protocol, session } from 'electron';
+import { DISABLED_FEATURES } from '../scripts/lib/launch-plan.mjs';
 import { settleStoreEngine, SQLITE_FEATURE } from '../scripts/lib/store-engine.mjs';
 import { APP_SCHEME, APP_SCHEME_PRIVILEGES, appResponse } from './app-protocol';
 import { registerIpc } from './ipc-main';
@@ -37,6 +38,10 @@ export const startApp = ({ distRoot, preload }: AppPaths, env: Record<string, st
   mkdirSync(userData, { recursive: true });
   const { engine } = settleStoreEngine(userData);
   if (engine === 'sqlite') app.commandLine.appendSwitch('enable-features', SQLITE_FEATURE);
+  // As the launcher's app window: with BackgroundResourceFetch on, Chromium 156 parsed the app's
+  // module scripts from source at every launch instead of using their code cache (bench/README.md,
+  // "Cold start, sixth session"; measured in Chromium, not in Electron, which cannot run here).
+  app.commandLine.appendSwitch('disable-features', DISABLED_FEATURES.join(','));
   app.on('web-contents-created', (_event, contents) => guardContents(contents));
   app.on('window-all-closed', () => app.quit());
 

@@ -31,7 +31,7 @@ describe('isAppUrl', () => {
 
 describe('the heed scheme', () => {
   it('is standard and secure, without CORS or service workers', () => {
-    expect(APP_SCHEME_PRIVILEGES).toMatchObject({ standard: true, secure: true, corsEnabled: false, allowServiceWorkers: false });
+    expect(APP_SCHEME_PRIVILEGES).toMatchObject({ standard: true, secure: true, corsEnabled: false, allowServiceWorkers: false, codeCache: true });
   });
 
   it('serves files from dist/ with MIME type and CSP', async () => {

@@ -81,6 +81,8 @@ describe('the IndexedDB engine', () => {
   it('turns on Chromium\'s SQLite engine for a new user-data folder, and records it', () => {
     startApp({ distRoot: '/d', preload: '/p' }, {});
     expect(electron.app.commandLine.appendSwitch).toHaveBeenCalledWith('enable-features', 'IdbSqliteBackingStore');
+    // the code cache of the app's scripts, as in the launcher's window (scripts/lib/launch-plan.mjs)
+    expect(electron.app.commandLine.appendSwitch).toHaveBeenCalledWith('disable-features', 'BackgroundResourceFetch');
     expect(readFileSync(path.join(electron.userData.dir, 'heed-store-engine'), 'utf8')).toBe('sqlite\n');
   });
 
