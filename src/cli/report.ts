@@ -63,12 +63,15 @@ export const reportFromLog = (file: string, log: string | Uint8Array, readerId: 
   }
 };
 
+const cannotWrite = (path: string, error: unknown): CliError =>
+  new CliError(`cannot write ${path}: ${error instanceof Error ? error.message : String(error)}`);
+
 export const runReport = async (args: string[]): Promise<number> => {
   const { file, reader, out, pdf } = parseReportArgs(args);
   // a reads.csv, or a study bundle (verified first, then its reads.csv)
   const bytes = await readAnalyzeInput(file);
   const html = reportFromLog(file, bytes, reader, new Date().toISOString());
-  if (out !== null) await writeFile(out, html);
+  if (out !== null) await writeFile(out, html).catch((error: unknown) => { throw cannotWrite(out, error); });
   if (pdf !== null) {
     const work = await mkdtemp(join(tmpdir(), 'heed-report-'));
     try {

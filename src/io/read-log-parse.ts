@@ -98,10 +98,15 @@ const rowReader = (keep: (read: ReadRow) => void): { take: (cells: string[], lin
   return { take, shownAtColumn: () => (layout === null ? -1 : layout.at.shown_at), done };
 };
 
+const CR_ONLY = 'its lines end with a carriage return alone (an old Mac export): save it as CSV with LF or CRLF line endings';
+
 // Papaparse reports each row's end offset; a row starts where the previous ended, and its line
 // is 1 + the newlines before that start (quoted cells may span lines). Hands each record to
 // `take` in order; throws a ReadLogError for unreadable CSV.
 const splitRecords = (text: string, take: (cells: string[], line: number) => void): void => {
+  // Papaparse would take a lone carriage return as the line break, but lines and the columns'
+  // size are counted by line feeds: such a file is refused with what to do instead
+  if (!text.includes('\n') && text.includes('\r')) throw new ReadLogError(1, null, CR_ONLY);
   const newlines: number[] = [];
   for (let i = text.indexOf('\n'); i !== -1; i = text.indexOf('\n', i + 1)) newlines.push(i);
   // rows arrive in order, so the count of newlines before a row's start only moves forward

@@ -87,6 +87,14 @@ describe('heed report', () => {
     expect(r.err.trim().split('\n')).toHaveLength(1);
     expect(r.err).toMatch(message);
   });
+  it('gives a clear error and exit 2, no stack trace, when --out cannot be written', () => {
+    for (const target of [join(dir, 'no-such-folder', 'r.html'), dir]) {
+      const r = heed('report', write('s.csv', SAMPLE_CSV), '--reader', 'R1', '--out', target);
+      expect(r.code).toBe(2);
+      expect(r.err).toMatch(new RegExp(`^heed: cannot write ${target.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}: (ENOENT|EISDIR)`));
+      expect(r.err).not.toMatch(/\n\s+at /);
+    }
+  });
   it('gives a clear error and exit 2 for --pdf when no Chromium is found', () => {
     const r = spawnSync(process.execPath, ['bin/heed.js', 'report', write('s.csv', SAMPLE_CSV), '--reader', 'R1', '--pdf', join(dir, 'x.pdf')], {
       encoding: 'utf8', env: { ...process.env, HEED_CHROMIUM: join(dir, 'no-chromium') },

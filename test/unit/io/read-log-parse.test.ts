@@ -1,4 +1,4 @@
-import { parseReadLog, ReadLogError } from '../../../src/io/read-log-parse';
+import { parseReadLog, parseReadLogColumns, ReadLogError } from '../../../src/io/read-log-parse';
 import { readLogCsv } from '../../../src/io/read-log-export';
 import { SAMPLE_CSV, SAMPLE_HEADER, sampleRows, toCsv, withCell } from './read-log-sample';
 
@@ -28,6 +28,11 @@ describe('parseReadLog', () => {
     (rows[0] as string[])[2] = 'radiologist, "senior"';
     const text = `\uFEFF${toCsv(rows).replace(/\n/g, '\r\n')}\r\n`;
     expect(parseReadLog(text)[0]?.reader_role).toBe('radiologist, "senior"');
+  });
+  it('refuses lines ended by a carriage return alone (an old Mac export), saying what to do, also from bytes into columns', () => {
+    const text = SAMPLE_CSV.replace(/\n/g, '\r');
+    expect(problem(text)).toEqual({ line: 1, column: null, problem: expect.stringMatching(/carriage return alone .* save it as CSV with LF or CRLF line endings/) });
+    expect(() => parseReadLogColumns(new TextEncoder().encode(text))).toThrow(/carriage return alone/);
   });
   it('names the line across a quoted cell that spans lines', () => {
     const rows = sampleRows();
