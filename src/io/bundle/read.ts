@@ -37,6 +37,47 @@ const text = (bytes: Uint8Array): string | null => {
 // comparison names the very line it is on.
 const lenient = new TextDecoder('utf-8');
 
+/** The 1-based line of the first bytes that are not UTF-8, or null when all are. */
+export const firstNonUtf8Line = (bytes: Uint8Array): number | null => {
+  let line = 1;
+  for (let start = 0; start <= bytes.length; line++) {
+    const end = bytes.indexOf(0x0a, start);
+    const stop = end === -1 ? bytes.length : end;
+    if (text(bytes.subarray(start, stop)) === null) return line;
+    if (end === -1) break;
+    start = end + 1;
+  }
+  return null;
+};
+
+// Heed's own JSON is a few levels deep (an event's detail holds its read, which holds an answer);
+// recursive code (canonical JSON, schemas) would overflow the stack on thousands of levels.
+const MAX_NESTING = 64;
+
+/** Whether JSON text opens more than `max` arrays or objects inside each other (strings skipped). */
+export const nestedDeeperThan = (json: string, max: number): boolean => {
+  let depth = 0;
+  for (let i = 0; i < json.length; i++) {
+    const c = json.charCodeAt(i);
+    if (c === 0x22) {
+      // a string (most of an event's text: hashes, ids, times): to its closing quote, one not
+      // preceded by an odd run of backslashes
+      let end = json.indexOf('"', i + 1);
+      for (;;) {
+        if (end === -1) return false; // not JSON: JSON.parse refuses it
+        let slashes = 0;
+        while (json.charCodeAt(end - 1 - slashes) === 0x5c) slashes++;
+        if (slashes % 2 === 0) break;
+        end = json.indexOf('"', end + 1);
+      }
+      i = end;
+    } else if (c === 0x7b || c === 0x5b) {
+      if (++depth > max) return true;
+    } else if (c === 0x7d || c === 0x5d) depth--;
+  }
+  return false;
+};
+
 type ChainCheck = { ok: true; events: ChainedEvent[] } | { ok: false; fault: BundleFault };
 
 const HEX64 = /^[0-9a-f]{64}$/;
@@ -82,6 +123,7 @@ export const checkEventLines = (body: string, studyId: string): ChainCheck => {
     } catch {
       return { ok: false, fault: { file, line, message: 'not valid JSON: the line was edited, cut or inserted' } };
     }
+    if (nestedDeeperThan(raw, MAX_NESTING)) return { ok: false, fault: { file, line, message: `its JSON is nested deeper than ${MAX_NESTING} levels: Heed never writes that; the line was edited or inserted` } };
     const shape = eventShapeProblem(value);
     if (shape !== null) return { ok: false, fault: { file, line, message: `not an event line (${shape}): the line was edited or inserted` } };
     const e = value as ChainedEvent;
@@ -141,6 +183,7 @@ export const readBundle = (zip: Uint8Array): ReadBundle => {
 
   // 2. study.json, and the manifest's ids and fingerprints against it.
   const studyBody = text(files.get('study.json') as Uint8Array) ?? '';
+  if (nestedDeeperThan(studyBody, MAX_NESTING)) return fail('study.json', null, `its JSON is nested deeper than ${MAX_NESTING} levels: Heed never writes that; the file was edited`);
   const record = parseStudyJson(studyBody);
   if (!record.ok) return fail('study.json', null, record.problems[0] ?? 'unreadable');
   // Checked by the schemas, then used as written: a schema's output may reorder or drop keys,
@@ -182,7 +225,9 @@ export const readBundle = (zip: Uint8Array): ReadBundle => {
 
   // 4. The chain, line by line; then its end against the manifest.
   const eventsBytes = files.get('events.jsonl') as Uint8Array;
-  const eventsBody = lenient.decode(eventsBytes);
+  // the chain hashes text, so bytes that are not UTF-8 (which would read as U+FFFD) are refused first
+  const eventsBody = text(eventsBytes);
+  if (eventsBody === null) return fail('events.jsonl', firstNonUtf8Line(eventsBytes), 'holds bytes that are not UTF-8: the line was edited');
   const chain = checkEventLines(eventsBody, snapshot.study.id);
   if (!chain.ok) return chain;
   snapshot.events = chain.events;

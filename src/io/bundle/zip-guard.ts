@@ -1,17 +1,20 @@
 /**
- * Unpacks a study bundle's zip so that a hostile or damaged file cannot exhaust memory. fflate's
- * unzipSync gives every deflated entry a buffer of its declared size (and never writes past it)
- * and copies a stored one, so the declared sizes are what unpacking costs. Refused: a zip whose
- * directory cannot be read, entries that share compressed bytes (the case sets' directory reader),
- * an entry that declares more than 100 times its compressed size beyond 1 MB, and declared sizes
- * that add up to more than 100 times the zip (plus 1 MB) or to more than 2 GB. The same limits
- * are kept again as fflate itself walks the directory (its filter sees each entry before its
- * buffer is made), since two readers of one zip can be led to see different directories (an end
- * record whose two entry counts differ, a ZIP64 locator).
+ * Unpacks a study bundle's zip so that a hostile or damaged file cannot exhaust memory or show
+ * two readers two different files. fflate's unzipSync gives every deflated entry a buffer of its
+ * declared size (and never writes past it) and copies a stored one, so the declared sizes are what
+ * unpacking costs. Refused: a zip whose directory cannot be read; entries that share compressed
+ * bytes (the case sets' directory reader); an entry declaring more than 100 times its compressed
+ * size beyond 1 MB; declared sizes adding up to more than 100 times the zip (plus 1 MB) or to more
+ * than 2 GB; a text file over 500 MB (it is read as one string); two entries of one name (unzip
+ * programs keep the first, fflate the last). The limits are kept again as fflate itself walks the
+ * directory (its filter sees each entry before its buffer is made), since two readers of one zip
+ * can be led to see different directories (an end record whose two entry counts differ, a ZIP64
+ * locator).
  */
 import { unzipSync } from 'fflate';
 import { readZipDirectory } from '../case-set/zip-directory';
 import type { BundleFault } from './fault';
+import { IMAGE_FOLDER } from './write';
 
 // The same ratio as the case-set reader (src/io/case-set/zip-source.ts: Apache POI's
 // ZipSecureFile default of 100:1). A bundle's texts shrink perhaps 3-10 times (hashes and ids do
@@ -20,6 +23,16 @@ const MAX_RATIO = 100;
 const GRACE = 1024 * 1024;
 /** What one bundle may unpack to: about what a browser tab can hold at once beside the app. */
 export const MAX_UNPACKED_BYTES = 2 * 1024 * 1024 * 1024;
+/** One text file of a bundle (anything outside images/) is read as one string: V8's limit is about 512 MB. */
+export const MAX_TEXT_BYTES = 500 * 1024 * 1024;
+
+const textTooLarge = (name: string, size: number): BundleFault | null =>
+  !name.startsWith(IMAGE_FOLDER) && size > MAX_TEXT_BYTES
+    ? { file: name, line: null, message: `would unpack to ${mb(size)}, more than the ${mb(MAX_TEXT_BYTES)} one text file of a bundle may hold; nothing was unpacked` }
+    : null;
+
+const repeated = (name: string): BundleFault =>
+  ({ file: name, line: null, message: 'the zip holds two entries with this name (an unzip program would show one, Heed would check the other): refusing the whole bundle' });
 
 const mb = (bytes: number): string => (bytes < 1048576 ? `${Math.ceil(bytes / 1024)} kB` : `${Math.round(bytes / 1048576)} MB`);
 
@@ -28,7 +41,12 @@ export const zipBombFault = (zip: Uint8Array): BundleFault | null => {
   const directory = readZipDirectory(zip);
   if (!directory.ok) return { file: '(bundle)', line: null, message: `not a readable zip (${directory.message})` };
   let declared = 0;
+  const names = new Set<string>();
   for (const entry of directory.entries) {
+    if (names.has(entry.name)) return repeated(entry.name);
+    names.add(entry.name);
+    const tooLarge = textTooLarge(entry.name, entry.size);
+    if (tooLarge) return tooLarge;
     if (entry.size > GRACE && entry.size > MAX_RATIO * entry.compressedSize) {
       return { file: entry.name, line: null, message: `would unpack to ${mb(entry.size)} from ${entry.compressedSize} bytes, more than ${MAX_RATIO} times its packed size: the mark of a zip bomb; nothing was unpacked` };
     }
@@ -53,11 +71,15 @@ export const unzipBundle = (zip: Uint8Array): Unzipped => {
   if (early) return { ok: false, fault: early };
   let fault: BundleFault | null = null;
   let total = 0;
+  const names = new Set<string>();
   try {
     const entries = unzipSync(zip, {
       filter: (f) => {
         const cost = f.compression === 0 ? f.size : f.originalSize;
-        if (f.compression !== 0 && f.originalSize > GRACE && f.originalSize > MAX_RATIO * f.size) {
+        if (names.has(f.name)) fault = repeated(f.name);
+        names.add(f.name);
+        fault ??= textTooLarge(f.name, cost);
+        if (!fault && f.compression !== 0 && f.originalSize > GRACE && f.originalSize > MAX_RATIO * f.size) {
           fault = { file: f.name, line: null, message: `would unpack to ${mb(f.originalSize)} from ${f.size} bytes, more than ${MAX_RATIO} times its packed size: the mark of a zip bomb; nothing was unpacked` };
         }
         total += cost;
