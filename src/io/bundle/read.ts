@@ -123,11 +123,17 @@ export const checkEventLines = (body: string, studyId: string): ChainCheck => {
     } catch {
       return { ok: false, fault: { file, line, message: 'not valid JSON: the line was edited, cut or inserted' } };
     }
-    if (nestedDeeperThan(raw, MAX_NESTING)) return { ok: false, fault: { file, line, message: `its JSON is nested deeper than ${MAX_NESTING} levels: Heed never writes that; the line was edited or inserted` } };
     const shape = eventShapeProblem(value);
     if (shape !== null) return { ok: false, fault: { file, line, message: `not an event line (${shape}): the line was edited or inserted` } };
     const e = value as ChainedEvent;
-    const detailText = canonicalJson(e.detail);
+    let detailText: string;
+    try {
+      detailText = canonicalJson(e.detail);
+    } catch {
+      // JSON.parse reads any depth, canonicalJson recurses: thousands of levels overflow the stack
+      // (scanning every line for its depth first would cost a tenth of a verify)
+      return { ok: false, fault: { file, line, message: 'its JSON is nested too deeply to read (Heed writes a few levels): the line was edited or inserted' } };
+    }
     if (eventLine(e, detailText) !== raw) return { ok: false, fault: { file, line, message: 'not written the way Heed writes it (canonical JSON): the line was edited' } };
     if (e.prev !== prev) {
       return { ok: false, fault: { file, line, message: `does not follow line ${i === 0 ? 'the start of the chain' : i}: a line was removed, inserted or moved here` } };

@@ -33,7 +33,7 @@ describe('hostile texts in a study bundle', () => {
     const deep = `{"at":"2026-12-01T10:00:00.000Z","detail":{"x":${'['.repeat(10_000)}${']'.repeat(10_000)}},"hash":"${'0'.repeat(64)}","prev":"${'0'.repeat(64)}","type":"note"}`;
     lines.splice(2, 0, deep);
     files['events.jsonl'] = enc.encode(lines.join('\n'));
-    expect(faultOf(files)).toEqual({ file: 'events.jsonl', line: 3, message: expect.stringMatching(/nested deeper than 64 levels/) });
+    expect(faultOf(files)).toEqual({ file: 'events.jsonl', line: 3, message: expect.stringMatching(/nested too deeply to read/) });
   });
 
   it('refuses a study.json nested 20,000 levels deep, even with its manifest entry made to match', async () => {
