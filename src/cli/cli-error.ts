@@ -5,3 +5,7 @@ export class CliError extends Error {
     this.name = 'CliError';
   }
 }
+
+/** "cannot write PATH: why", for a file the CLI was asked to write. */
+export const cannotWrite = (path: string, error: unknown): CliError =>
+  new CliError(`cannot write ${path}: ${error instanceof Error ? error.message : String(error)}`);

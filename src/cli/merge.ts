@@ -4,7 +4,7 @@ import { writeFile } from 'node:fs/promises';
 import { BundleMergeError, mergeSnapshots } from '../io/bundle/merge';
 import { readsOfChain } from '../io/bundle/snapshot';
 import { writeBundle } from '../io/bundle/write';
-import { CliError } from './cli-error';
+import { cannotWrite, CliError } from './cli-error';
 import { readBytes, verifiedBundle } from './bundle-file';
 
 const USAGE = 'usage: heed merge A B ... --out C';
@@ -32,7 +32,7 @@ export const runMerge = async (args: string[]): Promise<number> => {
   try {
     await writeFile(out, writeBundle(merged));
   } catch (error) {
-    throw new CliError(`cannot write ${out}: ${error instanceof Error ? error.message : String(error)}`);
+    throw cannotWrite(out, error);
   }
   const reads = [...readsOfChain(merged.events).values()].filter((r) => r.read.final !== null).length;
   console.log(`merged ${inputs.length} bundle${inputs.length === 1 ? '' : 's'} into ${out}: ${reads} reads, ${merged.events.length} events.`);

@@ -10,7 +10,7 @@ import { parseReadLog, parseReadLogBytes, ReadLogError } from '../io/read-log-pa
 import { readAnalyzeInput } from './analyze-input';
 import { reportPage } from '../io/report/render-report';
 import { printHtmlToPdf } from './chromium-pdf';
-import { CliError } from './cli-error';
+import { cannotWrite, CliError } from './cli-error';
 import { plotDocument } from './plot-document';
 
 const USAGE = 'usage: heed report FILE --reader ID [--out report.html] [--pdf report.pdf]';
@@ -62,9 +62,6 @@ export const reportFromLog = (file: string, log: string | Uint8Array, readerId: 
     throw error;
   }
 };
-
-const cannotWrite = (path: string, error: unknown): CliError =>
-  new CliError(`cannot write ${path}: ${error instanceof Error ? error.message : String(error)}`);
 
 export const runReport = async (args: string[]): Promise<number> => {
   const { file, reader, out, pdf } = parseReportArgs(args);

@@ -9,7 +9,7 @@ import type { CaseImage, CaseSetManifest } from '../core/case-set';
 import { readCaseSet } from '../io/case-set/read-case-set';
 import { simulateStudy, splitSnapshot } from '../io/bundle/simulate-study';
 import { writeBundle } from '../io/bundle/write';
-import { CliError } from './cli-error';
+import { cannotWrite, CliError } from './cli-error';
 import { problemLine } from './format-case-set';
 import { nodeSetSource } from './node-set-source';
 import { useNativeSha256 } from './bundle-file';
@@ -84,7 +84,7 @@ export const runSimulate = async (args: string[]): Promise<number> => {
       console.log(`wrote ${copies.length} workstation bundles to ${options.out}: ${options.readers} simulated readers, seed ${options.seed}`);
     }
   } catch (error) {
-    throw new CliError(`cannot write ${options.out}: ${error instanceof Error ? error.message : String(error)}`);
+    throw cannotWrite(options.out, error);
   }
   console.log('Simulated readers, invented data: for trying designs and tools. Heed is a research and training tool, not a medical device.');
   return 0;

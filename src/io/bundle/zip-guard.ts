@@ -26,15 +26,24 @@ export const MAX_UNPACKED_BYTES = 2 * 1024 * 1024 * 1024;
 /** One text file of a bundle (anything outside images/) is read as one string: V8's limit is about 512 MB. */
 export const MAX_TEXT_BYTES = 500 * 1024 * 1024;
 
-const textTooLarge = (name: string, size: number): BundleFault | null =>
-  !name.startsWith(IMAGE_FOLDER) && size > MAX_TEXT_BYTES
-    ? { file: name, line: null, message: `would unpack to ${mb(size)}, more than the ${mb(MAX_TEXT_BYTES)} one text file of a bundle may hold; nothing was unpacked` }
-    : null;
-
-const repeated = (name: string): BundleFault =>
-  ({ file: name, line: null, message: 'the zip holds two entries with this name (an unzip program would show one, Heed would check the other): refusing the whole bundle' });
-
 const mb = (bytes: number): string => (bytes < 1048576 ? `${Math.ceil(bytes / 1024)} kB` : `${Math.round(bytes / 1048576)} MB`);
+
+/**
+ * What is wrong with one entry, or null: a name seen before (unzip programs keep the first copy,
+ * fflate the last), a text file too large for one string, or `unpacked` bytes from `packed` over
+ * 100:1 beyond 1 MB. Adds the name to `names`.
+ */
+const entryFault = (names: Set<string>, name: string, unpacked: number, packed: number): BundleFault | null => {
+  if (names.has(name)) return { file: name, line: null, message: 'the zip holds two entries with this name (an unzip program would show one, Heed would check the other): refusing the whole bundle' };
+  names.add(name);
+  if (!name.startsWith(IMAGE_FOLDER) && unpacked > MAX_TEXT_BYTES) {
+    return { file: name, line: null, message: `would unpack to ${mb(unpacked)}, more than the ${mb(MAX_TEXT_BYTES)} one text file of a bundle may hold; nothing was unpacked` };
+  }
+  if (unpacked > GRACE && unpacked > MAX_RATIO * packed) {
+    return { file: name, line: null, message: `would unpack to ${mb(unpacked)} from ${packed} bytes, more than ${MAX_RATIO} times its packed size: the mark of a zip bomb; nothing was unpacked` };
+  }
+  return null;
+};
 
 /** The first reason not to unpack this zip, or null. */
 export const zipBombFault = (zip: Uint8Array): BundleFault | null => {
@@ -43,13 +52,8 @@ export const zipBombFault = (zip: Uint8Array): BundleFault | null => {
   let declared = 0;
   const names = new Set<string>();
   for (const entry of directory.entries) {
-    if (names.has(entry.name)) return repeated(entry.name);
-    names.add(entry.name);
-    const tooLarge = textTooLarge(entry.name, entry.size);
-    if (tooLarge) return tooLarge;
-    if (entry.size > GRACE && entry.size > MAX_RATIO * entry.compressedSize) {
-      return { file: entry.name, line: null, message: `would unpack to ${mb(entry.size)} from ${entry.compressedSize} bytes, more than ${MAX_RATIO} times its packed size: the mark of a zip bomb; nothing was unpacked` };
-    }
+    const fault = entryFault(names, entry.name, entry.size, entry.compressedSize);
+    if (fault) return fault;
     declared += entry.size;
   }
   if (declared > MAX_UNPACKED_BYTES) {
@@ -72,19 +76,16 @@ export const unzipBundle = (zip: Uint8Array): Unzipped => {
   let fault: BundleFault | null = null;
   let total = 0;
   const names = new Set<string>();
+  const limit = Math.min(MAX_UNPACKED_BYTES, MAX_RATIO * zip.length + GRACE);
   try {
     const entries = unzipSync(zip, {
       filter: (f) => {
+        // what unpacking makes: a copy of a stored entry, a buffer of the declared size for a deflated one
         const cost = f.compression === 0 ? f.size : f.originalSize;
-        if (names.has(f.name)) fault = repeated(f.name);
-        names.add(f.name);
-        fault ??= textTooLarge(f.name, cost);
-        if (!fault && f.compression !== 0 && f.originalSize > GRACE && f.originalSize > MAX_RATIO * f.size) {
-          fault = { file: f.name, line: null, message: `would unpack to ${mb(f.originalSize)} from ${f.size} bytes, more than ${MAX_RATIO} times its packed size: the mark of a zip bomb; nothing was unpacked` };
-        }
+        fault = entryFault(names, f.name, cost, f.size);
         total += cost;
-        if (!fault && (total > MAX_UNPACKED_BYTES || total > MAX_RATIO * zip.length + GRACE)) {
-          fault = { file: '(bundle)', line: null, message: `its entries as the unzipper reads them would unpack to more than ${mb(Math.min(MAX_UNPACKED_BYTES, MAX_RATIO * zip.length + GRACE))}: the mark of a zip bomb or a damaged directory; refused` };
+        if (!fault && total > limit) {
+          fault = { file: '(bundle)', line: null, message: `its entries as the unzipper reads them would unpack to more than ${mb(limit)}: the mark of a zip bomb or a damaged directory; refused` };
         }
         if (fault) throw new Refused();
         return true;

@@ -30,18 +30,10 @@ export type StepOptions = { seed: number; boot: number; covariance?: CovarianceM
 
 /**
  * Hands the columns to a second worker that computes the reader averages' bootstrap
- * (`bootstrapOfColumns`) on the other core while this one computes the estimates and the curves;
- * when given, no `complete` step is sent here: the page puts the two together (`completeReport`).
+ * (`readerAveragedOfColumns`) on the other core while this one computes the estimates and the curves;
+ * when given, no `complete` step is sent here: the page puts the two together (`withReaderAveraged`).
  */
 export type BootstrapElsewhere = (cols: ReadColumns) => void;
-
-/** The second worker's part: the reader-averaged figures with the bootstrap, as the one-worker path computes them. */
-export const bootstrapOfColumns = (cols: ReadColumns, options: StepOptions) =>
-  readerAveragedOfColumns(cols, { seed: options.seed, boot: options.boot, covariance: options.covariance });
-
-/** The complete report from the estimates' report and the second worker's reader averages: the same as the `complete` step's. */
-export const completeReport = (estimates: AnalysisReport, averaged: ReturnType<typeof bootstrapOfColumns>, boot: number): AnalysisReport =>
-  withReaderAveraged(estimates, averaged, boot);
 
 /** Analyses `rows` (at least one), sending each step to `send` as soon as it is ready. Throws what analyzeReads throws. */
 export const analyseInSteps = (
@@ -57,5 +49,5 @@ export const analyseInSteps = (
   const first = analyzeColumns(cols, { seed, boot: 0, covariance });
   send({ step: 'estimates', report: first });
   send({ step: 'roc', roc: rocCurves(rows) });
-  if (!elsewhere) send({ step: 'complete', report: completeReport(first, bootstrapOfColumns(cols, options), boot), roc: null });
+  if (!elsewhere) send({ step: 'complete', report: withReaderAveraged(first, readerAveragedOfColumns(cols, options), boot), roc: null });
 };

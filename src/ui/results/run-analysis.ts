@@ -4,7 +4,8 @@ import type { ReadColumns } from '../../analysis/read-columns';
 import type { FindingRoc } from '../../analysis/roc-curves';
 import type { ReadRow } from '../../core/read-log';
 import type { HeedDb } from '../../store/db';
-import { completeReport, type AnalysisStep } from './analysis-steps';
+import { withReaderAveraged } from '../../analysis/engine';
+import type { AnalysisStep } from './analysis-steps';
 import type { BootstrapRequest } from './bootstrap-worker';
 import type { AnalysisRequest } from './analysis-worker';
 
@@ -53,7 +54,7 @@ export const inWorker = (request: AnalysisRequest, onEstimates?: OnEstimates, ca
     let curves: FindingRoc[] | null = null;
     let averaged: ReaderAveraged[] | null = null;
     const finishWhenAllIn = () => {
-      if (early && curves && averaged) resolve({ report: completeReport(early, averaged, request.boot), roc: curves });
+      if (early && curves && averaged) resolve({ report: withReaderAveraged(early, averaged, request.boot), roc: curves });
     };
     const fail = (message: string) => {
       worker.terminate();

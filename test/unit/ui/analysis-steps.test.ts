@@ -1,9 +1,9 @@
 // The results page's analysis in two steps (src/ui/results/analysis-steps.ts): on a large log the
 // estimates come first (boot = 0), then the complete report, which must be analyzeReads' own.
-import { analyzeReads } from '../../../src/analysis/engine';
+import { analyzeReads, readerAveragedOfColumns, withReaderAveraged } from '../../../src/analysis/engine';
 import { rocCurves } from '../../../src/analysis/roc-curves';
 import type { ReadColumns } from '../../../src/analysis/read-columns';
-import { analyseInSteps, bootstrapOfColumns, completeReport, ESTIMATES_FIRST_FROM, type AnalysisStep } from '../../../src/ui/results/analysis-steps';
+import { analyseInSteps, ESTIMATES_FIRST_FROM, type AnalysisStep } from '../../../src/ui/results/analysis-steps';
 import { simulateReadRows } from '../../../bench/simulate-log';
 
 const rows = simulateReadRows({ seed: 9, readers: 5, cases: 60, practiceCases: 2 });
@@ -44,8 +44,8 @@ describe('the results page analysis in steps', () => {
     analyseInSteps(rows, { seed: 4, boot: 200 }, (s) => { sent.push(s); order.push(s.step); }, rows.length, (cols) => { copy = structuredClone(cols); order.push('columns'); });
     expect(order).toEqual(['columns', 'estimates', 'roc']);
     const estimates = sent[0] as Extract<AnalysisStep, { step: 'estimates' }>;
-    const averaged = bootstrapOfColumns(copy as unknown as ReadColumns, { seed: 4, boot: 200 });
-    expect(JSON.stringify(completeReport(estimates.report, averaged, 200))).toBe(JSON.stringify(analyzeReads(rows, { seed: 4, boot: 200 })));
+    const averaged = readerAveragedOfColumns(copy as unknown as ReadColumns, { seed: 4, boot: 200 });
+    expect(JSON.stringify(withReaderAveraged(estimates.report, averaged, 200))).toBe(JSON.stringify(analyzeReads(rows, { seed: 4, boot: 200 })));
   });
 });
 
